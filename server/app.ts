@@ -1,0 +1,49 @@
+import { existsSync } from 'node:fs'
+import path from 'node:path'
+import express, { type Express } from 'express'
+import type { DataSource } from 'typeorm'
+import { createPassport } from './auth/passport'
+import { requireSignIn } from './auth/require-role'
+import { createSessionMiddleware } from './auth/session'
+import type { AppConfig } from './config/env'
+import { errorHandler, notFoundApi } from './errors/error-handler'
+import { authRoutes } from './routes/auth.routes'
+import { healthRoutes } from './routes/health.routes'
+import { partRoutes } from './routes/parts.routes'
+import { userRoutes } from './routes/users.routes'
+import { createServices } from './services'
+
+export type AppOptions = {
+  config: AppConfig
+  dataSource: DataSource
+  version: string
+  /** Folder of the built client; served with a history fallback when it exists. */
+  clientDir?: string
+}
+
+/** Builds the Express app without listening, so tests can drive it with supertest. */
+export async function createApp({ config, dataSource, version, clientDir }: AppOptions): Promise<Express> {
+  const services = createServices(dataSource, config)
+  const auth = createPassport(services.users)
+  const app = express()
+  app.disable('x-powered-by')
+  app.set('trust proxy', 'loopback')
+  app.use(express.json({ limit: '1mb' }))
+  app.use('/api', await createSessionMiddleware(dataSource, { secret: config.sessionSecret }))
+  app.use('/api', auth.initialize(), auth.session())
+
+  const api = express.Router()
+  api.use(healthRoutes(version))
+  api.use(authRoutes(auth))
+  api.use(partRoutes(services.parts))
+  api.use(userRoutes(services.users))
+  api.use(requireSignIn, notFoundApi)
+  app.use('/api', api)
+
+  if (clientDir && existsSync(path.join(clientDir, 'index.html'))) {
+    app.use(express.static(clientDir, { index: false, maxAge: '1h' }))
+    app.get(/^\/(?!api\/).*/, (_req, res) => res.sendFile(path.join(clientDir, 'index.html')))
+  }
+  app.use(errorHandler)
+  return app
+}

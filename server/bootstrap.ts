@@ -1,0 +1,30 @@
+import { readFileSync } from 'node:fs'
+import path from 'node:path'
+import { fileURLToPath } from 'node:url'
+import type { DataSource } from 'typeorm'
+import type { AppConfig } from './config/env'
+import { openDatabase } from './db/data-source'
+import { DEMO_PASSWORD, seedDemo } from './demo/seed'
+import { UserService } from './services/user.service'
+
+export const projectRoot = path.resolve(path.dirname(fileURLToPath(import.meta.url)), '..')
+
+export function readVersion(): string {
+  const pkg = JSON.parse(readFileSync(path.join(projectRoot, 'package.json'), 'utf8')) as { version: string }
+  return pkg.version
+}
+
+export type Prepared = { dataSource: DataSource; seeded: boolean; demoAccountsLeft: string[] }
+
+/** Opens and migrates the database, then seeds the demo scenario when asked and the database is empty. */
+export async function prepareDatabase(config: AppConfig): Promise<Prepared> {
+  const dbPath = config.dbPath === ':memory:' ? ':memory:' : path.resolve(projectRoot, config.dbPath)
+  const dataSource = await openDatabase(dbPath)
+  const users = new UserService(dataSource)
+  const seeded = config.demo ? await seedDemo(dataSource, users, path.join(projectRoot, 'data', 'demo')) : false
+  if (config.firstAdmin && (await users.count()) === 0) {
+    await users.create({ ...config.firstAdmin, name: 'Administrator', role: 'admin' })
+  }
+  const demoAccountsLeft = (await users.withPassword(DEMO_PASSWORD)).map((user) => user.email)
+  return { dataSource, seeded, demoAccountsLeft }
+}

@@ -1,0 +1,55 @@
+import { z } from 'zod'
+
+const flag = z
+  .enum(['0', '1', 'true', 'false', 'on', 'off'], { error: () => 'Use 1 or 0.' })
+  .transform((value) => ['1', 'true', 'on'].includes(value))
+
+const envSchema = z.object({
+  NODE_ENV: z.enum(['development', 'production', 'test']).default('development'),
+  PORT: z.coerce.number().int().min(0).max(65535).default(3000),
+  HOST: z.string().default('0.0.0.0'),
+  FITWRIGHT_DB_PATH: z.string().min(1).default('data/fitwright.sqlite'),
+  FITWRIGHT_DEMO: flag.default(true),
+  FITWRIGHT_SESSION_SECRET: z.string().min(16, 'Use at least 16 characters.').optional(),
+  FITWRIGHT_ADMIN_EMAIL: z.email().optional(),
+  FITWRIGHT_ADMIN_PASSWORD: z.string().min(10, 'Use at least 10 characters.').optional(),
+  FITWRIGHT_IMPORT_MAX_BYTES: z.coerce.number().int().positive().default(50 * 1024 * 1024),
+  FITWRIGHT_IMPORT_MAX_ROWS: z.coerce.number().int().positive().default(500_000),
+})
+
+export type AppConfig = {
+  env: 'development' | 'production' | 'test'
+  port: number
+  host: string
+  dbPath: string
+  demo: boolean
+  sessionSecret?: string
+  importMaxBytes: number
+  importMaxRows: number
+  /** First administrator, created when the database has no users (for use without the demo). */
+  firstAdmin?: { email: string; password: string }
+}
+
+/** Reads the environment once at start-up; a bad value stops start-up with its name. */
+export function loadConfig(env: NodeJS.ProcessEnv = process.env): AppConfig {
+  const parsed = envSchema.safeParse(env)
+  if (!parsed.success) {
+    const problems = parsed.error.issues.map((issue) => `${issue.path.join('.')}: ${issue.message}`)
+    throw new Error(`Invalid configuration:\n  ${problems.join('\n  ')}`)
+  }
+  const value = parsed.data
+  return {
+    env: value.NODE_ENV,
+    port: value.PORT,
+    host: value.HOST,
+    dbPath: value.FITWRIGHT_DB_PATH,
+    demo: value.FITWRIGHT_DEMO,
+    sessionSecret: value.FITWRIGHT_SESSION_SECRET,
+    importMaxBytes: value.FITWRIGHT_IMPORT_MAX_BYTES,
+    importMaxRows: value.FITWRIGHT_IMPORT_MAX_ROWS,
+    firstAdmin:
+      value.FITWRIGHT_ADMIN_EMAIL && value.FITWRIGHT_ADMIN_PASSWORD
+        ? { email: value.FITWRIGHT_ADMIN_EMAIL, password: value.FITWRIGHT_ADMIN_PASSWORD }
+        : undefined,
+  }
+}

@@ -1,0 +1,7 @@
+import { AppSettingEntity } from '../entities/app-setting.entity'
+import { PartMarkEntity } from '../entities/part-mark.entity'
+import { PartEntity } from '../entities/part.entity'
+import { SessionEntity } from '../entities/session.entity'
+import { UserEntity } from '../entities/user.entity'
+
+export const entities = [UserEntity, SessionEntity, AppSettingEntity, PartEntity, PartMarkEntity]

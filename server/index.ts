@@ -1,0 +1,35 @@
+import 'reflect-metadata'
+import path from 'node:path'
+import { createApp } from './app'
+import { prepareDatabase, projectRoot, readVersion } from './bootstrap'
+import { loadConfig } from './config/env'
+
+const config = loadConfig()
+const { dataSource, seeded, demoAccountsLeft } = await prepareDatabase(config)
+if (seeded) console.log('Seeded the demo scenario into the empty database.')
+if (demoAccountsLeft.length > 0) {
+  console.warn(
+    `WARNING: demo accounts with the published demo password are active (${demoAccountsLeft.join(', ')}). ` +
+      'They are for trying Fitwright only; remove them or change their passwords before real use.',
+  )
+}
+const app = await createApp({
+  config,
+  dataSource,
+  version: readVersion(),
+  clientDir: config.env === 'production' ? path.join(projectRoot, 'dist') : undefined,
+})
+const server = app.listen(config.port, config.host, () => {
+  const address = server.address()
+  const port = typeof address === 'object' && address ? address.port : config.port
+  const where = config.env === 'production' ? 'Fitwright is running' : 'Fitwright API is running (client: npm run dev)'
+  console.log(`${where} at http://localhost:${port}/`)
+})
+
+function shutdown() {
+  server.close(() => {
+    void dataSource.destroy().finally(() => process.exit(0))
+  })
+}
+process.on('SIGINT', shutdown)
+process.on('SIGTERM', shutdown)

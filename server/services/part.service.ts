@@ -1,0 +1,90 @@
+import type { DataSource, Repository } from 'typeorm'
+import { In } from 'typeorm'
+import type { Part, PartList, PartListQuery } from '../../shared/schemas/part'
+import { normalisePartCode } from '../../shared/schemas/part'
+import { PartMarkEntity } from '../entities/part-mark.entity'
+import { PartEntity } from '../entities/part.entity'
+import { AppError } from '../errors/app-error'
+import { toPart } from './part.mapper'
+
+function escapeLike(value: string): string {
+  return value.replace(/[\\%_]/g, (c) => `\\${c}`)
+}
+
+export class PartService {
+  private readonly parts: Repository<PartEntity>
+
+  constructor(private readonly dataSource: DataSource) {
+    this.parts = dataSource.getRepository(PartEntity)
+  }
+
+  /**
+   * Search by part number, casting or stamped mark, superseded number, name or
+   * family. Exact and prefix matches on a number or mark rank first, because at
+   * the counter the customer usually holds the part.
+   */
+  async list(query: PartListQuery): Promise<PartList> {
+    const where: string[] = []
+    const params: unknown[] = []
+    if (query.kind) {
+      where.push('p.kind = ?')
+      params.push(query.kind)
+    }
+    const text = query.q.trim()
+    const key = normalisePartCode(text)
+    let rank = '0'
+    const rankParams: unknown[] = []
+    if (text) {
+      const like = `%${escapeLike(text)}%`
+      const keyLike = `%${escapeLike(key)}%`
+      const matches = [`p.name LIKE ? ESCAPE '\\'`, `p.family LIKE ? ESCAPE '\\'`]
+      params.push(like, like)
+      if (key) {
+        matches.push(`p.partKey LIKE ? ESCAPE '\\'`, `p.id IN (SELECT partId FROM part_mark WHERE valueKey LIKE ? ESCAPE '\\')`)
+        params.push(keyLike, keyLike)
+        rank = `CASE WHEN p.partKey = ? OR p.id IN (SELECT partId FROM part_mark WHERE valueKey = ?) THEN 0
+                     WHEN p.partKey LIKE ? ESCAPE '\\' THEN 1 ELSE 2 END`
+        rankParams.push(key, key, `${escapeLike(key)}%`)
+      }
+      where.push(`(${matches.join(' OR ')})`)
+    }
+    const whereSql = where.length ? `WHERE ${where.join(' AND ')}` : ''
+    const [{ total }] = (await this.dataSource.query(`SELECT COUNT(*) AS total FROM part p ${whereSql}`, params)) as [
+      { total: number },
+    ]
+    const rows = (await this.dataSource.query(
+      `SELECT p.id AS id, ${rank} AS rank FROM part p ${whereSql} ORDER BY rank, p.partNumber LIMIT ? OFFSET ?`,
+      [...rankParams, ...params, query.pageSize, (query.page - 1) * query.pageSize],
+    )) as { id: number }[]
+    return { items: await this.byIds(rows.map((row) => row.id)), total }
+  }
+
+  /** Parts by id, with their marks, in the order of the ids given. */
+  async byIds(ids: number[]): Promise<Part[]> {
+    if (ids.length === 0) return []
+    const entities = await this.parts.find({ where: { id: In(ids) }, relations: { marks: true } })
+    const byId = new Map(entities.map((entity) => [entity.id, entity]))
+    return ids.flatMap((id) => {
+      const entity = byId.get(id)
+      return entity ? [toPart(entity)] : []
+    })
+  }
+
+  /** A part by its number, any of its marks or a superseded number, as typed at the counter. */
+  async findEntity(code: string): Promise<PartEntity | null> {
+    const exact = await this.parts.findOne({ where: { partNumber: code }, relations: { marks: true } })
+    if (exact) return exact
+    const key = normalisePartCode(code)
+    if (!key) return null
+    const byKey = await this.parts.findOne({ where: { partKey: key }, relations: { marks: true } })
+    if (byKey) return byKey
+    const mark = await this.dataSource.getRepository(PartMarkEntity).findOneBy({ valueKey: key })
+    return mark ? this.parts.findOne({ where: { id: mark.partId }, relations: { marks: true } }) : null
+  }
+
+  async get(code: string): Promise<Part> {
+    const entity = await this.findEntity(code)
+    if (!entity) throw AppError.notFound(`No part with number or mark "${code}".`)
+    return toPart(entity)
+  }
+}

@@ -1,0 +1,47 @@
+import { z } from 'zod'
+
+export const ROLES = ['admin', 'editor', 'counter', 'tech'] as const
+export const roleSchema = z.enum(ROLES)
+export type Role = z.infer<typeof roleSchema>
+
+export const loginSchema = z.object({
+  email: z.string().trim().toLowerCase().pipe(z.email('Enter a valid e-mail address.')),
+  password: z.string().min(1, 'Enter your password.').max(200),
+})
+export type LoginInput = z.infer<typeof loginSchema>
+
+export const userSchema = z.object({
+  id: z.number().int(),
+  email: z.string(),
+  name: z.string(),
+  role: roleSchema,
+})
+export type User = z.infer<typeof userSchema>
+
+export const ROLE_LABELS: Record<Role, string> = {
+  admin: 'Administrator',
+  editor: 'Catalogue editor',
+  counter: 'Parts counter',
+  tech: 'Technician',
+}
+
+const password = z.string().min(10, 'Use at least 10 characters.').max(200)
+
+export const userCreateSchema = z.object({
+  email: z.string().trim().toLowerCase().pipe(z.email('Enter a valid e-mail address.')),
+  name: z.string().trim().min(1, 'Name is required.').max(120),
+  role: roleSchema,
+  password,
+})
+export type UserCreateInput = z.infer<typeof userCreateSchema>
+
+export const userUpdateSchema = z
+  .object({
+    name: z.string().trim().min(1, 'Name is required.').max(120).optional(),
+    role: roleSchema.optional(),
+    password: password.optional(),
+  })
+  .refine((value) => Object.keys(value).length > 0, 'Change at least one of name, role or password.')
+export type UserUpdateInput = z.infer<typeof userUpdateSchema>
+
+export const userListSchema = z.array(userSchema)

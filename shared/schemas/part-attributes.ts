@@ -1,0 +1,125 @@
+import { z } from 'zod'
+import type { PartKind } from './part-kinds'
+
+/*
+ * Typed attributes per part kind. Every field is optional (catalogue data is
+ * rarely complete); a value that is given must have the right type and range.
+ * Attributes not known for a kind are kept as text.
+ */
+const mm = z.number().positive()
+const count = z.number().int().positive()
+const code = z.string().trim().min(1).max(40)
+const unknownAttribute = z.union([z.string(), z.number(), z.boolean()])
+
+/** ISO metric thread notation, e.g. M11x1.5 (diameter x pitch, mm). */
+export const metricThreadSchema = z
+  .string()
+  .regex(/^M\d+(\.\d+)?x\d+(\.\d+)?$/, 'Thread must read like M11x1.5 (diameter x pitch in mm).')
+
+export const TOOTH_PROFILES = ['trapezoidal', 'curvilinear', 'modified-curvilinear'] as const
+const toothProfile = z.enum(TOOTH_PROFILES)
+const toothed = { teeth: count, pitchMm: mm, profile: toothProfile, widthMm: mm }
+
+export const MATERIALS = ['cast-iron', 'aluminium', 'steel'] as const
+export const DIAGNOSTIC_GENERATIONS = ['pre-obd', 'obd-i', 'obd-ii'] as const
+
+export const attributeShapes = {
+  block: {
+    cylinders: z.number().int().min(1).max(16),
+    boreMm: mm,
+    strokeMm: mm,
+    deckClearanceMm: z.number().min(-5).max(5),
+    pistonVolumeCc: z.number().min(-50).max(50),
+    headBoltPattern: code,
+    headBoltThread: metricThreadSchema,
+    headBoltCount: count,
+    tappedDepthMm: mm,
+    material: z.enum(MATERIALS),
+    oilRestrictor: z.boolean(),
+    crankToDeckMm: mm,
+    tensionerRangeMm: z.number().min(0).max(20),
+    crankSnout: code,
+  },
+  head: {
+    chamberCc: mm,
+    headBoltPattern: code,
+    boltBossHeightMm: mm,
+    distributorMount: code,
+    valveLift: z.enum(['fixed', 'variable']),
+    oilRestrictor: z.boolean(),
+    intakePortPattern: code,
+    exhaustPortPattern: code,
+    camNose: code,
+    camAboveDeckMm: mm,
+    material: z.enum(MATERIALS),
+  },
+  'head-gasket': {
+    boreMm: mm,
+    compressedThicknessMm: mm,
+    headBoltPattern: code,
+    construction: z.enum(['multi-layer-steel', 'composite', 'copper']),
+  },
+  'head-bolt': {
+    thread: metricThreadSchema,
+    lengthMm: mm,
+    torqueToYield: z.boolean(),
+    setQuantity: count,
+    washerThicknessMm: z.number().min(0).max(20),
+  },
+  distributor: {
+    mountPattern: code,
+    capStyle: code,
+    internals: code,
+    internalsTransferable: z.boolean(),
+  },
+  'ignition-leads': { capStyle: code, cylinders: count },
+  ecu: {
+    diagnosticGeneration: z.enum(DIAGNOSTIC_GENERATIONS),
+    variableValveLift: z.boolean(),
+    vvlLampWhenAbsent: z.enum(['off', 'on']),
+    connector: code,
+    injectorImpedance: z.enum(['high', 'low']),
+  },
+  harness: { connector: code, vvlLeads: z.boolean(), injectorPlug: code },
+  'intake-manifold': { portPattern: code, fuelRailMount: code },
+  'intake-gasket': { portPattern: code },
+  'exhaust-manifold': { portPattern: code },
+  'exhaust-gasket': { portPattern: code },
+  'fuel-rail': { fuelRailMount: code, injectorCupMm: mm, outlets: count, pressureBar: mm },
+  injector: {
+    flowCcMin: mm,
+    ratedPressureBar: mm,
+    sealMm: mm,
+    impedance: z.enum(['high', 'low']),
+    plug: code,
+  },
+  'cam-gear': { ...toothed, camNose: code },
+  'timing-belt': toothed,
+  'crank-pulley': { ...toothed, crankSnout: code },
+  'oil-restrictor': { orificeMm: mm },
+  other: { thicknessMm: mm, innerDiameterMm: mm, quantityPerPack: count },
+} satisfies Record<PartKind, z.ZodRawShape>
+
+function attributesSchema<S extends z.ZodRawShape>(shape: S) {
+  return z.object(shape).partial().catchall(unknownAttribute)
+}
+
+export const partAttributeSchemas = Object.fromEntries(
+  Object.entries(attributeShapes).map(([kind, shape]) => [kind, attributesSchema(shape)]),
+) as { [K in PartKind]: ReturnType<typeof attributesSchema<(typeof attributeShapes)[K]>> }
+
+export type PartAttributes = Record<string, string | number | boolean>
+
+/** Names and types of the attributes known for a kind (for CSV typing and forms). */
+export function knownAttributes(kind: PartKind): { name: string; type: 'number' | 'boolean' | 'text' }[] {
+  return Object.entries(attributeShapes[kind] as z.ZodRawShape).map(([name, schema]) => ({
+    name,
+    type: schema instanceof z.ZodNumber ? 'number' : schema instanceof z.ZodBoolean ? 'boolean' : 'text',
+  }))
+}
+
+export function parseMetricThread(thread: string): { diameterMm: number; pitchMm: number } | null {
+  const match = /^M(\d+(?:\.\d+)?)x(\d+(?:\.\d+)?)$/.exec(thread)
+  if (!match) return null
+  return { diameterMm: Number(match[1]), pitchMm: Number(match[2]) }
+}

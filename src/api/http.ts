@@ -1,0 +1,88 @@
+import type { z } from 'zod'
+import { errorResponseSchema, type FieldError } from '@shared/schemas/errors'
+
+/** Every failed API call arrives as this one error type. */
+export class ApiError extends Error {
+  constructor(
+    readonly status: number,
+    readonly code: string,
+    message: string,
+    readonly details: FieldError[] = [],
+  ) {
+    super(message)
+    this.name = 'ApiError'
+  }
+
+  /** The message for one form field, if the server named it. */
+  fieldMessage(path: string): string | undefined {
+    return this.details.find((detail) => detail.path === path)?.message
+  }
+}
+
+type Query = Record<string, string | number | boolean | undefined | null>
+type RequestOptions = { query?: Query; body?: unknown; signal?: AbortSignal }
+
+let onUnauthorized: (() => void) | null = null
+/** One place decides what a 401 means for the app (the session store sends the user to sign-in). */
+export function setUnauthorizedHandler(handler: () => void) {
+  onUnauthorized = handler
+}
+
+export function apiUrl(path: string, query?: Query): string {
+  const params = new URLSearchParams()
+  for (const [key, value] of Object.entries(query ?? {})) {
+    if (value !== undefined && value !== null && value !== '') params.set(key, String(value))
+  }
+  const search = params.toString()
+  return `/api${path}${search ? `?${search}` : ''}`
+}
+
+async function toApiError(response: Response): Promise<ApiError> {
+  const body: unknown = await response.json().catch(() => null)
+  const parsed = errorResponseSchema.safeParse(body)
+  if (parsed.success) {
+    const { code, message, details } = parsed.data.error
+    return new ApiError(response.status, code, message, details)
+  }
+  return new ApiError(response.status, 'http_error', `The server answered ${response.status}.`)
+}
+
+async function send(method: string, path: string, options: RequestOptions): Promise<Response> {
+  const isForm = options.body instanceof FormData
+  let response: Response
+  try {
+    response = await fetch(apiUrl(path, options.query), {
+      method,
+      credentials: 'same-origin',
+      headers: options.body === undefined || isForm ? undefined : { 'Content-Type': 'application/json' },
+      body: options.body === undefined ? undefined : isForm ? (options.body as FormData) : JSON.stringify(options.body),
+      signal: options.signal,
+    })
+  } catch (cause) {
+    if (cause instanceof DOMException && cause.name === 'AbortError') throw cause
+    throw new ApiError(0, 'network', 'Cannot reach the Fitwright server. Check the connection and try again.')
+  }
+  if (!response.ok) {
+    const error = await toApiError(response)
+    if (response.status === 401 && !path.startsWith('/auth/')) onUnauthorized?.()
+    throw error
+  }
+  return response
+}
+
+/** A JSON call whose answer is checked against the shared schema. */
+export async function request<S extends z.ZodType>(
+  method: 'GET' | 'POST' | 'PUT' | 'PATCH' | 'DELETE',
+  path: string,
+  schema: S,
+  options: RequestOptions = {},
+): Promise<z.infer<S>> {
+  const response = await send(method, path, options)
+  const body: unknown = response.status === 204 ? null : await response.json()
+  return schema.parse(body)
+}
+
+/** A call whose answer carries no body worth reading (204). */
+export async function requestVoid(method: 'POST' | 'DELETE' | 'PUT', path: string, options: RequestOptions = {}) {
+  await send(method, path, options)
+}

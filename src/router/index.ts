@@ -1,0 +1,76 @@
+import { createRouter, createWebHistory, type RouteLocationNormalized } from 'vue-router'
+import type { Permission } from '@shared/permissions'
+import { setUnauthorizedHandler } from '@/api/http'
+import { useSessionStore } from '@/stores/session'
+
+declare module 'vue-router' {
+  interface RouteMeta {
+    /** Open without a session (the sign-in page). */
+    public?: boolean
+    permission?: Permission
+    title?: string
+  }
+}
+
+const router = createRouter({
+  history: createWebHistory(import.meta.env.BASE_URL),
+  routes: [
+    { path: '/sign-in', name: 'sign-in', component: () => import('@/views/SignInView.vue'), meta: { public: true, title: 'Sign in' } },
+    {
+      path: '/',
+      component: () => import('@/layouts/AppLayout.vue'),
+      children: [
+        { path: '', name: 'home', redirect: { name: 'parts' } },
+        {
+          path: 'parts',
+          name: 'parts',
+          component: () => import('@/views/PartsCatalogueView.vue'),
+          meta: { permission: 'catalogue.read', title: 'Parts catalogue' },
+        },
+        {
+          path: 'users',
+          name: 'users',
+          component: () => import('@/views/UsersView.vue'),
+          meta: { permission: 'users.manage', title: 'Users and roles' },
+        },
+        {
+          path: 'forbidden',
+          name: 'forbidden',
+          component: () => import('@/views/ForbiddenView.vue'),
+          meta: { title: 'Not for your role' },
+        },
+        {
+          path: ':pathMatch(.*)*',
+          name: 'not-found',
+          component: () => import('@/views/NotFoundView.vue'),
+          meta: { title: 'Not found' },
+        },
+      ],
+    },
+  ],
+})
+
+function signInRoute(to: RouteLocationNormalized) {
+  return { name: 'sign-in', query: to.fullPath !== '/' ? { redirect: to.fullPath } : {} }
+}
+
+router.beforeEach(async (to) => {
+  const session = useSessionStore()
+  await session.restore()
+  if (to.meta.public) return session.isSignedIn && to.name === 'sign-in' ? { name: 'home' } : true
+  if (!session.isSignedIn) return signInRoute(to)
+  if (to.meta.permission && !session.allows(to.meta.permission)) return { name: 'forbidden' }
+  return true
+})
+
+router.afterEach((to) => {
+  document.title = to.meta.title ? `${to.meta.title} · Fitwright` : 'Fitwright'
+})
+
+setUnauthorizedHandler(() => {
+  useSessionStore().expire()
+  const current = router.currentRoute.value
+  if (!current.meta.public) void router.push(signInRoute(current))
+})
+
+export default router

@@ -1,0 +1,62 @@
+import type { Browser, Page } from 'playwright-core'
+import { afterAll, beforeAll, describe, expect, it } from 'vitest'
+import { browserAvailable, launchBrowser, saveScreenshot, signInAs, startServer, type RunningServer } from '../helpers/browser'
+
+const run = browserAvailable()
+
+describe.skipIf(!run)('catalogue in the browser', () => {
+  let server: RunningServer
+  let browser: Browser
+  let page: Page
+  const consoleErrors: string[] = []
+
+  beforeAll(async () => {
+    server = await startServer()
+    browser = await launchBrowser()
+    page = await browser.newPage({ viewport: { width: 1280, height: 860 } })
+    page.on('console', (message) => {
+      if (message.type() === 'error') consoleErrors.push(message.text())
+    })
+  })
+  afterAll(async () => {
+    await browser?.close()
+    await server?.stop()
+  })
+
+  it('sends a visitor without a session to sign-in', async () => {
+    await page.goto(`${server.url}/parts`)
+    await page.waitForURL(/\/sign-in\?redirect=/)
+    expect(await page.getByRole('heading', { name: 'Sign in' }).isVisible()).toBe(true)
+    await saveScreenshot(page, 'sign-in')
+  })
+
+  it('shows a clear message for a wrong password', async () => {
+    await page.getByLabel('E-mail').fill('counter@fitwright.test')
+    await page.getByLabel('Password').fill('not-the-password')
+    await page.getByRole('button', { name: 'Sign in' }).click()
+    await expect.poll(() => page.getByRole('alert').textContent()).toContain('E-mail or password is not right')
+  })
+
+  it('lets a counter sign in, search a part number and see it in the table', async () => {
+    await signInAs(page, server.url, 'counter')
+    await page.waitForURL(/\/parts/)
+    await page.getByLabel('Search').fill('tm-hd-2000')
+    await page.waitForURL(/q=tm-hd-2000/)
+    const table = page.getByRole('table')
+    await expect.poll(() => table.locator('tbody tr').first().textContent()).toContain('TM-HD-2000')
+    expect(await table.textContent()).toContain('TK20V cylinder head')
+    await saveScreenshot(page, 'catalogue-search')
+  })
+
+  it('finds a part by its casting mark and shows only the navigation a counter may use', async () => {
+    await page.getByLabel('Search').fill('H18-2207B')
+    await expect.poll(() => page.getByRole('table').locator('tbody tr').first().textContent()).toContain('TM-HD-1810')
+    const nav = page.getByRole('navigation', { name: 'Main' })
+    expect(await nav.getByRole('link', { name: 'Catalogue' }).isVisible()).toBe(true)
+    expect(await nav.getByRole('link', { name: 'Users' }).count()).toBe(0)
+  })
+
+  it('logged no console errors', () => {
+    expect(consoleErrors.filter((text) => !text.includes('401'))).toEqual([])
+  })
+})
