@@ -11,19 +11,23 @@ import { authRoutes } from './routes/auth.routes'
 import { healthRoutes } from './routes/health.routes'
 import { partRoutes } from './routes/parts.routes'
 import { userRoutes } from './routes/users.routes'
+import { buildRoutes } from './routes/builds.routes'
+import { fitmentRoutes } from './routes/fitment.routes'
+import type { RuleBook } from './reasoning/rule-book'
 import { createServices } from './services'
 
 export type AppOptions = {
   config: AppConfig
   dataSource: DataSource
   version: string
+  rules: RuleBook
   /** Folder of the built client; served with a history fallback when it exists. */
   clientDir?: string
 }
 
 /** Builds the Express app without listening, so tests can drive it with supertest. */
-export async function createApp({ config, dataSource, version, clientDir }: AppOptions): Promise<Express> {
-  const services = createServices(dataSource, config)
+export async function createApp({ config, dataSource, version, rules, clientDir }: AppOptions): Promise<Express> {
+  const services = createServices(dataSource, config, rules)
   const auth = createPassport(services.users)
   const app = express()
   app.disable('x-powered-by')
@@ -36,6 +40,8 @@ export async function createApp({ config, dataSource, version, clientDir }: AppO
   api.use(healthRoutes(version))
   api.use(authRoutes(auth))
   api.use(partRoutes(services.parts))
+  api.use(fitmentRoutes(services))
+  api.use(buildRoutes(services))
   api.use(userRoutes(services.users))
   api.use(requireSignIn, notFoundApi)
   app.use('/api', api)

@@ -6,6 +6,9 @@ import type { AppConfig } from './config/env'
 import { openDatabase } from './db/data-source'
 import { DEMO_PASSWORD, seedDemo } from './demo/seed'
 import { UserService } from './services/user.service'
+import { ModificationService } from './services/modification.service'
+import { RuleBook } from './reasoning/rule-book'
+import { loadRules } from './reasoning/rule-loader'
 
 export const projectRoot = path.resolve(path.dirname(fileURLToPath(import.meta.url)), '..')
 
@@ -14,17 +17,20 @@ export function readVersion(): string {
   return pkg.version
 }
 
-export type Prepared = { dataSource: DataSource; seeded: boolean; demoAccountsLeft: string[] }
+export type Prepared = { dataSource: DataSource; rules: RuleBook; seeded: boolean; demoAccountsLeft: string[] }
 
 /** Opens and migrates the database, then seeds the demo scenario when asked and the database is empty. */
 export async function prepareDatabase(config: AppConfig): Promise<Prepared> {
+  // Rules first: a broken rule file stops start-up before anything is written.
+  const rules = new RuleBook(loadRules(path.join(projectRoot, 'rules')))
   const dbPath = config.dbPath === ':memory:' ? ':memory:' : path.resolve(projectRoot, config.dbPath)
   const dataSource = await openDatabase(dbPath)
   const users = new UserService(dataSource)
+  await new ModificationService(dataSource).syncShipped(rules.loaded.modifications)
   const seeded = config.demo ? await seedDemo(dataSource, users, path.join(projectRoot, 'data', 'demo')) : false
   if (config.firstAdmin && (await users.count()) === 0) {
     await users.create({ ...config.firstAdmin, name: 'Administrator', role: 'admin' })
   }
   const demoAccountsLeft = (await users.withPassword(DEMO_PASSWORD)).map((user) => user.email)
-  return { dataSource, seeded, demoAccountsLeft }
+  return { dataSource, rules, seeded, demoAccountsLeft }
 }

@@ -5,7 +5,7 @@ import { prepareDatabase, projectRoot, readVersion } from './bootstrap'
 import { loadConfig } from './config/env'
 
 const config = loadConfig()
-const { dataSource, seeded, demoAccountsLeft } = await prepareDatabase(config)
+const { dataSource, rules, seeded, demoAccountsLeft } = await prepareDatabase(config)
 if (seeded) console.log('Seeded the demo scenario into the empty database.')
 if (demoAccountsLeft.length > 0) {
   console.warn(
@@ -17,6 +17,7 @@ const app = await createApp({
   config,
   dataSource,
   version: readVersion(),
+  rules,
   clientDir: config.env === 'production' ? path.join(projectRoot, 'dist') : undefined,
 })
 const server = app.listen(config.port, config.host, () => {

@@ -1,13 +1,33 @@
 import type { DataSource } from 'typeorm'
 import type { AppConfig } from '../config/env'
+import type { RuleBook } from '../reasoning/rule-book'
+import { BuildCompletionService } from './build-completion.service'
+import { BuildEvaluationService } from './build-evaluation.service'
+import { BuildSheetService } from './build-sheet.service'
+import { FitGraphIndex } from './fit-graph'
+import { FitmentService } from './fitment.service'
+import { GraphService } from './graph.service'
+import { ModificationService } from './modification.service'
 import { PartService } from './part.service'
 import { UserService } from './user.service'
 
-/** Every service, built once per app around one data source. */
-export function createServices(dataSource: DataSource, _config: AppConfig) {
+/** Every service, built once per app around one data source and one rule book. */
+export function createServices(dataSource: DataSource, _config: AppConfig, rules: RuleBook) {
+  const parts = new PartService(dataSource)
+  const graphIndex = new FitGraphIndex(dataSource)
+  const modifications = new ModificationService(dataSource)
+  const evaluation = new BuildEvaluationService(dataSource, parts, graphIndex, rules, modifications)
   return {
+    rules,
     users: new UserService(dataSource),
-    parts: new PartService(dataSource),
+    parts,
+    graphIndex,
+    modifications,
+    fitment: new FitmentService(dataSource, parts, graphIndex, rules, modifications),
+    graph: new GraphService(parts, graphIndex),
+    evaluation,
+    completion: new BuildCompletionService(dataSource, parts, graphIndex, evaluation, modifications),
+    sheets: new BuildSheetService(dataSource, parts),
   }
 }
 export type Services = ReturnType<typeof createServices>

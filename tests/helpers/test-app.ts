@@ -28,8 +28,8 @@ export async function createTestApp(options: { demo?: boolean; env?: Record<stri
     FITWRIGHT_DEMO: options.demo === false ? '0' : '1',
     ...options.env,
   })
-  const { dataSource } = await prepareDatabase(config)
-  const app = await createApp({ config, dataSource, version: 'test' })
+  const { dataSource, rules } = await prepareDatabase(config)
+  const app = await createApp({ config, dataSource, rules, version: 'test' })
   return {
     app,
     dataSource,

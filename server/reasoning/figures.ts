@@ -1,0 +1,204 @@
+import type { SlotId } from '../../shared/build-template'
+import { staticCompressionRatio } from '../../shared/engineering/compression'
+import { displacementCc } from '../../shared/engineering/displacement'
+import { checkHeadBolt, spacerFix, type HeadBoltInput, type ThreadMaterial } from '../../shared/engineering/fasteners'
+import { injectorHeadroom } from '../../shared/engineering/injectors'
+import { beltTeethForCentre, centreDistanceForBeltMm } from '../../shared/engineering/timing-belt'
+import { parseMetricThread } from '../../shared/schemas/part-attributes'
+import type { BuildContext, BuildFigures } from '../../shared/schemas/build'
+import type { Part } from '../../shared/schemas/part'
+
+/** What the figures read of a part. */
+export type FigurePart = Pick<Part, 'attributes' | 'yearTo'>
+export type SlotParts = Partial<Record<SlotId, FigurePart>>
+
+/** Figures as the rules read them (facts), richer than the API's summary. */
+export type FigureFacts = {
+  displacementCc?: number
+  compressionRatio?: number
+  sweptVolumeCc?: number
+  clearanceVolumeCc?: number
+  gasketBoreExcessMm?: number
+  oilRestrictors?: number
+  vvlMatch?: boolean
+  headBolt?: {
+    status: 'ok' | 'bottoms' | 'too-short'
+    projectionMm: number
+    minEngagementMm: number
+    maxProjectionMm: number
+    lengthRangeMm: { min: number; max: number }
+    washerStackMm?: number
+  }
+  timing?: { centreMm: number; centreShiftMm?: number; centreShiftAbsMm?: number; beltTeethNeeded?: number }
+  injector?: { neededCcMin: number; availableCcMin: number; headroomPct: number; railPressureBar: number }
+  engineModelYear?: number
+  fuelSystemOpened?: boolean
+  electricsTouched?: boolean
+}
+
+/** Hardened washer stacks on offer, thinnest first (whole millimetres up to a spacer's 8 mm). */
+const WASHER_STACKS_MM = [1, 2, 3, 4, 5, 6, 7, 8]
+
+const num = (part: FigurePart | undefined, name: string): number | undefined => {
+  const value = part?.attributes[name]
+  return typeof value === 'number' && Number.isFinite(value) ? value : undefined
+}
+const text = (part: FigurePart | undefined, name: string): string | undefined => {
+  const value = part?.attributes[name]
+  return typeof value === 'string' ? value : undefined
+}
+const bool = (part: FigurePart | undefined, name: string): boolean | undefined => {
+  const value = part?.attributes[name]
+  return typeof value === 'boolean' ? value : undefined
+}
+const round = (value: number, places = 3) => Math.round(value * 10 ** places) / 10 ** places
+
+function compression(parts: SlotParts): Pick<FigureFacts, 'compressionRatio' | 'sweptVolumeCc' | 'clearanceVolumeCc'> {
+  const { block, head } = parts
+  const gasket = parts['head-gasket']
+  const input = {
+    boreMm: num(block, 'boreMm'),
+    strokeMm: num(block, 'strokeMm'),
+    chamberCc: num(head, 'chamberCc'),
+    gasketBoreMm: num(gasket, 'boreMm'),
+    gasketThicknessMm: num(gasket, 'compressedThicknessMm'),
+    deckClearanceMm: num(block, 'deckClearanceMm') ?? 0,
+    pistonVolumeCc: num(block, 'pistonVolumeCc') ?? 0,
+  }
+  const { boreMm, strokeMm, chamberCc, gasketBoreMm, gasketThicknessMm } = input
+  if (!boreMm || !strokeMm || !chamberCc || !gasketBoreMm || !gasketThicknessMm) return {}
+  try {
+    const result = staticCompressionRatio({ ...input, boreMm, strokeMm, chamberCc, gasketBoreMm, gasketThicknessMm })
+    return { compressionRatio: round(result.ratio, 2), sweptVolumeCc: round(result.sweptCc), clearanceVolumeCc: round(result.clearanceCc) }
+  } catch {
+    return {}
+  }
+}
+
+function headBolt(parts: SlotParts): FigureFacts['headBolt'] {
+  const bolt = parts['head-bolt']
+  const thread = parseMetricThread(text(bolt, 'thread') ?? '')
+  const material = text(parts.block, 'material') as ThreadMaterial | undefined
+  const input: Partial<HeadBoltInput> = {
+    boltLengthMm: num(bolt, 'lengthMm'),
+    diameterMm: thread?.diameterMm,
+    pitchMm: thread?.pitchMm,
+    bossHeightMm: num(parts.head, 'boltBossHeightMm'),
+    gasketThicknessMm: num(parts['head-gasket'], 'compressedThicknessMm'),
+    washerThicknessMm: num(bolt, 'washerThicknessMm') ?? 0,
+    tappedDepthMm: num(parts.block, 'tappedDepthMm'),
+    material,
+  }
+  if (Object.values(input).some((value) => value === undefined)) return undefined
+  let check: ReturnType<typeof checkHeadBolt>
+  let fix: ReturnType<typeof spacerFix>
+  try {
+    // Every field was checked above; the engineering functions reject impossible values.
+    check = checkHeadBolt(input as HeadBoltInput)
+    fix = spacerFix(input as HeadBoltInput, WASHER_STACKS_MM)
+  } catch {
+    return undefined
+  }
+  return {
+    status: check.status,
+    projectionMm: round(check.projectionMm, 2),
+    minEngagementMm: round(check.minEngagementMm, 2),
+    maxProjectionMm: round(check.maxProjectionMm, 2),
+    lengthRangeMm: { min: Math.ceil(check.lengthRangeMm.min), max: Math.floor(check.lengthRangeMm.max) },
+    ...(fix ? { washerStackMm: fix.spacerMm } : {}),
+  }
+}
+
+function timing(parts: SlotParts): FigureFacts['timing'] {
+  const crankToDeck = num(parts.block, 'crankToDeckMm')
+  const gasket = num(parts['head-gasket'], 'compressedThicknessMm')
+  const camAboveDeck = num(parts.head, 'camAboveDeckMm')
+  if (crankToDeck === undefined || gasket === undefined || camAboveDeck === undefined) return undefined
+  // Cam and crank sit on the bore axis in these engines, so the centre distance is a straight stack-up.
+  const centreMm = crankToDeck + gasket + camAboveDeck
+  const smallTeeth = num(parts['crank-pulley'], 'teeth')
+  const largeTeeth = num(parts['cam-gear'], 'teeth')
+  const pitchMm = num(parts['timing-belt'], 'pitchMm')
+  const beltTeeth = num(parts['timing-belt'], 'teeth')
+  if (smallTeeth === undefined || largeTeeth === undefined || pitchMm === undefined) return { centreMm: round(centreMm, 2) }
+  const beltTeethNeeded = round(beltTeethForCentre({ smallTeeth, largeTeeth, pitchMm, centreMm }), 2)
+  if (beltTeeth === undefined) return { centreMm: round(centreMm, 2), beltTeethNeeded }
+  try {
+    const shift = centreDistanceForBeltMm({ smallTeeth, largeTeeth, pitchMm, beltTeeth }) - centreMm
+    return { centreMm: round(centreMm, 2), centreShiftMm: round(shift, 2), centreShiftAbsMm: round(Math.abs(shift), 2), beltTeethNeeded }
+  } catch {
+    return { centreMm: round(centreMm, 2), beltTeethNeeded }
+  }
+}
+
+function injector(parts: SlotParts, context: BuildContext): FigureFacts['injector'] {
+  const flowCcMin = num(parts.injector, 'flowCcMin')
+  const ratedPressureBar = num(parts.injector, 'ratedPressureBar')
+  if (!context.targetPowerKw || flowCcMin === undefined || ratedPressureBar === undefined) return undefined
+  const railPressureBar = num(parts['fuel-rail'], 'pressureBar') ?? ratedPressureBar
+  let result: ReturnType<typeof injectorHeadroom>
+  try {
+    result = injectorHeadroom({ targetPowerKw: context.targetPowerKw, injectors: cylinders(parts), flowCcMin, ratedPressureBar, railPressureBar })
+  } catch {
+    return undefined
+  }
+  return {
+    neededCcMin: round(result.neededCcMin, 1),
+    availableCcMin: round(result.availableCcMin, 1),
+    headroomPct: round(result.headroomPct, 1),
+    railPressureBar,
+  }
+}
+
+/** Cylinders of the build: from the block, else from the lead set, else four. */
+export function cylinders(parts: SlotParts): number {
+  return num(parts.block, 'cylinders') ?? num(parts['ignition-leads'], 'cylinders') ?? 4
+}
+
+/** Every figure the chosen parts allow; a figure that lacks an input is left out. */
+export function computeFigures(parts: SlotParts, context: BuildContext = {}): FigureFacts {
+  const figures: FigureFacts = { ...compression(parts) }
+  const bore = num(parts.block, 'boreMm')
+  const stroke = num(parts.block, 'strokeMm')
+  const count = num(parts.block, 'cylinders')
+  if (bore && stroke && count) figures.displacementCc = round(displacementCc(count, bore, stroke), 1)
+  const gasketBore = num(parts['head-gasket'], 'boreMm')
+  if (bore && gasketBore) figures.gasketBoreExcessMm = round(gasketBore - bore, 2)
+  const headRestrictor = bool(parts.head, 'oilRestrictor')
+  const blockRestrictor = bool(parts.block, 'oilRestrictor')
+  if (headRestrictor !== undefined && blockRestrictor !== undefined) {
+    figures.oilRestrictors = Number(headRestrictor) + Number(blockRestrictor) + (parts['oil-restrictor'] ? 1 : 0)
+  }
+  const ecuVvl = bool(parts.ecu, 'variableValveLift')
+  const headLift = text(parts.head, 'valveLift')
+  if (ecuVvl !== undefined && headLift) figures.vvlMatch = ecuVvl === (headLift === 'variable')
+  figures.headBolt = headBolt(parts)
+  figures.timing = timing(parts)
+  figures.injector = injector(parts, context)
+  if (parts.block?.yearTo) figures.engineModelYear = parts.block.yearTo
+  figures.fuelSystemOpened = Boolean(parts['fuel-rail'] || parts.injector || parts['intake-manifold'])
+  figures.electricsTouched = Boolean(parts.ecu || parts.harness)
+  return figures
+}
+
+/** The API's summary of the figures, every one with its unit in its name. */
+export function summariseFigures(figures: FigureFacts, context: BuildContext): BuildFigures {
+  return {
+    displacementCc: figures.displacementCc ?? null,
+    compressionRatio: figures.compressionRatio ?? null,
+    sweptVolumeCc: figures.sweptVolumeCc ?? null,
+    clearanceVolumeCc: figures.clearanceVolumeCc ?? null,
+    injectorHeadroomPct: figures.injector?.headroomPct ?? null,
+    injectorNeededCcMin: figures.injector?.neededCcMin ?? null,
+    injectorAvailableCcMin: figures.injector?.availableCcMin ?? null,
+    headBoltProjectionMm: figures.headBolt?.projectionMm ?? null,
+    threadEngagementMinMm: figures.headBolt?.minEngagementMm ?? null,
+    headBoltMaxProjectionMm: figures.headBolt?.maxProjectionMm ?? null,
+    headBoltLengthRangeMm: figures.headBolt?.lengthRangeMm ?? null,
+    washerStackMm: figures.headBolt?.status === 'bottoms' ? (figures.headBolt.washerStackMm ?? null) : null,
+    camCrankCentreMm: figures.timing?.centreMm ?? null,
+    beltCentreShiftMm: figures.timing?.centreShiftMm ?? null,
+    beltTeethNeeded: figures.timing?.beltTeethNeeded ?? null,
+    chassisModelYear: context.chassisModelYear ?? null,
+  }
+}

@@ -1,0 +1,88 @@
+import type { DataSource } from 'typeorm'
+import { BUILD_SLOTS, matingSlots, type SlotId } from '../../shared/build-template'
+import type { Candidate, Completion } from '../../shared/schemas/build'
+import { SKILL_LEVELS, worstVerdict, type Relation } from '../../shared/schemas/fitment'
+import type { PartAttributes } from '../../shared/schemas/part-attributes'
+import type { BuildEvaluationService, ResolvedBuild } from './build-evaluation.service'
+import type { FitGraphIndex } from './fit-graph'
+import type { ModificationService } from './modification.service'
+import type { PartService } from './part.service'
+
+type Row = { id: number; partNumber: string; attributes: string; yearTo: number | null }
+
+/** Harder work weighs more, so the easiest way to a working build comes first. */
+const SKILL_WEIGHT = Object.fromEntries(SKILL_LEVELS.map((level, index) => [level, index + 1])) as Record<string, number>
+
+export class BuildCompletionService {
+  constructor(
+    private readonly dataSource: DataSource,
+    private readonly parts: PartService,
+    private readonly graphIndex: FitGraphIndex,
+    private readonly evaluation: BuildEvaluationService,
+    private readonly modifications: ModificationService,
+  ) {}
+
+  /**
+   * For each empty slot: parts that fit every filled slot they mate with
+   * (directly or with modification), fewest and easiest modifications first.
+   */
+  async complete(request: Parameters<BuildEvaluationService['resolve']>[0], limit: number): Promise<Completion> {
+    const build = await this.evaluation.resolve(request)
+    const graph = await this.graphIndex.snapshot()
+    const result: Completion = { slots: {} }
+    for (const slot of BUILD_SLOTS) {
+      if (build.parts[slot.id]) continue
+      const matesWith = matingSlots(slot.id).filter((other) => build.parts[other])
+      if (matesWith.length === 0) {
+        result.slots[slot.id] = {
+          matesWith,
+          candidates: [],
+          note: `Choose a part for a slot it mates with first (${matingSlots(slot.id).join(', ')}).`,
+        }
+        continue
+      }
+      const candidates = await this.candidatesFor(slot.id, build, graph)
+      candidates.sort((a, b) => a.score - b.score || a.part.partNumber.localeCompare(b.part.partNumber))
+      result.slots[slot.id] = {
+        matesWith,
+        candidates: candidates.slice(0, limit),
+        note: candidates.length === 0 ? `No catalogue part fits every chosen part it mates with (${matesWith.join(', ')}).` : undefined,
+      }
+    }
+    return result
+  }
+
+  private async candidatesFor(slot: SlotId, build: ResolvedBuild, graph: Awaited<ReturnType<FitGraphIndex['snapshot']>>) {
+    const rows = (await this.dataSource.query('SELECT id, partNumber, attributes, yearTo FROM part WHERE kind = ? ORDER BY partNumber', [
+      slot,
+    ])) as Row[]
+    const accepted: { row: Row; relation: Relation; modifications: string[]; reasons: string[]; byRule: boolean }[] = []
+    for (const row of rows) {
+      const trial = {
+        parts: { ...build.parts, [slot]: { partNumber: row.partNumber, attributes: JSON.parse(row.attributes) as PartAttributes, yearTo: row.yearTo } },
+        ids: { ...build.ids, [slot]: row.id },
+        context: build.context,
+      }
+      const { facts } = this.evaluation.prepare(trial as ResolvedBuild)
+      const pairs = await this.evaluation.judgePairs(graph, trial, facts, slot)
+      if (pairs.some((pair) => pair.relation === 'does-not-fit' || pair.relation === 'unknown')) continue
+      accepted.push({
+        row,
+        relation: worstVerdict(pairs.map((pair) => pair.relation)) as Relation,
+        modifications: [...new Set(pairs.flatMap((pair) => pair.modifications))],
+        reasons: pairs.map((pair) => `${pair.label}: ${pair.explanation[0]?.text ?? pair.relation}`),
+        byRule: pairs.some((pair) => pair.decidedBy === 'rule'),
+      })
+    }
+    const catalogue = await this.modifications.byNames(accepted.flatMap((a) => a.modifications))
+    const full = new Map((await this.parts.byIds(accepted.map((a) => a.row.id))).map((part) => [part.partNumber, part]))
+    return accepted.map((a): Candidate => ({
+      part: full.get(a.row.partNumber)!,
+      relation: a.relation,
+      modifications: a.modifications,
+      // Reviewed evidence before inference among otherwise equal candidates.
+      score: a.modifications.reduce((sum, name) => sum + 1 + (SKILL_WEIGHT[catalogue.get(name)!.skillLevel] ?? 2), 0) + (a.byRule ? 0.1 : 0),
+      reasons: a.reasons,
+    }))
+  }
+}

@@ -1,0 +1,169 @@
+import type { DataSource } from 'typeorm'
+import { BUILD_SLOTS, isSlotId, matingSlots, type SlotId } from '../../shared/build-template'
+import {
+  RELATIONS,
+  type ExplanationStep,
+  type FitResult,
+  type FitsResponse,
+  type Relation,
+} from '../../shared/schemas/fitment'
+import type { PartAttributes } from '../../shared/schemas/part-attributes'
+import type { PartKind } from '../../shared/schemas/part-kinds'
+import { AppError } from '../errors/app-error'
+import { chainSteps } from '../reasoning/explain'
+import { buildFacts } from '../reasoning/facts'
+import { computeFigures } from '../reasoning/figures'
+import { summariseOutcomes } from '../reasoning/pair-judge'
+import type { RuleBook } from '../reasoning/rule-book'
+import type { FitGraph, FitGraphIndex, GraphLink } from './fit-graph'
+import type { ModificationService } from './modification.service'
+import type { PartService } from './part.service'
+
+type Found = {
+  partId: number
+  relation: Relation
+  decidedBy: 'link' | 'rule'
+  review: 'approved' | 'proposed' | 'inferred'
+  ruleIds: string[]
+  modificationNames: string[]
+  explanation: ExplanationStep[]
+}
+
+type RuleCandidate = { id: number; kind: PartKind; attributes: string; yearTo: number | null }
+
+const KIND_ORDER = new Map<string, number>(BUILD_SLOTS.map((slot, index) => [slot.id, index]))
+const REVIEW_ORDER = { approved: 0, proposed: 1, inferred: 2 }
+
+export type FitsQuery = { relation?: Relation; kind?: PartKind; inferred: boolean }
+
+export class FitmentService {
+  constructor(
+    private readonly dataSource: DataSource,
+    private readonly parts: PartService,
+    private readonly graphIndex: FitGraphIndex,
+    private readonly rules: RuleBook,
+    private readonly modifications: ModificationService,
+  ) {}
+
+  /**
+   * What else fits a part: its reviewed links (approved, and proposed ones
+   * marked as such), the same through every identical part, then fits the
+   * rules infer from attributes among parts of mating kinds.
+   */
+  async fitsFor(code: string, query: FitsQuery): Promise<FitsResponse> {
+    const entity = await this.parts.findEntity(code)
+    if (!entity) throw AppError.notFound(`No part with number or mark "${code}".`)
+    const graph = await this.graphIndex.snapshot()
+    const members = graph.classOf(entity.id)
+    const reviewed = this.reviewedFits(graph, entity.id)
+    const inferred = query.inferred && isSlotId(entity.kind)
+      ? await this.inferredFits(entity.kind, entity.attributes, entity.yearTo, new Set([...members, ...reviewed.keys()]), query.kind)
+      : []
+    const all = [...reviewed.values(), ...inferred].filter(
+      (found) =>
+        (!query.relation || found.relation === query.relation) &&
+        (!query.kind || graph.part(found.partId).kind === query.kind),
+    )
+    all.sort((a, b) => this.compare(graph, a, b))
+    const ids = [entity.id, ...members.filter((id) => id !== entity.id), ...all.map((found) => found.partId)]
+    const partList = await this.parts.byIds(ids)
+    const byNumber = new Map(partList.map((part) => [part.partNumber, part]))
+    const mods = await this.modifications.byNames(all.flatMap((found) => found.modificationNames))
+    const results: FitResult[] = all.map((found) => ({
+      part: byNumber.get(graph.part(found.partId).partNumber)!,
+      relation: found.relation,
+      decidedBy: found.decidedBy,
+      review: found.review,
+      ruleIds: found.ruleIds,
+      modifications: found.modificationNames.map((name) => mods.get(name)!),
+      explanation: found.explanation,
+    }))
+    return {
+      part: byNumber.get(entity.partNumber)!,
+      identical: members.filter((id) => id !== entity.id).map((id) => byNumber.get(graph.part(id).partNumber)!),
+      results,
+    }
+  }
+
+  private compare(graph: FitGraph, a: Found, b: Found): number {
+    const partA = graph.part(a.partId)
+    const partB = graph.part(b.partId)
+    return (
+      Number(a.review === 'inferred') - Number(b.review === 'inferred') ||
+      (KIND_ORDER.get(partA.kind) ?? 99) - (KIND_ORDER.get(partB.kind) ?? 99) ||
+      RELATIONS.indexOf(a.relation) - RELATIONS.indexOf(b.relation) ||
+      REVIEW_ORDER[a.review] - REVIEW_ORDER[b.review] ||
+      partA.partNumber.localeCompare(partB.partNumber)
+    )
+  }
+
+  /** Links of the part and of every identical part, carried over to every part identical to the other end. */
+  private reviewedFits(graph: FitGraph, partId: number): Map<number, Found> {
+    const members = new Set(graph.classOf(partId))
+    const found = new Map<number, Found & { cost: number }>()
+    const consider = (link: GraphLink, member: number, target: number, other: number) => {
+      if (link.status === 'rejected') return
+      const cost = (member === partId ? 0 : 1) + (target === other ? 0 : 1) + (link.status === 'approved' ? 0 : 10)
+      const existing = found.get(target)
+      if (existing && existing.cost <= cost) return
+      found.set(target, {
+        partId: target,
+        relation: link.relation,
+        decidedBy: 'link',
+        review: link.status === 'approved' ? 'approved' : 'proposed',
+        ruleIds: [],
+        modificationNames: link.modifications,
+        explanation: chainSteps(graph, partId, member, link, other, target),
+        cost,
+      })
+    }
+    for (const member of members) {
+      for (const link of graph.linksOf(member)) {
+        const other = link.a === member ? link.b : link.a
+        if (members.has(other)) continue
+        for (const target of graph.classOf(other)) consider(link, member, target, other)
+      }
+    }
+    return new Map([...found].map(([id, { cost: _cost, ...rest }]) => [id, rest]))
+  }
+
+  /** Parts of mating kinds whose pair the rules decide from attributes alone. */
+  private async inferredFits(
+    kind: SlotId,
+    attributes: PartAttributes,
+    yearTo: number | null,
+    exclude: Set<number>,
+    onlyKind?: PartKind,
+  ): Promise<Found[]> {
+    const kinds = matingSlots(kind).filter((other) => this.rules.hasPairRules(kind, other) && (!onlyKind || onlyKind === other))
+    if (kinds.length === 0) return []
+    const candidates = (await this.dataSource.query(
+      `SELECT id, kind, attributes, yearTo FROM part WHERE kind IN (${kinds.map(() => '?').join(',')}) ORDER BY partNumber`,
+      kinds,
+    )) as RuleCandidate[]
+    const self = { attributes, yearTo }
+    const found: Found[] = []
+    for (const candidate of candidates) {
+      if (exclude.has(candidate.id)) continue
+      const other = { attributes: JSON.parse(candidate.attributes) as PartAttributes, yearTo: candidate.yearTo }
+      const otherKind = candidate.kind as SlotId
+      const slotParts = { [kind]: self, [otherKind]: other }
+      const facts = buildFacts(slotParts, computeFigures(slotParts), {})
+      const summary = summariseOutcomes(await this.rules.evaluatePair(kind, otherKind, facts))
+      if (!summary.relation) continue
+      found.push({
+        partId: candidate.id,
+        relation: summary.relation,
+        decidedBy: 'rule',
+        review: 'inferred',
+        ruleIds: summary.ruleIds,
+        modificationNames: [...new Set(summary.modifications.map((m) => m.name))],
+        explanation: [
+          ...summary.steps,
+          ...summary.cautions.map((caution): ExplanationStep => ({ type: 'note', text: caution.text, ruleId: caution.ruleId })),
+        ],
+      })
+    }
+    return found
+  }
+}

@@ -1,0 +1,66 @@
+import type { DataSource, EntityManager } from 'typeorm'
+import { In } from 'typeorm'
+import type { Modification } from '../../shared/schemas/fitment'
+import { ModificationEntity } from '../entities/modification.entity'
+import type { ModificationSpec } from '../reasoning/rule-file.schema'
+
+export function toModification(entity: ModificationEntity): Modification {
+  return {
+    name: entity.name,
+    title: entity.title,
+    summary: entity.summary,
+    steps: entity.steps,
+    extraParts: entity.extraParts,
+    consumables: entity.consumables,
+    skillLevel: entity.skillLevel,
+    timeMinutes: entity.timeMinutes,
+    cautions: entity.cautions,
+    status: entity.status,
+  }
+}
+
+/** Stand-in for a name no catalogue entry has yet (an import may name one before an editor writes it up). */
+export function unknownModification(name: string): Modification {
+  return {
+    name,
+    title: name,
+    summary: 'Not yet described by an editor.',
+    steps: [],
+    extraParts: [],
+    consumables: [],
+    skillLevel: 'skilled',
+    timeMinutes: null,
+    cautions: [],
+    status: 'proposed',
+  }
+}
+
+export class ModificationService {
+  constructor(private readonly dataSource: DataSource) {}
+
+  /**
+   * Writes the shipped catalogue (rules/catalogue/modifications.json) into the
+   * database at start-up, so rules and reviewed links name the same entries.
+   */
+  async syncShipped(specs: ModificationSpec[], manager: EntityManager = this.dataSource.manager): Promise<void> {
+    const repo = manager.getRepository(ModificationEntity)
+    for (const spec of specs) {
+      const existing = await repo.findOneBy({ name: spec.name })
+      await repo.save({ ...(existing ?? {}), ...spec, status: 'approved', source: 'rules' })
+    }
+  }
+
+  async list(): Promise<Modification[]> {
+    const all = await this.dataSource.getRepository(ModificationEntity).find({ order: { name: 'ASC' } })
+    return all.map(toModification)
+  }
+
+  /** The named modifications, in the order asked, with stand-ins for unknown names. */
+  async byNames(names: string[]): Promise<Map<string, Modification>> {
+    const unique = [...new Set(names)]
+    if (unique.length === 0) return new Map()
+    const found = await this.dataSource.getRepository(ModificationEntity).findBy({ name: In(unique) })
+    const byName = new Map(found.map((entity) => [entity.name, toModification(entity)]))
+    return new Map(unique.map((name) => [name, byName.get(name) ?? unknownModification(name)]))
+  }
+}

@@ -1,0 +1,7 @@
+export * from './units'
+export * from './compression'
+export * from './displacement'
+export * from './injectors'
+export * from './fasteners'
+export * from './timing-belt'
+export * from './vin'

@@ -1,0 +1,153 @@
+import { z } from 'zod'
+import { partSchema } from './part'
+import { explanationStepSchema, extraPartSchema, modificationSchema, relationSchema, verdictSchema } from './fitment'
+
+/** Slot -> part number. A list is accepted only to answer "two parts in one slot" clearly. */
+export const slotsInputSchema = z.record(
+  z.string(),
+  z.union([z.string().trim().min(1, 'Give a part number.').max(100), z.array(z.string().trim().max(100))]),
+)
+
+export const buildContextSchema = z.object({
+  targetPowerKw: z.number().positive('Target power must be above zero.').max(2000).optional(),
+  fuelOctane: z.number().min(70, 'Octane (AKI) below 70 is not pump fuel.').max(120).optional(),
+  chassisModelYear: z.number().int().min(1900).max(2100).optional(),
+  vin: z.string().trim().max(17).optional(),
+})
+export type BuildContext = z.infer<typeof buildContextSchema>
+
+export const evaluateRequestSchema = buildContextSchema.extend({ slots: slotsInputSchema })
+export type EvaluateRequest = z.infer<typeof evaluateRequestSchema>
+
+export const cautionSchema = z.object({
+  severity: z.enum(['info', 'warning', 'danger']),
+  text: z.string(),
+  reference: z.string().optional(),
+  ruleId: z.string().optional(),
+})
+export type Caution = z.infer<typeof cautionSchema>
+
+export const pairJudgementSchema = z.object({
+  slots: z.tuple([z.string(), z.string()]),
+  label: z.string(),
+  partNumbers: z.tuple([z.string(), z.string()]),
+  relation: verdictSchema,
+  decidedBy: z.enum(['link', 'rule', 'none']),
+  ruleIds: z.array(z.string()),
+  modifications: z.array(z.string()),
+  explanation: z.array(explanationStepSchema),
+})
+export type PairJudgement = z.infer<typeof pairJudgementSchema>
+
+export const partsListLineSchema = z.object({
+  partNumber: z.string().optional(),
+  description: z.string(),
+  quantity: z.number(),
+  unit: z.string(),
+  reason: z.string(),
+  category: z.enum(['chosen', 'modification', 'consumable']),
+})
+export type PartsListLine = z.infer<typeof partsListLineSchema>
+
+export const buildFiguresSchema = z.object({
+  displacementCc: z.number().nullable(),
+  compressionRatio: z.number().nullable(),
+  sweptVolumeCc: z.number().nullable(),
+  clearanceVolumeCc: z.number().nullable(),
+  injectorHeadroomPct: z.number().nullable(),
+  injectorNeededCcMin: z.number().nullable(),
+  injectorAvailableCcMin: z.number().nullable(),
+  headBoltProjectionMm: z.number().nullable(),
+  threadEngagementMinMm: z.number().nullable(),
+  headBoltMaxProjectionMm: z.number().nullable(),
+  headBoltLengthRangeMm: z.object({ min: z.number(), max: z.number() }).nullable(),
+  washerStackMm: z.number().nullable(),
+  camCrankCentreMm: z.number().nullable(),
+  beltCentreShiftMm: z.number().nullable(),
+  beltTeethNeeded: z.number().nullable(),
+  chassisModelYear: z.number().nullable(),
+})
+export type BuildFigures = z.infer<typeof buildFiguresSchema>
+
+export const appliedModificationSchema = modificationSchema.extend({
+  slots: z.tuple([z.string(), z.string()]),
+  reason: z.string(),
+})
+export type AppliedModification = z.infer<typeof appliedModificationSchema>
+
+export const evaluationSchema = z.object({
+  verdict: verdictSchema,
+  missingSlots: z.array(z.string()),
+  pairs: z.array(pairJudgementSchema),
+  modifications: z.array(appliedModificationSchema),
+  partsList: z.array(partsListLineSchema),
+  cautions: z.array(cautionSchema),
+  figures: buildFiguresSchema,
+  parts: z.record(z.string(), partSchema),
+})
+export type Evaluation = z.infer<typeof evaluationSchema>
+
+export const completeRequestSchema = evaluateRequestSchema.extend({
+  limit: z.number().int().min(1).max(50).default(10),
+})
+
+export const candidateSchema = z.object({
+  part: partSchema,
+  relation: relationSchema,
+  modifications: z.array(z.string()),
+  score: z.number(),
+  reasons: z.array(z.string()),
+})
+export type Candidate = z.infer<typeof candidateSchema>
+
+export const completionSchema = z.object({
+  slots: z.record(
+    z.string(),
+    z.object({
+      matesWith: z.array(z.string()),
+      candidates: z.array(candidateSchema),
+      note: z.string().optional(),
+    }),
+  ),
+})
+export type Completion = z.infer<typeof completionSchema>
+
+export const buildSheetInputSchema = buildContextSchema.extend({
+  name: z.string().trim().min(1, 'Give the build a name.').max(120),
+  slots: z.record(z.string(), z.string().trim().min(1).max(100)),
+  notes: z.string().max(4000).default(''),
+})
+export type BuildSheetInput = z.infer<typeof buildSheetInputSchema>
+
+/** Rename, re-slot or change the context of a saved sheet; null clears a value. */
+export const buildSheetUpdateSchema = z
+  .object({
+    name: z.string().trim().min(1, 'Give the build a name.').max(120),
+    slots: z.record(z.string(), z.string().trim().min(1).max(100)),
+    targetPowerKw: buildContextSchema.shape.targetPowerKw.unwrap().nullable(),
+    fuelOctane: buildContextSchema.shape.fuelOctane.unwrap().nullable(),
+    chassisModelYear: buildContextSchema.shape.chassisModelYear.unwrap().nullable(),
+    vin: buildContextSchema.shape.vin.unwrap().nullable(),
+    notes: z.string().max(4000),
+  })
+  .partial()
+  .refine((value) => Object.keys(value).length > 0, 'Change at least one field.')
+export type BuildSheetUpdate = z.infer<typeof buildSheetUpdateSchema>
+
+export const buildSheetSchema = z.object({
+  id: z.number().int(),
+  name: z.string(),
+  slots: z.record(z.string(), z.string()),
+  targetPowerKw: z.number().nullable(),
+  fuelOctane: z.number().nullable(),
+  chassisModelYear: z.number().nullable(),
+  vin: z.string().nullable(),
+  notes: z.string(),
+  owner: z.object({ id: z.number().int(), name: z.string() }),
+  createdAt: z.string(),
+  updatedAt: z.string(),
+})
+export type BuildSheet = z.infer<typeof buildSheetSchema>
+export const buildSheetListSchema = z.array(buildSheetSchema)
+
+export { extraPartSchema }

@@ -1,0 +1,166 @@
+import fc from 'fast-check'
+import { describe, expect, it } from 'vitest'
+import {
+  chamberForRatio,
+  type CompressionInput,
+  cylinderVolumeCc,
+  quenchMm,
+  staticCompressionRatio,
+  sweptVolumeCc,
+  TYPICAL_QUENCH_MM,
+} from '../../../shared/engineering/compression'
+import { inToMm } from '../../../shared/engineering/units'
+
+const RATIO_TOLERANCE = 0.005
+const CC_TOLERANCE = 0.001
+const HEYWOOD = 'Heywood, Internal Combustion Engine Fundamentals, sec. 2.2 [published]'
+
+function within(actual: number, expected: number, tolerance: number): void {
+  expect(Math.abs(actual - expected)).toBeLessThanOrEqual(tolerance)
+}
+
+function bottomEnd(change: Partial<CompressionInput> = {}): CompressionInput {
+  return {
+    boreMm: 86,
+    strokeMm: 86,
+    chamberCc: 45.0,
+    gasketBoreMm: 87,
+    gasketThicknessMm: 1.2,
+    deckClearanceMm: 0.2,
+    pistonVolumeCc: 5.0,
+    ...change,
+  }
+}
+
+const inchBuild: CompressionInput = {
+  boreMm: inToMm(4.0),
+  strokeMm: inToMm(3.48),
+  chamberCc: 64,
+  gasketBoreMm: inToMm(4.1),
+  gasketThicknessMm: inToMm(0.041),
+  deckClearanceMm: inToMm(0.025),
+  pistonVolumeCc: 5,
+}
+
+describe(`staticCompressionRatio (${HEYWOOD})`, () => {
+  it('splits the clearance volume of the 86 × 86 mm bottom end into its parts', () => {
+    const result = staticCompressionRatio(bottomEnd())
+    within(result.sweptCc, 499.557, CC_TOLERANCE)
+    within(result.gasketCc, 7.134, CC_TOLERANCE)
+    within(result.deckCc, 1.162, CC_TOLERANCE)
+    within(result.clearanceCc, 58.295, CC_TOLERANCE)
+  })
+
+  it.each([
+    ['45 cc chamber, 1.2 mm gasket, 5 cc dish', bottomEnd(), 9.569],
+    ['52 cc chamber (another head)', bottomEnd({ chamberCc: 52 }), 8.651],
+    ['52 cc chamber with a 0.7 mm gasket: a gasket cannot fully make up for the head', bottomEnd({ chamberCc: 52, gasketThicknessMm: 0.7 }), 9.016],
+    ['45 cc chamber with a 5 cc dome instead of the dish', bottomEnd({ pistonVolumeCc: -5 }), 11.344],
+    ['45 cc chamber, 5 cc dish, 0.7 mm gasket', bottomEnd({ gasketThicknessMm: 0.7 }), 10.030],
+    ['45 cc chamber, 5 cc dish, 1.6 mm gasket', bottomEnd({ gasketThicknessMm: 1.6 }), 9.234],
+    ['inch build: 4.000 × 3.480 in, 64 cc, 4.100 × 0.041 in gasket, 0.025 in deck, 5 cc reliefs', inchBuild, 9.632],
+  ])('%s gives %f:1', (_label, input, expected) => {
+    within(staticCompressionRatio(input).ratio, expected, RATIO_TOLERANCE)
+  })
+
+  it('falls as the gasket gets thicker', () => {
+    fc.assert(
+      fc.property(
+        fc.double({ min: 0, max: 3, noNaN: true }),
+        fc.double({ min: 0.01, max: 2, noNaN: true }),
+        (thin, extra) => {
+          const thinner = staticCompressionRatio(bottomEnd({ gasketThicknessMm: thin })).ratio
+          const thicker = staticCompressionRatio(bottomEnd({ gasketThicknessMm: thin + extra })).ratio
+          expect(thicker).toBeLessThan(thinner)
+        },
+      ),
+    )
+  })
+
+  it('rises as the dish shrinks towards a dome', () => {
+    fc.assert(
+      fc.property(fc.double({ min: -20, max: 20, noNaN: true }), (piston) => {
+        const smaller = staticCompressionRatio(bottomEnd({ pistonVolumeCc: piston - 1 })).ratio
+        const larger = staticCompressionRatio(bottomEnd({ pistonVolumeCc: piston })).ratio
+        expect(smaller).toBeGreaterThan(larger)
+      }),
+    )
+  })
+
+  it('throws a RangeError naming the problem when a dome fills the chamber', () => {
+    expect(() => staticCompressionRatio(bottomEnd({ pistonVolumeCc: -60 }))).toThrow(/clearance volume must be positive/i)
+  })
+
+  it.each([
+    ['boreMm', { boreMm: 0 }],
+    ['strokeMm', { strokeMm: -86 }],
+    ['chamberCc', { chamberCc: 0 }],
+    ['gasketBoreMm', { gasketBoreMm: Number.NaN }],
+    ['gasketThicknessMm', { gasketThicknessMm: -0.1 }],
+    ['deckClearanceMm', { deckClearanceMm: Number.POSITIVE_INFINITY }],
+  ])('rejects a bad %s with a RangeError that names it', (name, change) => {
+    expect(() => staticCompressionRatio(bottomEnd(change))).toThrow(RangeError)
+    expect(() => staticCompressionRatio(bottomEnd(change))).toThrow(name)
+  })
+
+  it('counts a proud piston (negative deck clearance) as lost volume', () => {
+    const below = staticCompressionRatio(bottomEnd({ deckClearanceMm: 0.2 }))
+    const proud = staticCompressionRatio(bottomEnd({ deckClearanceMm: -0.2 }))
+    within(proud.deckCc, -below.deckCc, 1e-12)
+    expect(proud.ratio).toBeGreaterThan(below.ratio)
+  })
+})
+
+describe(`chamberForRatio (${HEYWOOD})`, () => {
+  it('finds the 42.211 cc chamber that gives 10.0:1 on the 86 × 86 mm bottom end', () => {
+    const { chamberCc: _unused, ...rest } = bottomEnd()
+    within(chamberForRatio(rest, 10.0), 42.211, CC_TOLERANCE)
+  })
+
+  it('inverts staticCompressionRatio: the chamber that gives a build\'s ratio is that build\'s chamber', () => {
+    fc.assert(
+      fc.property(
+        fc.double({ min: 60, max: 110, noNaN: true }),
+        fc.double({ min: 60, max: 110, noNaN: true }),
+        fc.double({ min: 0.3, max: 2, noNaN: true }),
+        fc.double({ min: -0.5, max: 1, noNaN: true }),
+        fc.double({ min: -5, max: 15, noNaN: true }),
+        fc.double({ min: 20, max: 90, noNaN: true }),
+        (bore, stroke, gasket, deck, piston, chamberCc) => {
+          const rest = { boreMm: bore, strokeMm: stroke, gasketBoreMm: bore + 1, gasketThicknessMm: gasket, deckClearanceMm: deck, pistonVolumeCc: piston }
+          const { ratio } = staticCompressionRatio({ ...rest, chamberCc })
+          within(chamberForRatio(rest, ratio), chamberCc, 1e-9)
+        },
+      ),
+    )
+  })
+
+  it.each([1, 0.5, Number.NaN])('rejects a target ratio of %f', (target) => {
+    const { chamberCc: _unused, ...rest } = bottomEnd()
+    expect(() => chamberForRatio(rest, target)).toThrow(RangeError)
+  })
+
+  it('refuses a ratio the gasket, deck and dish cannot reach with any chamber', () => {
+    const { chamberCc: _unused, ...rest } = bottomEnd({ pistonVolumeCc: 40 })
+    expect(() => chamberForRatio(rest, 14)).toThrow(/cannot be reached/)
+  })
+})
+
+describe('volume helpers', () => {
+  it('sweptVolumeCc agrees with cylinderVolumeCc on bore and stroke, and π/4·d²·h by hand', () => {
+    expect(sweptVolumeCc(86, 86)).toBe(cylinderVolumeCc(86, 86))
+    within(cylinderVolumeCc(10, 10), 0.785398, 1e-6)
+  })
+})
+
+describe('quenchMm (common practice)', () => {
+  it.each([
+    [0.2, 1.2, 1.4, false],
+    [0.2, 0.8, 1.0, true],
+    [-0.1, 1.0, 0.9, true],
+  ])('deck %f mm + gasket %f mm = %f mm; in the 0.9–1.15 mm band: %s', (deck, gasket, expected, typical) => {
+    const quench = quenchMm(deck, gasket)
+    within(quench, expected, 1e-9)
+    expect(quench >= TYPICAL_QUENCH_MM.min - 1e-9 && quench <= TYPICAL_QUENCH_MM.max + 1e-9).toBe(typical)
+  })
+})

@@ -1,0 +1,109 @@
+import fc from 'fast-check'
+import { unit } from 'mathjs'
+import { describe, expect, it } from 'vitest'
+import {
+  barToPsi,
+  CC_PER_IN3,
+  ccToIn3,
+  hpToKw,
+  in3ToCc,
+  inToMm,
+  KG_PER_LB,
+  KPA_PER_BAR,
+  KPA_PER_PSI,
+  kwToHp,
+  lbfFtToNm,
+  MM_PER_IN,
+  mmToIn,
+  N_PER_LBF,
+  NM_PER_LBFFT,
+  nmToLbfFt,
+  psiToBar,
+  W_PER_HP,
+  lbfToN,
+  nToLbf,
+} from '../../../shared/engineering/units'
+
+const EXACT = 1e-12
+// The trade rounds these factors to 7 significant figures; half a unit in the last place is ~1e-7 relative.
+const ROUNDED = 1e-7
+
+function expectRelativelyClose(actual: number, expected: number, relTol: number): void {
+  expect(Math.abs(actual - expected)).toBeLessThanOrEqual(relTol * Math.abs(expected))
+}
+
+// NIST SP 811 (2008), Appendix B.8 [published]; reference values from mathjs.
+describe('conversion constants against mathjs as reference', () => {
+  it.each([
+    ['MM_PER_IN (exact)', MM_PER_IN, unit(1, 'in').toNumber('mm'), EXACT],
+    ['CC_PER_IN3 (exact)', CC_PER_IN3, unit(1, 'in^3').toNumber('cm^3'), EXACT],
+    ['KG_PER_LB (exact)', KG_PER_LB, unit(1, 'lbm').toNumber('kg'), EXACT],
+    ['N_PER_LBF (exact)', N_PER_LBF, unit(1, 'lbf').toNumber('N'), EXACT],
+    ['KPA_PER_BAR (exact)', KPA_PER_BAR, unit(1, 'bar').toNumber('kPa'), EXACT],
+    ['W_PER_HP (rounded)', W_PER_HP, unit(1, 'hp').toNumber('W'), ROUNDED],
+    ['NM_PER_LBFFT (rounded)', NM_PER_LBFFT, unit('1 lbf ft').toNumber('N m'), ROUNDED],
+    ['KPA_PER_PSI (rounded)', KPA_PER_PSI, unit(1, 'psi').toNumber('kPa'), ROUNDED],
+  ])('%s matches mathjs', (_name, constant, reference, tolerance) => {
+    expectRelativelyClose(constant, reference, tolerance)
+  })
+})
+
+// NIST SP 811 (2008), Appendix B.8 [published]: exact definitions and the rounded trade factors.
+describe('conversion constants as defined', () => {
+  it.each([
+    ['MM_PER_IN', MM_PER_IN, 25.4],
+    ['CC_PER_IN3', CC_PER_IN3, 16.387064],
+    ['KG_PER_LB', KG_PER_LB, 0.45359237],
+    ['N_PER_LBF', N_PER_LBF, 4.4482216152605],
+    ['W_PER_HP', W_PER_HP, 745.6999],
+    ['NM_PER_LBFFT', NM_PER_LBFFT, 1.355818],
+    ['KPA_PER_PSI', KPA_PER_PSI, 6.894757],
+    ['KPA_PER_BAR', KPA_PER_BAR, 100],
+  ])('%s is %f', (_name, constant, value) => {
+    expect(constant).toBe(value)
+  })
+
+  it('a US gallon of 231 in³ is 3.785411784 L, tying CC_PER_IN3 to the exact inch', () => {
+    expect(231 * CC_PER_IN3).toBeCloseTo(3785.411784, 9)
+    expect(MM_PER_IN ** 3 / 1000).toBeCloseTo(CC_PER_IN3, 12)
+  })
+})
+
+describe('conversion functions against mathjs as reference', () => {
+  const cases: Array<[string, (x: number) => number, string, string, number]> = [
+    ['inToMm', inToMm, 'in', 'mm', EXACT],
+    ['mmToIn', mmToIn, 'mm', 'in', EXACT],
+    ['in3ToCc', in3ToCc, 'in^3', 'cm^3', EXACT],
+    ['ccToIn3', ccToIn3, 'cm^3', 'in^3', EXACT],
+    ['hpToKw', hpToKw, 'hp', 'kW', ROUNDED],
+    ['kwToHp', kwToHp, 'kW', 'hp', ROUNDED],
+    ['lbfFtToNm', lbfFtToNm, 'lbf ft', 'N m', ROUNDED],
+    ['nmToLbfFt', nmToLbfFt, 'N m', 'lbf ft', ROUNDED],
+    ['psiToBar', psiToBar, 'psi', 'bar', ROUNDED],
+    ['barToPsi', barToPsi, 'bar', 'psi', ROUNDED],
+    ['lbfToN', lbfToN, 'lbf', 'N', EXACT],
+    ['nToLbf', nToLbf, 'N', 'lbf', EXACT],
+  ]
+
+  it.each(cases)('%s agrees with mathjs for any magnitude a workshop meets', (_name, convert, from, to, tolerance) => {
+    fc.assert(
+      fc.property(fc.double({ min: 1e-3, max: 1e5, noNaN: true }), (x) => {
+        expectRelativelyClose(convert(x), unit(`${x} ${from}`).toNumber(to), tolerance)
+      }),
+    )
+  })
+
+  it.each([
+    ['mm/in', inToMm, mmToIn],
+    ['cc/in³', in3ToCc, ccToIn3],
+    ['kW/hp', hpToKw, kwToHp],
+    ['N·m/lbf·ft', lbfFtToNm, nmToLbfFt],
+    ['bar/psi', psiToBar, barToPsi],
+  ])('%s conversions round-trip', (_name, forward, back) => {
+    fc.assert(
+      fc.property(fc.double({ min: -1e6, max: 1e6, noNaN: true }), (x) => {
+        expect(back(forward(x))).toBeCloseTo(x, 6)
+      }),
+    )
+  })
+})
