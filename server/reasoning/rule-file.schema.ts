@@ -35,27 +35,42 @@ export type Condition =
   | { not: Condition }
   | { fact: string; path?: string; operator: string; value: unknown }
 
-export const conditionSchema: z.ZodType<Condition> = z.lazy(() =>
-  z.union([
-    z.object({ all: z.array(conditionSchema).min(1) }).strict(),
-    z.object({ any: z.array(conditionSchema).min(1) }).strict(),
-    z.object({ not: conditionSchema }).strict(),
-    z
-      .object({
-        fact: factName,
-        path: path.optional(),
-        operator: z.enum(OPERATORS, { error: (issue) => `unknown operator "${String(issue.input)}"` }),
-        value: z.union([scalar, factRef]),
-      })
-      .strict(),
-  ]),
-)
+const leafSchema = z
+  .object({
+    fact: factName,
+    path: path.optional(),
+    operator: z.enum(OPERATORS, { error: (issue) => `unknown operator "${String(issue.input)}"` }),
+    value: z.union([scalar, factRef]),
+  })
+  .strict()
+const allSchema = z.object({ all: z.array(z.lazy(() => conditionSchema)).min(1) }).strict()
+const anySchema = z.object({ any: z.array(z.lazy(() => conditionSchema)).min(1) }).strict()
+const notSchema = z.object({ not: z.lazy(() => conditionSchema) }).strict()
 
-const topCondition = z.union([
-  z.object({ all: z.array(conditionSchema).min(1) }).strict(),
-  z.object({ any: z.array(conditionSchema).min(1) }).strict(),
-  z.object({ not: conditionSchema }).strict(),
-])
+function schemaFor(value: unknown): z.ZodType {
+  if (value && typeof value === 'object') {
+    if ('all' in value) return allSchema
+    if ('any' in value) return anySchema
+    if ('not' in value) return notSchema
+  }
+  return leafSchema
+}
+
+/*
+ * Chooses the condition's schema by its key, so a fault is reported where it
+ * is ("unknown operator"), not as a failed union of every shape.
+ */
+export const conditionSchema: z.ZodType<Condition> = z.custom<Condition>().superRefine((value, ctx) => {
+  const result = schemaFor(value).safeParse(value)
+  if (!result.success) {
+    for (const issue of result.error.issues) ctx.addIssue({ code: 'custom', path: issue.path, message: issue.message })
+  }
+})
+
+const topCondition = conditionSchema.refine(
+  (value) => typeof value === 'object' && value !== null && ('all' in value || 'any' in value || 'not' in value),
+  'conditions must start with all, any or not',
+)
 
 const template = z.string().min(1)
 const findPartSchema = z

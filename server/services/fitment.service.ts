@@ -15,7 +15,8 @@ import { buildFacts } from '../reasoning/facts'
 import { computeFigures } from '../reasoning/figures'
 import { summariseOutcomes } from '../reasoning/pair-judge'
 import type { RuleBook } from '../reasoning/rule-book'
-import type { FitGraph, FitGraphIndex, GraphLink } from './fit-graph'
+import type { FitGraph, FitGraphIndex } from './fit-graph'
+import { reviewedFits } from './graph-search'
 import type { ModificationService } from './modification.service'
 import type { PartService } from './part.service'
 
@@ -97,15 +98,9 @@ export class FitmentService {
     )
   }
 
-  /** Links of the part and of every identical part, carried over to every part identical to the other end. */
   private reviewedFits(graph: FitGraph, partId: number): Map<number, Found> {
-    const members = new Set(graph.classOf(partId))
-    const found = new Map<number, Found & { cost: number }>()
-    const consider = (link: GraphLink, member: number, target: number, other: number) => {
-      if (link.status === 'rejected') return
-      const cost = (member === partId ? 0 : 1) + (target === other ? 0 : 1) + (link.status === 'approved' ? 0 : 10)
-      const existing = found.get(target)
-      if (existing && existing.cost <= cost) return
+    const found = new Map<number, Found>()
+    for (const { target, link, member, other } of reviewedFits(graph, partId).values()) {
       found.set(target, {
         partId: target,
         relation: link.relation,
@@ -114,17 +109,9 @@ export class FitmentService {
         ruleIds: [],
         modificationNames: link.modifications,
         explanation: chainSteps(graph, partId, member, link, other, target),
-        cost,
       })
     }
-    for (const member of members) {
-      for (const link of graph.linksOf(member)) {
-        const other = link.a === member ? link.b : link.a
-        if (members.has(other)) continue
-        for (const target of graph.classOf(other)) consider(link, member, target, other)
-      }
-    }
-    return new Map([...found].map(([id, { cost: _cost, ...rest }]) => [id, rest]))
+    return found
   }
 
   /** Parts of mating kinds whose pair the rules decide from attributes alone. */

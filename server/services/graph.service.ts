@@ -9,9 +9,8 @@ import {
 import { AppError } from '../errors/app-error'
 import type { FitGraph, GraphIdentity, GraphLink } from './fit-graph'
 import type { FitGraphIndex } from './fit-graph'
+import { shortestFitPath } from './graph-search'
 import type { PartService } from './part.service'
-
-type Step = { to: number; edge: GraphEdge; weight: 0 | 1 }
 
 function linkEdge(graph: FitGraph, link: GraphLink): GraphEdge {
   return {
@@ -53,44 +52,14 @@ export class GraphService {
     return entity.id
   }
 
-  /**
-   * Shortest chain of approved fit links (fits or fits with modification)
-   * between two parts. Identity steps cost nothing: identical parts are one part.
-   */
+  /** Shortest chain of approved fit links between two parts (see shortestFitPath). */
   async path(fromCode: string, toCode: string): Promise<GraphPath> {
     const [from, to] = [await this.partId(fromCode, 'from'), await this.partId(toCode, 'to')]
     const graph = await this.graphIndex.snapshot()
-    const steps = (id: number): Step[] => [
-      ...graph.identitiesOf(id).map((identity): Step => ({
-        to: identity.a === id ? identity.b : identity.a,
-        edge: identityEdge(graph, identity),
-        weight: 0,
-      })),
-      ...graph
-        .linksOf(id)
-        .filter((link) => link.status === 'approved' && link.relation !== 'does-not-fit')
-        .map((link): Step => ({ to: link.a === id ? link.b : link.a, edge: linkEdge(graph, link), weight: 1 })),
-    ]
-    // 0-1 breadth-first search: identity edges go to the front of the queue.
-    const distance = new Map<number, number>([[from, 0]])
-    const previous = new Map<number, { from: number; edge: GraphEdge }>()
-    const queue: number[] = [from]
-    while (queue.length) {
-      const current = queue.shift()!
-      if (current === to) break
-      const base = distance.get(current)!
-      for (const step of steps(current)) {
-        const next = base + step.weight
-        if (next >= (distance.get(step.to) ?? Infinity)) continue
-        distance.set(step.to, next)
-        previous.set(step.to, { from: current, edge: step.edge })
-        if (step.weight === 0) queue.unshift(step.to)
-        else queue.push(step.to)
-      }
-    }
     const fromNumber = graph.part(from).partNumber
     const toNumber = graph.part(to).partNumber
-    if (!distance.has(to)) {
+    const steps = shortestFitPath(graph, from, to)
+    if (!steps) {
       return {
         from: fromNumber,
         to: toNumber,
@@ -100,20 +69,13 @@ export class GraphService {
         message: `No chain of reviewed fit links joins ${fromNumber} and ${toNumber}.`,
       }
     }
-    const ids = [to]
-    const edges: GraphEdge[] = []
-    for (let current = to; current !== from; ) {
-      const step = previous.get(current)!
-      edges.unshift(step.edge)
-      ids.unshift(step.from)
-      current = step.from
-    }
-    const links = edges.filter((edge) => edge.type === 'link').length
+    const edges = steps.map((step) => (step.type === 'link' ? linkEdge(graph, step.link) : identityEdge(graph, step.identity)))
+    const links = steps.filter((step) => step.type === 'link').length
     return {
       from: fromNumber,
       to: toNumber,
       found: true,
-      nodes: ids.map((id, index) => node(graph, id, index)),
+      nodes: [from, ...steps.map((step) => step.to)].map((id, index) => node(graph, id, index)),
       edges,
       message:
         from === to

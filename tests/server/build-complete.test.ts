@@ -1,0 +1,59 @@
+import { afterAll, beforeAll, describe, expect, it } from 'vitest'
+import { createTestApp, type TestApp } from '../helpers/test-app'
+
+let t: TestApp
+let agent: Awaited<ReturnType<TestApp['signIn']>>
+beforeAll(async () => {
+  t = await createTestApp()
+  agent = await t.signIn('tech')
+})
+afterAll(() => t.close())
+
+type Slot = { matesWith: string[]; candidates: { part: { partNumber: string; kind: string }; relation: string; modifications: string[]; score: number }[]; note?: string }
+
+describe('POST /api/builds/complete', () => {
+  it('suggests, for each empty slot, parts that fit every filled slot it mates with', async () => {
+    const response = await agent.post('/api/builds/complete').send({ slots: { block: 'TM-BL-1800', head: 'TM-HD-2000' } })
+    expect(response.status).toBe(200)
+    const slots = response.body.slots as Record<string, Slot>
+    expect(Object.keys(slots)).not.toContain('head')
+    const gears = slots['cam-gear']!.candidates.map((c) => c.part.partNumber)
+    expect(gears).toEqual(expect.arrayContaining(['TM-CG-2000', 'TM-CG-2000A']))
+    expect(gears).not.toContain('TM-CG-1800') // wrong camshaft nose for the TK20V head
+    const gaskets = slots['head-gasket']!.candidates
+    expect(gaskets.every((c) => c.part.kind === 'head-gasket')).toBe(true)
+    expect(slots['intake-manifold']!.candidates.map((c) => c.part.partNumber)).not.toContain('TM-IM-1800')
+  })
+
+  it('puts the fewest and easiest modifications first', async () => {
+    const response = await agent.post('/api/builds/complete').send({ slots: { head: 'TM-HD-1800' } })
+    const distributors = (response.body.slots as Record<string, Slot>).distributor!.candidates
+    const scores = distributors.map((c) => c.score)
+    expect(scores).toEqual([...scores].sort((a, b) => a - b))
+    expect(distributors[0]!.relation).toBe('fits')
+    const transfer = distributors.find((c) => c.part.partNumber === 'TM-DS-2000')!
+    expect(transfer.modifications).toEqual(['distributor-internals-transfer'])
+    expect(distributors.map((c) => c.part.partNumber)).not.toContain('TM-DS-2005') // reviewed: does not fit
+  })
+
+  it('checks a candidate against all its filled mating slots at once', async () => {
+    const response = await agent.post('/api/builds/complete').send({
+      slots: { 'cam-gear': 'TM-CG-2000', 'crank-pulley': 'TM-CP-2000', block: 'TM-BL-2000', head: 'TM-HD-2000', 'head-gasket': 'TM-HG-2000' },
+    })
+    const belts = (response.body.slots as Record<string, Slot>)['timing-belt']!.candidates.map((c) => c.part.partNumber)
+    expect(belts).toEqual(['TM-TB-2000']) // the conversion belt is too short here; the narrow one too narrow
+  })
+
+  it('explains a slot with nothing to go on', async () => {
+    const response = await agent.post('/api/builds/complete').send({ slots: { block: 'TM-BL-2000' } })
+    const leads = (response.body.slots as Record<string, Slot>)['ignition-leads']!
+    expect(leads.candidates).toEqual([])
+    expect(leads.note).toMatch(/distributor/)
+  })
+
+  it('answers 400 for a bad slot, like evaluate', async () => {
+    const response = await agent.post('/api/builds/complete').send({ slots: { head: 'TM-BL-2000' } })
+    expect(response.status).toBe(400)
+    expect(response.body.error.details[0].path).toBe('slots.head')
+  })
+})

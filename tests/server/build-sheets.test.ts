@@ -1,0 +1,69 @@
+import { afterAll, beforeAll, describe, expect, it } from 'vitest'
+import { createTestApp, type TestApp } from '../helpers/test-app'
+
+let t: TestApp
+beforeAll(async () => {
+  t = await createTestApp()
+})
+afterAll(() => t.close())
+
+const sheet = { name: 'Customer 4411: head swap', slots: { block: 'TM-BL-1800', head: 'TM-HD-2000' }, targetPowerKw: 105, fuelOctane: 91 }
+
+describe('/api/builds (build sheets)', () => {
+  it('lets a tech save, list, reopen, rename and delete a build sheet', async () => {
+    const tech = await t.signIn('tech')
+    const created = await tech.post('/api/builds').send(sheet)
+    expect(created.status).toBe(201)
+    expect(created.body).toMatchObject({ name: sheet.name, slots: sheet.slots, targetPowerKw: 105, owner: { name: 'Dario Lenk' } })
+    const list = await tech.get('/api/builds')
+    expect(list.body.map((s: { id: number }) => s.id)).toContain(created.body.id)
+    const renamed = await tech.put(`/api/builds/${created.body.id}`).send({ name: 'Renamed', targetPowerKw: null })
+    expect(renamed.body).toMatchObject({ name: 'Renamed', targetPowerKw: null, fuelOctane: 91, slots: sheet.slots })
+    expect((await tech.get(`/api/builds/${created.body.id}`)).body.name).toBe('Renamed')
+    expect((await tech.delete(`/api/builds/${created.body.id}`)).status).toBe(204)
+    expect((await tech.get(`/api/builds/${created.body.id}`)).status).toBe(404)
+  })
+
+  it('stores slots by part number even when a mark was typed', async () => {
+    const tech = await t.signIn('tech')
+    const created = await tech.post('/api/builds').send({ ...sheet, slots: { head: 'H20-3180' } })
+    expect(created.body.slots).toEqual({ head: 'TM-HD-2000' })
+  })
+
+  it('keeps sheets to their owner; editors and administrators see all', async () => {
+    const tech = await t.signIn('tech')
+    const own = (await tech.post('/api/builds').send(sheet)).body
+    const editor = await t.signIn('editor')
+    const editorSheet = (await editor.post('/api/builds').send({ ...sheet, name: 'Editor sheet' })).body
+    expect((await tech.get(`/api/builds/${editorSheet.id}`)).status).toBe(404)
+    expect((await tech.get('/api/builds')).body.map((s: { id: number }) => s.id)).not.toContain(editorSheet.id)
+    expect((await editor.get(`/api/builds/${own.id}`)).status).toBe(200)
+    const admin = await t.signIn('admin')
+    expect((await admin.get('/api/builds')).body.map((s: { id: number }) => s.id)).toEqual(expect.arrayContaining([own.id, editorSheet.id]))
+  })
+
+  it('ships the demo build sheets for the demo technician', async () => {
+    const tech = await t.signIn('tech')
+    const names = (await tech.get('/api/builds')).body.map((s: { name: string }) => s.name)
+    expect(names).toContain('TK20V head on a TK18 block')
+  })
+
+  it('answers 403 to a counter, who may evaluate but not save', async () => {
+    const counter = await t.signIn('counter')
+    expect((await counter.get('/api/builds')).status).toBe(403)
+    expect((await counter.post('/api/builds/evaluate').send({ slots: sheet.slots })).status).toBe(200)
+  })
+
+  it('answers 400 for a nameless sheet, a wrong-kind slot and an empty update, writing nothing', async () => {
+    const tech = await t.signIn('tech')
+    const before = (await tech.get('/api/builds')).body.length
+    expect((await tech.post('/api/builds').send({ ...sheet, name: ' ' })).status).toBe(400)
+    const wrongKind = await tech.post('/api/builds').send({ ...sheet, slots: { head: 'TM-BL-2000' } })
+    expect(wrongKind.status).toBe(400)
+    expect(wrongKind.body.error.details[0].path).toBe('slots.head')
+    const id = (await tech.get('/api/builds')).body[0].id
+    expect((await tech.put(`/api/builds/${id}`).send({})).status).toBe(400)
+    expect((await tech.get('/api/builds/not-a-number')).status).toBe(400)
+    expect((await tech.get('/api/builds')).body.length).toBe(before)
+  })
+})

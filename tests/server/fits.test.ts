@@ -1,0 +1,96 @@
+import { afterAll, beforeAll, describe, expect, it } from 'vitest'
+import { createTestApp, type TestApp } from '../helpers/test-app'
+
+let t: TestApp
+let agent: Awaited<ReturnType<TestApp['signIn']>>
+beforeAll(async () => {
+  t = await createTestApp()
+  agent = await t.signIn('counter')
+})
+afterAll(() => t.close())
+
+type Result = { part: { partNumber: string; kind: string }; relation: string; decidedBy: string; review: string; ruleIds: string[]; modifications: { name: string; steps: string[] }[]; explanation: { type: string; text: string }[] }
+const byNumber = (results: Result[], number: string) => results.find((r) => r.part.partNumber === number)
+
+describe('GET /api/parts/:partNumber/fits', () => {
+  it('lists the reviewed links of a head with their modifications and explanation', async () => {
+    const response = await agent.get('/api/parts/TM-HD-2000/fits')
+    expect(response.status).toBe(200)
+    const swap = byNumber(response.body.results, 'TM-BL-1800')!
+    expect(swap).toMatchObject({ relation: 'fits-with-modification', decidedBy: 'link', review: 'approved' })
+    expect(swap.modifications.map((m) => m.name)).toEqual(['oil-restrictor-fit'])
+    expect(swap.modifications[0]!.steps.length).toBeGreaterThan(0)
+    expect(swap.explanation[0]).toMatchObject({ type: 'link' })
+  })
+
+  it('carries a link over to every part identical to either end, saying so in the explanation', async () => {
+    const response = await agent.get('/api/parts/TM-HD-2000R/fits')
+    expect(response.body.identical.map((p: { partNumber: string }) => p.partNumber)).toEqual(['TM-HD-2000'])
+    const late = byNumber(response.body.results, 'TM-BL-2001')!
+    expect(late.relation).toBe('fits')
+    expect(late.explanation.map((step) => step.type)).toEqual(['identity', 'link', 'identity'])
+    expect(late.explanation[0]!.text).toContain('TM-HD-2000R is the same part as TM-HD-2000')
+  })
+
+  it('lists rule-inferred fits after the reviewed ones, naming the rule', async () => {
+    const response = await agent.get('/api/parts/TM-HD-2000/fits')
+    const reviews = (response.body.results as Result[]).map((r) => r.review)
+    const firstInferred = reviews.indexOf('inferred')
+    expect(firstInferred).toBeGreaterThan(0)
+    expect(reviews.slice(firstInferred).every((review) => review === 'inferred')).toBe(true)
+    const gear = byNumber(response.body.results, 'TM-CG-1800')!
+    expect(gear).toMatchObject({ relation: 'does-not-fit', decidedBy: 'rule', ruleIds: ['shaft-fits'] })
+    const distributor = byNumber(response.body.results, 'TM-DS-1810')!
+    expect(distributor.relation).toBe('fits-with-modification')
+    expect(distributor.modifications.map((m) => m.name)).toEqual(['distributor-internals-transfer'])
+  })
+
+  it('infers a belt against a gear from tooth profile, pitch and width (ISO 9010 interchange)', async () => {
+    const response = await agent.get('/api/parts/TM-CG-2000/fits?kind=timing-belt')
+    const relations = Object.fromEntries((response.body.results as Result[]).map((r) => [r.part.partNumber, r.relation]))
+    expect(relations['TM-TB-2000']).toBe('fits')
+    expect(relations['TM-TB-2022']).toBe('does-not-fit') // 22 mm belt on a 25 mm gear
+    expect(relations['TM-TB-1800']).toBe('does-not-fit') // trapezoidal 9.525 mm pitch
+    expect(byNumber(response.body.results, 'TM-TB-2090')).toMatchObject({ relation: 'fits', decidedBy: 'rule', ruleIds: ['timing-drive'] })
+  })
+
+  it('infers a head gasket against a cylinder bore', async () => {
+    const response = await agent.get('/api/parts/TM-BL-2000/fits?kind=head-gasket')
+    const relations = Object.fromEntries((response.body.results as Result[]).map((r) => [r.part.partNumber, r.relation]))
+    expect(relations['TM-HG-1800']).toBe('does-not-fit') // 84.5 mm gasket bore, 86 mm cylinders
+    expect(relations['TM-HG-2000']).toBe('fits')
+  })
+
+  it('shows proposed links as proposed', async () => {
+    const response = await agent.get('/api/parts/TM-HD-2050/fits?kind=exhaust-manifold')
+    const header = byNumber(response.body.results, 'TM-EM-2000H')!
+    expect(header).toMatchObject({ review: 'proposed', decidedBy: 'link' })
+    expect(header.explanation[0]!.text).toContain('not yet reviewed')
+  })
+
+  it('filters by relation and kind', async () => {
+    const response = await agent.get('/api/parts/TM-HD-2000/fits?relation=does-not-fit&kind=intake-manifold')
+    expect(response.body.results.length).toBeGreaterThan(0)
+    for (const result of response.body.results as Result[]) {
+      expect(result.relation).toBe('does-not-fit')
+      expect(result.part.kind).toBe('intake-manifold')
+    }
+  })
+
+  it('leaves inferred fits out on request', async () => {
+    const response = await agent.get('/api/parts/TM-HD-2000/fits?inferred=0')
+    expect((response.body.results as Result[]).every((r) => r.review !== 'inferred')).toBe(true)
+  })
+
+  it('opens a part from its casting mark', async () => {
+    const response = await agent.get('/api/parts/H18-2207/fits')
+    expect(response.body.part.partNumber).toBe('TM-HD-1800')
+  })
+
+  it('answers 404 for an unknown part and 400 for an unknown relation', async () => {
+    expect((await agent.get('/api/parts/NOPE-1/fits')).status).toBe(404)
+    const bad = await agent.get('/api/parts/TM-HD-2000/fits?relation=maybe')
+    expect(bad.status).toBe(400)
+    expect(bad.body.error.details[0].path).toBe('relation')
+  })
+})

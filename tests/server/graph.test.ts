@@ -1,0 +1,96 @@
+import { afterAll, beforeAll, describe, expect, it } from 'vitest'
+import { MAX_NEIGHBOURHOOD_EDGES, MAX_NEIGHBOURHOOD_NODES } from '../../shared/schemas/graph'
+import { insertLink } from '../../server/services/link-writer'
+import { insertParts } from '../../server/services/part-writer'
+import { createTestApp, type TestApp } from '../helpers/test-app'
+
+let t: TestApp
+let agent: Awaited<ReturnType<TestApp['signIn']>>
+beforeAll(async () => {
+  t = await createTestApp()
+  agent = await t.signIn('counter')
+})
+afterAll(() => t.close())
+
+describe('GET /api/graph/path', () => {
+  it('finds the chain through an adapter when the direct fit is ruled out', async () => {
+    const response = await agent.get('/api/graph/path?from=TM-DS-2005&to=TM-HD-1800')
+    expect(response.status).toBe(200)
+    expect(response.body.found).toBe(true)
+    expect(response.body.nodes.map((n: { id: string }) => n.id)).toEqual(['TM-DS-2005', 'TM-XA-0203', 'TM-HD-1800'])
+    expect(response.body.edges.every((e: { relation: string }) => e.relation === 'fits')).toBe(true)
+  })
+
+  it('walks through identical part numbers at no cost', async () => {
+    const response = await agent.get('/api/graph/path?from=TM-HD-2000R&to=TM-BL-2001')
+    expect(response.body.edges.map((e: { type: string }) => e.type)).toEqual(['identity', 'link', 'identity'])
+    expect(response.body.message).toContain('1 fit link')
+  })
+
+  it('says so when no chain of reviewed fit links exists', async () => {
+    const response = await agent.get('/api/graph/path?from=TM-EM-9001&to=TM-HD-2000')
+    expect(response.body).toMatchObject({ found: false, edges: [] })
+    expect(response.body.message).toMatch(/No chain/)
+  })
+
+  it('answers 400 naming the parameter for a missing or unknown part', async () => {
+    const missing = await agent.get('/api/graph/path?from=TM-HD-2000')
+    expect(missing.status).toBe(400)
+    expect(missing.body.error.details[0].path).toBe('to')
+    const unknown = await agent.get('/api/graph/path?from=TM-HD-2000&to=NOPE')
+    expect(unknown.status).toBe(400)
+    expect(unknown.body.error.details[0].path).toBe('to')
+  })
+})
+
+describe('GET /api/graph/neighbourhood/:partNumber', () => {
+  it('gives nodes and edges ready for drawing, one step out', async () => {
+    const response = await agent.get('/api/graph/neighbourhood/TM-HD-1800?depth=1')
+    expect(response.status).toBe(200)
+    const ids = response.body.nodes.map((n: { id: string }) => n.id)
+    expect(ids).toContain('TM-BL-2000')
+    expect(ids).toContain('TM-XA-0203')
+    for (const edge of response.body.edges) {
+      expect(ids).toContain(edge.source)
+      expect(ids).toContain(edge.target)
+    }
+    expect(response.body.nodes.every((n: { distance: number }) => n.distance <= 1)).toBe(true)
+    expect(response.body.capped).toBe(false)
+  })
+
+  it('reaches further with depth 2', async () => {
+    const one = await agent.get('/api/graph/neighbourhood/TM-HD-1800?depth=1')
+    const two = await agent.get('/api/graph/neighbourhood/TM-HD-1800?depth=2')
+    expect(two.body.nodes.length).toBeGreaterThan(one.body.nodes.length)
+    expect(two.body.nodes.map((n: { id: string }) => n.id)).toContain('TM-BL-2001') // identical to TM-BL-2000
+  })
+
+  it('refuses other depths with 400', async () => {
+    const response = await agent.get('/api/graph/neighbourhood/TM-HD-1800?depth=5')
+    expect(response.status).toBe(400)
+    expect(response.body.error.details[0].path).toBe('depth')
+  })
+
+  it('caps a very large neighbourhood and says it did', async () => {
+    // A fresh app whose graph is first read after the hub is written.
+    const own = await createTestApp()
+    const hubNumber = 'TEST-HUB'
+    await own.dataSource.transaction(async (manager) => {
+      const spokes = Array.from({ length: MAX_NEIGHBOURHOOD_NODES + 50 }, (_, i) => ({
+        partNumber: `TEST-SPOKE-${i}`, kind: 'other' as const, name: 'Spoke', family: '', yearFrom: null, yearTo: null, notes: '', attributes: {}, marks: [],
+      }))
+      const ids = await insertParts(manager, [{ ...spokes[0]!, partNumber: hubNumber }, ...spokes])
+      const hub = ids.get(hubNumber)!
+      for (const spoke of spokes) {
+        await insertLink(manager, { partIds: [hub, ids.get(spoke.partNumber)!], relation: 'fits', modifications: [], note: '', source: 'editor', status: 'approved' })
+      }
+    })
+    const counter = await own.signIn('counter')
+    const response = await counter.get(`/api/graph/neighbourhood/${hubNumber}?depth=2`)
+    await own.close()
+    expect(response.body.capped).toBe(true)
+    expect(response.body.nodes.length).toBeLessThanOrEqual(MAX_NEIGHBOURHOOD_NODES)
+    expect(response.body.edges.length).toBeLessThanOrEqual(MAX_NEIGHBOURHOOD_EDGES)
+    expect(response.body.message).toMatch(/larger/)
+  })
+})
