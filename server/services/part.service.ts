@@ -78,7 +78,8 @@ export class PartService {
     if (!key) return null
     const byKey = await this.parts.findOne({ where: { partKey: key }, relations: { marks: true } })
     if (byKey) return byKey
-    const mark = await this.dataSource.getRepository(PartMarkEntity).findOneBy({ valueKey: key })
+    // A mark can sit on several parts (a casting shared by identical numbers): the first catalogued wins.
+    const mark = await this.dataSource.getRepository(PartMarkEntity).findOne({ where: { valueKey: key }, order: { partId: 'ASC' } })
     return mark ? this.parts.findOne({ where: { id: mark.partId }, relations: { marks: true } }) : null
   }
 
