@@ -3,6 +3,7 @@ import type { LinkSource, Relation, ReviewStatus } from '../../shared/schemas/fi
 import { IdentityEntity } from '../entities/identity.entity'
 import { LinkEntity } from '../entities/link.entity'
 import { ModificationEntity } from '../entities/modification.entity'
+import { unknownModification } from './modification.service'
 
 export type LinkInput = {
   partIds: [number, number]
@@ -32,21 +33,7 @@ export async function modificationIds(manager: EntityManager, names: string[]): 
       ids.push(existing.id)
       continue
     }
-    const created = await repo.save(
-      repo.create({
-        name,
-        title: name,
-        summary: '',
-        steps: [],
-        extraParts: [],
-        consumables: [],
-        skillLevel: 'skilled',
-        timeMinutes: null,
-        cautions: [],
-        status: 'proposed',
-        source: 'import',
-      }),
-    )
+    const created = await repo.save(repo.create({ ...unknownModification(name), source: 'import' }))
     ids.push(created.id)
   }
   return ids

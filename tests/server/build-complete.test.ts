@@ -1,4 +1,5 @@
 import { afterAll, beforeAll, describe, expect, it } from 'vitest'
+import { expectBadRequest } from '../helpers/expect-error'
 import { createTestApp, type TestApp } from '../helpers/test-app'
 
 let t: TestApp
@@ -53,7 +54,6 @@ describe('POST /api/builds/complete', () => {
 
   it('answers 400 for a bad slot, like evaluate', async () => {
     const response = await agent.post('/api/builds/complete').send({ slots: { head: 'TM-BL-2000' } })
-    expect(response.status).toBe(400)
-    expect(response.body.error.details[0].path).toBe('slots.head')
+    expectBadRequest(response, 'slots.head')
   })
 })

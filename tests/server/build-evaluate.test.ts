@@ -1,5 +1,6 @@
 import { readFileSync } from 'node:fs'
 import { afterAll, beforeAll, describe, expect, it } from 'vitest'
+import { expectBadRequest } from '../helpers/expect-error'
 import { createTestApp, type TestApp } from '../helpers/test-app'
 
 let t: TestApp
@@ -161,11 +162,7 @@ describe('POST /api/builds/evaluate with bad input', () => {
     [{ slots: { head: 'TM-HD-2000' }, targetPowerKw: -5 }, 'targetPowerKw', /above zero/],
     [{}, 'slots', /.+/],
   ])('answers 400 for %j naming %s', async (body, path, message) => {
-    const response = await agent.post('/api/builds/evaluate').send(body)
-    expect(response.status).toBe(400)
-    const detail = response.body.error.details.find((d: { path: string }) => d.path === path)
-    expect(detail, JSON.stringify(response.body)).toBeDefined()
-    expect(detail.message).toMatch(message)
+    expectBadRequest(await agent.post('/api/builds/evaluate').send(body), path, message)
   })
 
   it('names every bad slot at once', async () => {

@@ -1,4 +1,5 @@
 import { afterAll, beforeAll, describe, expect, it } from 'vitest'
+import { expectBadRequest } from '../helpers/expect-error'
 import { createTestApp, type TestApp } from '../helpers/test-app'
 
 let t: TestApp
@@ -90,7 +91,6 @@ describe('GET /api/parts/:partNumber/fits', () => {
   it('answers 404 for an unknown part and 400 for an unknown relation', async () => {
     expect((await agent.get('/api/parts/NOPE-1/fits')).status).toBe(404)
     const bad = await agent.get('/api/parts/TM-HD-2000/fits?relation=maybe')
-    expect(bad.status).toBe(400)
-    expect(bad.body.error.details[0].path).toBe('relation')
+    expectBadRequest(bad, 'relation')
   })
 })

@@ -2,6 +2,7 @@ import { afterAll, beforeAll, describe, expect, it } from 'vitest'
 import { MAX_NEIGHBOURHOOD_EDGES, MAX_NEIGHBOURHOOD_NODES } from '../../shared/schemas/graph'
 import { insertLink } from '../../server/services/link-writer'
 import { insertParts } from '../../server/services/part-writer'
+import { expectBadRequest } from '../helpers/expect-error'
 import { createTestApp, type TestApp } from '../helpers/test-app'
 
 let t: TestApp
@@ -35,11 +36,9 @@ describe('GET /api/graph/path', () => {
 
   it('answers 400 naming the parameter for a missing or unknown part', async () => {
     const missing = await agent.get('/api/graph/path?from=TM-HD-2000')
-    expect(missing.status).toBe(400)
-    expect(missing.body.error.details[0].path).toBe('to')
+    expectBadRequest(missing, 'to')
     const unknown = await agent.get('/api/graph/path?from=TM-HD-2000&to=NOPE')
-    expect(unknown.status).toBe(400)
-    expect(unknown.body.error.details[0].path).toBe('to')
+    expectBadRequest(unknown, 'to')
   })
 })
 
@@ -67,8 +66,7 @@ describe('GET /api/graph/neighbourhood/:partNumber', () => {
 
   it('refuses other depths with 400', async () => {
     const response = await agent.get('/api/graph/neighbourhood/TM-HD-1800?depth=5')
-    expect(response.status).toBe(400)
-    expect(response.body.error.details[0].path).toBe('depth')
+    expectBadRequest(response, 'depth')
   })
 
   it('caps a very large neighbourhood and says it did', async () => {
