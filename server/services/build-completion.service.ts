@@ -4,7 +4,8 @@ import type { Candidate, Completion } from '../../shared/schemas/build'
 import { SKILL_LEVELS, worstVerdict, type Relation } from '../../shared/schemas/fitment'
 import type { PartAttributes } from '../../shared/schemas/part-attributes'
 import type { BuildEvaluationService, ResolvedBuild } from './build-evaluation.service'
-import type { FitGraphIndex } from './fit-graph'
+import type { FitGraph, FitGraphIndex } from './fit-graph'
+import type { Part } from '../../shared/schemas/part'
 import type { ModificationService } from './modification.service'
 import type { PartService } from './part.service'
 
@@ -52,27 +53,42 @@ export class BuildCompletionService {
     return result
   }
 
-  private async candidatesFor(slot: SlotId, build: ResolvedBuild, graph: Awaited<ReturnType<FitGraphIndex['snapshot']>>) {
+  /** A candidate in the slot against every filled slot it mates with; null unless all fit. */
+  private async judge(slot: SlotId, row: Row, build: ResolvedBuild, graph: FitGraph) {
+    const trial: ResolvedBuild = {
+      ...build,
+      parts: { ...build.parts, [slot]: { partNumber: row.partNumber, attributes: JSON.parse(row.attributes) as PartAttributes, yearTo: row.yearTo } as Part },
+      ids: { ...build.ids, [slot]: row.id },
+    }
+    const { facts } = this.evaluation.prepare(trial)
+    const pairs = await this.evaluation.judgePairs(graph, trial, facts, slot)
+    if (pairs.some((pair) => pair.relation === 'does-not-fit' || pair.relation === 'unknown')) return null
+    return {
+      relation: worstVerdict(pairs.map((pair) => pair.relation)) as Relation,
+      modifications: [...new Set(pairs.flatMap((pair) => pair.modifications))],
+      reasons: pairs.map((pair) => `${pair.label}: ${pair.explanation[0]?.text ?? pair.relation}`),
+      byRule: pairs.some((pair) => pair.decidedBy === 'rule'),
+    }
+  }
+
+  private async candidatesFor(slot: SlotId, build: ResolvedBuild, graph: FitGraph) {
     const rows = (await this.dataSource.query('SELECT id, partNumber, attributes, yearTo FROM part WHERE kind = ? ORDER BY partNumber', [
       slot,
     ])) as Row[]
-    const accepted: { row: Row; relation: Relation; modifications: string[]; reasons: string[]; byRule: boolean }[] = []
+    type Judgement = { relation: Relation; modifications: string[]; reasons: string[]; byRule: boolean } | null
+    const accepted: ({ row: Row } & NonNullable<Judgement>)[] = []
+    const neighbourIds = matingSlots(slot).flatMap((other) => (build.ids[other] === undefined ? [] : [build.ids[other]!]))
+    // Without a reviewed link the rules decide, and parts with the same attributes get the same answer.
+    const byAttributes = new Map<string, Judgement>()
     for (const row of rows) {
-      const trial = {
-        parts: { ...build.parts, [slot]: { partNumber: row.partNumber, attributes: JSON.parse(row.attributes) as PartAttributes, yearTo: row.yearTo } },
-        ids: { ...build.ids, [slot]: row.id },
-        context: build.context,
+      const linked = neighbourIds.some((id) => graph.linkBetween(row.id, id))
+      const memoKey = `${row.yearTo}|${row.attributes}`
+      let judgement = linked ? undefined : byAttributes.get(memoKey)
+      if (judgement === undefined) {
+        judgement = await this.judge(slot, row, build, graph)
+        if (!linked) byAttributes.set(memoKey, judgement)
       }
-      const { facts } = this.evaluation.prepare(trial as ResolvedBuild)
-      const pairs = await this.evaluation.judgePairs(graph, trial, facts, slot)
-      if (pairs.some((pair) => pair.relation === 'does-not-fit' || pair.relation === 'unknown')) continue
-      accepted.push({
-        row,
-        relation: worstVerdict(pairs.map((pair) => pair.relation)) as Relation,
-        modifications: [...new Set(pairs.flatMap((pair) => pair.modifications))],
-        reasons: pairs.map((pair) => `${pair.label}: ${pair.explanation[0]?.text ?? pair.relation}`),
-        byRule: pairs.some((pair) => pair.decidedBy === 'rule'),
-      })
+      if (judgement) accepted.push({ row, ...judgement })
     }
     const catalogue = await this.modifications.byNames(accepted.flatMap((a) => a.modifications))
     const full = new Map((await this.parts.byIds(accepted.map((a) => a.row.id))).map((part) => [part.partNumber, part]))

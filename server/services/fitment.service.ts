@@ -13,7 +13,7 @@ import { AppError } from '../errors/app-error'
 import { chainSteps } from '../reasoning/explain'
 import { buildFacts } from '../reasoning/facts'
 import { computeFigures } from '../reasoning/figures'
-import { summariseOutcomes } from '../reasoning/pair-judge'
+import { summariseOutcomes, type RuleSummary } from '../reasoning/pair-judge'
 import type { RuleBook } from '../reasoning/rule-book'
 import type { FitGraph, FitGraphIndex } from './fit-graph'
 import { reviewedFits } from './graph-search'
@@ -35,7 +35,8 @@ type RuleCandidate = { id: number; kind: PartKind; attributes: string; yearTo: n
 const KIND_ORDER = new Map<string, number>(BUILD_SLOTS.map((slot, index) => [slot.id, index]))
 const REVIEW_ORDER = { approved: 0, proposed: 1, inferred: 2 }
 
-export type FitsQuery = { relation?: Relation; kind?: PartKind; inferred: boolean }
+export type FitsQuery = { relation?: Relation; kind?: PartKind; inferred: boolean; inferredLimit: number }
+type Truncated = FitsResponse['truncated']
 
 export class FitmentService {
   constructor(
@@ -58,9 +59,9 @@ export class FitmentService {
     const members = graph.classOf(entity.id)
     const reviewed = this.reviewedFits(graph, entity.id)
     const inferred = query.inferred && isSlotId(entity.kind)
-      ? await this.inferredFits(entity.kind, entity.attributes, entity.yearTo, new Set([...members, ...reviewed.keys()]), query.kind)
-      : []
-    const all = [...reviewed.values(), ...inferred].filter(
+      ? await this.inferredFits(entity.kind, entity.attributes, entity.yearTo, new Set([...members, ...reviewed.keys()]), query)
+      : { found: [], truncated: [] }
+    const all = [...reviewed.values(), ...inferred.found].filter(
       (found) =>
         (!query.relation || found.relation === query.relation) &&
         (!query.kind || graph.part(found.partId).kind === query.kind),
@@ -83,6 +84,7 @@ export class FitmentService {
       part: byNumber.get(entity.partNumber)!,
       identical: members.filter((id) => id !== entity.id).map((id) => byNumber.get(graph.part(id).partNumber)!),
       results,
+      truncated: inferred.truncated,
     }
   }
 
@@ -114,30 +116,44 @@ export class FitmentService {
     return found
   }
 
-  /** Parts of mating kinds whose pair the rules decide from attributes alone. */
+  /**
+   * Parts of mating kinds whose pair the rules decide from attributes alone,
+   * at most `inferredLimit` per kind and relation. Parts with the same
+   * attributes get the same answer, so each distinct set is judged once.
+   */
   private async inferredFits(
     kind: SlotId,
     attributes: PartAttributes,
     yearTo: number | null,
     exclude: Set<number>,
-    onlyKind?: PartKind,
-  ): Promise<Found[]> {
-    const kinds = matingSlots(kind).filter((other) => this.rules.hasPairRules(kind, other) && (!onlyKind || onlyKind === other))
-    if (kinds.length === 0) return []
+    query: FitsQuery,
+  ): Promise<{ found: Found[]; truncated: Truncated }> {
+    const kinds = matingSlots(kind).filter((other) => this.rules.hasPairRules(kind, other) && (!query.kind || query.kind === other))
+    if (kinds.length === 0) return { found: [], truncated: [] }
     const candidates = (await this.dataSource.query(
       `SELECT id, kind, attributes, yearTo FROM part WHERE kind IN (${kinds.map(() => '?').join(',')}) ORDER BY partNumber`,
       kinds,
     )) as RuleCandidate[]
     const self = { attributes, yearTo }
+    const judged = new Map<string, RuleSummary>()
+    const counts = new Map<string, number>()
     const found: Found[] = []
     for (const candidate of candidates) {
       if (exclude.has(candidate.id)) continue
-      const other = { attributes: JSON.parse(candidate.attributes) as PartAttributes, yearTo: candidate.yearTo }
       const otherKind = candidate.kind as SlotId
-      const slotParts = { [kind]: self, [otherKind]: other }
-      const facts = buildFacts(slotParts, computeFigures(slotParts), {})
-      const summary = summariseOutcomes(await this.rules.evaluatePair(kind, otherKind, facts))
-      if (!summary.relation) continue
+      const memoKey = `${otherKind}|${candidate.yearTo}|${candidate.attributes}`
+      let summary = judged.get(memoKey)
+      if (!summary) {
+        const other = { attributes: JSON.parse(candidate.attributes) as PartAttributes, yearTo: candidate.yearTo }
+        const slotParts = { [kind]: self, [otherKind]: other }
+        summary = summariseOutcomes(await this.rules.evaluatePair(kind, otherKind, buildFacts(slotParts, computeFigures(slotParts), {})))
+        judged.set(memoKey, summary)
+      }
+      if (!summary.relation || (query.relation && summary.relation !== query.relation)) continue
+      const countKey = `${otherKind}|${summary.relation}`
+      const count = (counts.get(countKey) ?? 0) + 1
+      counts.set(countKey, count)
+      if (count > query.inferredLimit) continue
       found.push({
         partId: candidate.id,
         relation: summary.relation,
@@ -151,6 +167,12 @@ export class FitmentService {
         ],
       })
     }
-    return found
+    const truncated = [...counts]
+      .filter(([, total]) => total > query.inferredLimit)
+      .map(([key, total]) => {
+        const [otherKind, relation] = key.split('|') as [SlotId, Relation]
+        return { kind: otherKind, relation, shown: query.inferredLimit, total }
+      })
+    return { found, truncated }
   }
 }

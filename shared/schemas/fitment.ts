@@ -90,11 +90,17 @@ export const fitsQuerySchema = z.object({
     .enum(['0', '1', 'true', 'false'])
     .optional()
     .transform((value) => value !== '0' && value !== 'false'),
+  /** Most inferred results per kind and relation; the answer says how many more there are. */
+  inferredLimit: z.coerce.number().int().min(1).max(500).default(50),
 })
+
+export const INFERRED_LIMIT_DEFAULT = 50
 
 export const fitsResponseSchema = z.object({
   part: partSchema,
   identical: z.array(partSchema),
   results: z.array(fitResultSchema),
+  /** Kinds and relations whose inferred results were cut to the limit. */
+  truncated: z.array(z.object({ kind: partKindSchema, relation: relationSchema, shown: z.number().int(), total: z.number().int() })),
 })
 export type FitsResponse = z.infer<typeof fitsResponseSchema>

@@ -83,6 +83,15 @@ describe('GET /api/parts/:partNumber/fits', () => {
     expect((response.body.results as Result[]).every((r) => r.review !== 'inferred')).toBe(true)
   })
 
+  it('cuts inferred results to the limit per kind and relation and says how many there are', async () => {
+    const response = await agent.get('/api/parts/TM-HD-2000/fits?kind=head-gasket&inferredLimit=2')
+    const inferred = (response.body.results as Result[]).filter((r) => r.review === 'inferred')
+    expect(inferred).toHaveLength(2)
+    expect(response.body.truncated).toEqual([{ kind: 'head-gasket', relation: 'fits', shown: 2, total: 4 }])
+    const all = await agent.get('/api/parts/TM-HD-2000/fits?kind=head-gasket')
+    expect(all.body.truncated).toEqual([])
+  })
+
   it('opens a part from its casting mark', async () => {
     const response = await agent.get('/api/parts/H18-2207/fits')
     expect(response.body.part.partNumber).toBe('TM-HD-1800')
