@@ -13,6 +13,7 @@ import { partRoutes } from './routes/parts.routes'
 import { userRoutes } from './routes/users.routes'
 import { buildRoutes } from './routes/builds.routes'
 import { fitmentRoutes } from './routes/fitment.routes'
+import { linkRoutes } from './routes/links.routes'
 import type { RuleBook } from './reasoning/rule-book'
 import { createServices } from './services'
 
@@ -42,6 +43,7 @@ export async function createApp({ config, dataSource, version, rules, clientDir 
   api.use(partRoutes(services.parts))
   api.use(fitmentRoutes(services))
   api.use(buildRoutes(services))
+  api.use(linkRoutes(services.links))
   api.use(userRoutes(services.users))
   api.use(requireSignIn, notFoundApi)
   app.use('/api', api)

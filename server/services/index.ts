@@ -7,6 +7,7 @@ import { BuildSheetService } from './build-sheet.service'
 import { FitGraphIndex } from './fit-graph'
 import { FitmentService } from './fitment.service'
 import { GraphService } from './graph.service'
+import { LinkService } from './link.service'
 import { ModificationService } from './modification.service'
 import { PartService } from './part.service'
 import { UserService } from './user.service'
@@ -28,6 +29,7 @@ export function createServices(dataSource: DataSource, _config: AppConfig, rules
     evaluation,
     completion: new BuildCompletionService(dataSource, parts, graphIndex, evaluation, modifications),
     sheets: new BuildSheetService(dataSource, parts),
+    links: new LinkService(dataSource, parts, graphIndex),
   }
 }
 export type Services = ReturnType<typeof createServices>
