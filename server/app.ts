@@ -13,6 +13,7 @@ import { partRoutes } from './routes/parts.routes'
 import { userRoutes } from './routes/users.routes'
 import { buildRoutes } from './routes/builds.routes'
 import { fitmentRoutes } from './routes/fitment.routes'
+import { importRoutes } from './routes/imports.routes'
 import type { RuleBook } from './reasoning/rule-book'
 import { createServices } from './services'
 
@@ -43,6 +44,7 @@ export async function createApp({ config, dataSource, version, rules, clientDir 
   api.use(fitmentRoutes(services))
   api.use(buildRoutes(services))
   api.use(userRoutes(services.users))
+  api.use(importRoutes(services, config))
   api.use(requireSignIn, notFoundApi)
   app.use('/api', api)
 

@@ -4,15 +4,17 @@ import type { RuleBook } from '../reasoning/rule-book'
 import { BuildCompletionService } from './build-completion.service'
 import { BuildEvaluationService } from './build-evaluation.service'
 import { BuildSheetService } from './build-sheet.service'
+import { ExportService } from './export.service'
 import { FitGraphIndex } from './fit-graph'
 import { FitmentService } from './fitment.service'
 import { GraphService } from './graph.service'
+import { ImportService } from './import.service'
 import { ModificationService } from './modification.service'
 import { PartService } from './part.service'
 import { UserService } from './user.service'
 
 /** Every service, built once per app around one data source and one rule book. */
-export function createServices(dataSource: DataSource, _config: AppConfig, rules: RuleBook) {
+export function createServices(dataSource: DataSource, config: AppConfig, rules: RuleBook) {
   const parts = new PartService(dataSource)
   const graphIndex = new FitGraphIndex(dataSource)
   const modifications = new ModificationService(dataSource)
@@ -28,6 +30,8 @@ export function createServices(dataSource: DataSource, _config: AppConfig, rules
     evaluation,
     completion: new BuildCompletionService(dataSource, parts, graphIndex, evaluation, modifications),
     sheets: new BuildSheetService(dataSource, parts),
+    imports: new ImportService(dataSource, { maxRows: config.importMaxRows }, graphIndex),
+    exports: new ExportService(dataSource),
   }
 }
 export type Services = ReturnType<typeof createServices>
