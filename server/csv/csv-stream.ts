@@ -124,11 +124,12 @@ export async function readCsvStream(input: Readable, options: CsvReadOptions): P
   let dataRows = 0
   let headerSeen = false
   await new Promise<void>((resolve, reject) => {
+    // Reject before aborting: papaparse calls complete() from abort(), which would resolve first.
     const fail = (error: unknown, parser?: Papa.Parser) => {
+      reject(error)
       parser?.abort()
       source.destroy()
       input.destroy()
-      reject(error)
     }
     Papa.parse<string[], Readable>(source, {
       delimiter,
