@@ -10,7 +10,7 @@ import { MARK_TYPES, normalisePartCode } from '../../shared/schemas/part'
 import { attributeShapes } from '../../shared/schemas/part-attributes'
 import { partInputSchema, type PartInput } from '../../shared/schemas/part-input'
 import { PART_KINDS, type PartKind } from '../../shared/schemas/part-kinds'
-import { attributeKeyForColumn } from '../../server/csv/part-row'
+import { snakeToCamel } from '../../server/csv/part-row'
 import { openDatabase } from '../../server/db/data-source'
 import { ExportService } from '../../server/services/export.service'
 import { FitGraphIndex } from '../../server/services/fit-graph'
@@ -41,7 +41,8 @@ const UNKNOWN_KEYS = ['finish', 'supplier_ref', 'bore_mm', 'thread']
 function partFor(kind: PartKind): fc.Arbitrary<PartInput> {
   const shape = attributeShapes[kind] as Record<string, z.ZodType>
   const known = fc.record(Object.fromEntries(Object.entries(shape).map(([name, schema]) => [name, valueFor(schema)])), { requiredKeys: [] })
-  const unknownKeys = UNKNOWN_KEYS.filter((key) => attributeKeyForColumn(kind, key) === key)
+  // A column the kind knows is typed, so it cannot hold an unknown attribute of that kind.
+  const unknownKeys = UNKNOWN_KEYS.filter((key) => !(snakeToCamel(key) in shape))
   const unknown = fc.dictionary(fc.constantFrom(...unknownKeys), trimmed(15), { maxKeys: 2 })
   const years = fc.tuple(fc.option(fc.integer({ min: 1900, max: 2100 })), fc.option(fc.integer({ min: 1900, max: 2100 })))
   const mark = fc.record({ type: fc.constantFrom(...MARK_TYPES), value: trimmed(10).filter((v) => !v.includes(';')) })
