@@ -14,6 +14,7 @@ import { userRoutes } from './routes/users.routes'
 import { buildRoutes } from './routes/builds.routes'
 import { fitmentRoutes } from './routes/fitment.routes'
 import { linkRoutes } from './routes/links.routes'
+import { importRoutes } from './routes/imports.routes'
 import type { RuleBook } from './reasoning/rule-book'
 import { createServices } from './services'
 
@@ -45,6 +46,7 @@ export async function createApp({ config, dataSource, version, rules, clientDir 
   api.use(buildRoutes(services))
   api.use(linkRoutes(services.links))
   api.use(userRoutes(services.users))
+  api.use(importRoutes(services, config))
   api.use(requireSignIn, notFoundApi)
   app.use('/api', api)
 

@@ -40,12 +40,31 @@ function parseYear(cell: string | undefined, column: string, errors: RowError[])
   return Number(text)
 }
 
+/** Any column but the part's own fields and the mark lists holds an attribute. */
+export function isAttributeColumn(column: string): boolean {
+  return !(PART_COLUMNS as readonly string[]).includes(column) && !(column in MARK_COLUMNS)
+}
+
+const knownTypes = new Map(
+  PART_KINDS.map((kind) => [kind, new Map(knownAttributes(kind).map((attribute) => [attribute.name, attribute.type]))]),
+)
+
+/** The attribute a column holds for a kind: the camelCase name when the kind knows it, else the header as written. */
+export function attributeKeyForColumn(kind: PartKind, column: string): string {
+  const camel = snakeToCamel(column)
+  return knownTypes.get(kind)?.has(camel) ? camel : column
+}
+
+/** The column an attribute is written to, the inverse of attributeKeyForColumn. */
+export function attributeColumn(kind: PartKind, key: string): string {
+  return knownTypes.get(kind)?.has(key) ? camelToSnake(key) : key
+}
+
 function typedAttributes(kind: PartKind, row: Record<string, string>, errors: RowError[]) {
-  const known = new Map(knownAttributes(kind).map((attribute) => [attribute.name, attribute.type]))
+  const known = knownTypes.get(kind)!
   const attributes: Record<string, string | number | boolean> = {}
-  const columnOf: Record<string, string> = {}
   for (const [column, rawValue] of Object.entries(row)) {
-    if ((PART_COLUMNS as readonly string[]).includes(column) || column in MARK_COLUMNS) continue
+    if (!isAttributeColumn(column)) continue
     const value = (rawValue ?? '').trim()
     if (!value) continue
     const camel = snakeToCamel(column)
@@ -54,7 +73,6 @@ function typedAttributes(kind: PartKind, row: Record<string, string>, errors: Ro
       attributes[column] = value
       continue
     }
-    columnOf[camel] = column
     if (type === 'number') {
       const number = Number(value)
       if (!Number.isFinite(number)) errors.push({ column, message: `"${value}" is not a number.` })
@@ -68,7 +86,7 @@ function typedAttributes(kind: PartKind, row: Record<string, string>, errors: Ro
       attributes[camel] = value
     }
   }
-  return { attributes, columnOf }
+  return attributes
 }
 
 /**
@@ -88,12 +106,12 @@ export function parsePartRow(row: Record<string, string>): PartRowResult {
   const kind = kindText as PartKind
   const yearFrom = parseYear(row.year_from, 'year_from', errors)
   const yearTo = parseYear(row.year_to, 'year_to', errors)
-  const { attributes, columnOf } = typedAttributes(kind, row, errors)
+  const attributes = typedAttributes(kind, row, errors)
   const marks = Object.entries(MARK_COLUMNS).flatMap(([column, type]) =>
     splitList(row[column]).map((value) => ({ type, value })),
   )
   if (errors.length) return { ok: false, errors }
-  const parsed = partInputSchema.safeParse({
+  return checkPart({
     partNumber: row.part_number ?? '',
     kind,
     name: row.name ?? '',
@@ -104,6 +122,11 @@ export function parsePartRow(row: Record<string, string>): PartRowResult {
     attributes,
     marks,
   })
+}
+
+/** Checks a whole part against the shared schema, naming each problem by its column. */
+export function checkPart(candidate: PartInput): PartRowResult {
+  const parsed = partInputSchema.safeParse(candidate)
   if (parsed.success) return { ok: true, part: parsed.data }
   return {
     ok: false,
@@ -111,11 +134,37 @@ export function parsePartRow(row: Record<string, string>): PartRowResult {
       const [first, second] = issue.path.map(String)
       const column =
         first === 'attributes' && second
-          ? (columnOf[second] ?? second)
+          ? attributeColumn(candidate.kind, second)
           : first === 'yearFrom'
             ? 'year_from'
             : camelToSnake(first ?? 'row')
       return { column, message: issue.message }
     }),
   }
+}
+
+function cellText(value: string | number | boolean | null): string {
+  if (value === null) return ''
+  return typeof value === 'string' ? value : String(value)
+}
+
+/** A part as the cells of a parts file, column by column: the inverse of parsePartRow. */
+export function partCells(part: PartInput): Record<string, string> {
+  const cells: Record<string, string> = {
+    part_number: part.partNumber,
+    kind: part.kind,
+    name: part.name,
+    family: part.family,
+    year_from: cellText(part.yearFrom),
+    year_to: cellText(part.yearTo),
+    notes: part.notes,
+  }
+  for (const [column, type] of Object.entries(MARK_COLUMNS)) {
+    cells[column] = part.marks
+      .filter((mark) => mark.type === type)
+      .map((mark) => mark.value)
+      .join('; ')
+  }
+  for (const [key, value] of Object.entries(part.attributes)) cells[attributeColumn(part.kind, key)] = cellText(value)
+  return cells
 }

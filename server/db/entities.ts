@@ -1,6 +1,8 @@
 import { AppSettingEntity } from '../entities/app-setting.entity'
 import { BuildSheetEntity } from '../entities/build-sheet.entity'
 import { IdentityEntity } from '../entities/identity.entity'
+import { ImportBatchEntity } from '../entities/import-batch.entity'
+import { ImportChangeEntity } from '../entities/import-change.entity'
 import { LinkEntity } from '../entities/link.entity'
 import { ModificationEntity } from '../entities/modification.entity'
 import { PartMarkEntity } from '../entities/part-mark.entity'
@@ -18,4 +20,6 @@ export const entities = [
   LinkEntity,
   IdentityEntity,
   BuildSheetEntity,
+  ImportBatchEntity,
+  ImportChangeEntity,
 ]

@@ -1,5 +1,6 @@
+import { CsvImport1796154117731 } from '../migrations/1796154117731-CsvImport'
 import { FitmentGraph1796151639561 } from '../migrations/1796151639561-FitmentGraph'
 import { Foundation1796150879975 } from '../migrations/1796150879975-Foundation'
 
 /** In the order they run. */
-export const migrations = [Foundation1796150879975, FitmentGraph1796151639561]
+export const migrations = [Foundation1796150879975, FitmentGraph1796151639561, CsvImport1796154117731]

@@ -1,20 +1,20 @@
-import { readdirSync, readFileSync } from 'node:fs'
+import { readdirSync, readFileSync, statSync } from 'node:fs'
 import path from 'node:path'
-import type { DataSource } from 'typeorm'
+import type { DataSource, EntityManager } from 'typeorm'
+import { z } from 'zod'
 import type { Role } from '../../shared/schemas/auth'
-import type { PartInput } from '../../shared/schemas/part-input'
-import { parsePartRow } from '../csv/part-row'
-import { readCsvText } from '../csv/read-csv'
-import { PartEntity } from '../entities/part.entity'
-import { UserEntity } from '../entities/user.entity'
-import { insertParts } from '../services/part-writer'
-import { insertIdentity, insertLink } from '../services/link-writer'
-import { splitList } from '../csv/part-row'
 import { buildSheetInputSchema } from '../../shared/schemas/build'
 import { linkSourceSchema, relationSchema, type ReviewStatus } from '../../shared/schemas/fitment'
+import type { ImportType } from '../../shared/schemas/imports'
+import { splitList } from '../csv/part-row'
+import { readCsvText } from '../csv/read-csv'
 import { BuildSheetEntity } from '../entities/build-sheet.entity'
-import type { EntityManager } from 'typeorm'
-import { z } from 'zod'
+import { PartEntity } from '../entities/part.entity'
+import { UserEntity } from '../entities/user.entity'
+import { AppError } from '../errors/app-error'
+import { FitGraphIndex } from '../services/fit-graph'
+import { ImportService, type ImportUser } from '../services/import.service'
+import { insertLink } from '../services/link-writer'
 import type { UserService } from '../services/user.service'
 
 export const DEMO_PASSWORD = 'fitwright-demo'
@@ -25,43 +25,37 @@ export const DEMO_USERS: { email: string; name: string; role: Role }[] = [
   { email: 'tech@fitwright.test', name: 'Dario Lenk', role: 'tech' },
 ]
 
-/** Reads every parts file of the demo scenario; a bad row is a bug in the scenario. */
-export function readDemoParts(demoDir: string): PartInput[] {
-  const partsDir = path.join(demoDir, 'parts')
-  return readdirSync(partsDir)
-    .filter((file) => file.endsWith('.csv'))
-    .sort()
-    .flatMap((file) =>
-      readCsvText(readFileSync(path.join(partsDir, file), 'utf8')).rows.map((row, index) => {
-        const result = parsePartRow(row)
-        if (!result.ok) {
-          const problems = result.errors.map((e) => `${e.column}: ${e.message}`).join('; ')
-          throw new Error(`Demo data ${file} row ${index + 2}: ${problems}`)
-        }
-        return result.part
-      }),
-    )
+/**
+ * The demo catalogue goes in the way an editor's would: each parts file, then
+ * the links file, as an import batch (so a fresh demo has batches to show and
+ * revert). A rejected row is a bug in the scenario.
+ */
+async function importDemoFile(imports: ImportService, demoDir: string, file: string, type: ImportType, user: ImportUser) {
+  const filePath = path.join(demoDir, file)
+  try {
+    await imports.run({ filePath, fileName: `demo/${file}`, fileSize: statSync(filePath).size, type, mode: 'commit', validRowsOnly: false, user })
+  } catch (error) {
+    if (!(error instanceof AppError)) throw error
+    const details = (error.details ?? []).map((detail) => `${detail.path}: ${detail.message}`).join('; ')
+    throw new Error(`Demo data ${file}: ${error.message} ${details}`)
+  }
 }
 
-/** Demo links and identities, in the links file format; a bad row is a bug in the scenario. */
-async function seedLinks(manager: EntityManager, ids: Map<string, number>, file: string, status: ReviewStatus) {
+/** Links still awaiting review, which an import cannot make (it approves what it writes). */
+async function seedProposedLinks(manager: EntityManager, file: string, status: ReviewStatus) {
+  const parts = (await manager.query('SELECT id, partNumber FROM part')) as { id: number; partNumber: string }[]
+  const ids = new Map(parts.map((part) => [part.partNumber, part.id]))
   const rows = readCsvText(readFileSync(file, 'utf8')).rows
   for (const [index, row] of rows.entries()) {
-    const where = `${path.basename(file)} row ${index + 2}`
     const a = ids.get(row.from_part ?? '')
     const b = ids.get(row.to_part ?? '')
-    if (a === undefined || b === undefined) throw new Error(`Demo data ${where}: unknown part`)
-    const source = linkSourceSchema.parse(row.source)
-    if (row.relation === 'identical') {
-      await insertIdentity(manager, { partIds: [a, b], note: row.note ?? '', source })
-      continue
-    }
+    if (a === undefined || b === undefined) throw new Error(`Demo data ${path.basename(file)} row ${index + 2}: unknown part`)
     await insertLink(manager, {
       partIds: [a, b],
       relation: relationSchema.parse(row.relation),
       modifications: splitList(row.modifications),
       note: row.note ?? '',
-      source,
+      source: linkSourceSchema.parse(row.source),
       status,
     })
   }
@@ -95,14 +89,16 @@ export async function seedDemo(dataSource: DataSource, users: UserService, demoD
     dataSource.getRepository(PartEntity).count(),
   ])
   if (userCount > 0 || partCount > 0) return false
-  const parts = readDemoParts(demoDir)
   const created = []
   for (const user of DEMO_USERS) created.push(await users.create({ ...user, password: DEMO_PASSWORD }))
+  const editor = created.find((user) => user.role === 'editor')!
   const tech = created.find((user) => user.role === 'tech')!
+  const imports = new ImportService(dataSource, { maxRows: Number.MAX_SAFE_INTEGER }, new FitGraphIndex(dataSource))
+  const partFiles = readdirSync(path.join(demoDir, 'parts')).filter((file) => file.endsWith('.csv')).sort()
+  for (const file of partFiles) await importDemoFile(imports, demoDir, `parts/${file}`, 'parts', editor)
+  await importDemoFile(imports, demoDir, 'links.csv', 'links', editor)
   await dataSource.transaction(async (manager) => {
-    const ids = await insertParts(manager, parts)
-    await seedLinks(manager, ids, path.join(demoDir, 'links.csv'), 'approved')
-    await seedLinks(manager, ids, path.join(demoDir, 'proposed-links.csv'), 'proposed')
+    await seedProposedLinks(manager, path.join(demoDir, 'proposed-links.csv'), 'proposed')
     await seedBuilds(manager, path.join(demoDir, 'builds.json'), tech.id)
   })
   return true

@@ -1,4 +1,4 @@
-import { Column, CreateDateColumn, Entity, PrimaryGeneratedColumn, UpdateDateColumn } from 'typeorm'
+import { Column, CreateDateColumn, Entity, Index, PrimaryGeneratedColumn, UpdateDateColumn } from 'typeorm'
 import type { ExtraPart, SkillLevel } from '../../shared/schemas/fitment'
 
 /** A reusable, named piece of work a fit may call for. */
@@ -42,6 +42,11 @@ export class ModificationEntity {
   /** 'rules' for the shipped catalogue, otherwise who or what created it. */
   @Column({ type: 'text', default: 'editor' })
   source!: string
+
+  /** The import batch that proposed it, if any (a revert removes it again). */
+  @Index()
+  @Column({ type: 'integer', nullable: true })
+  batchId!: number | null
 
   @CreateDateColumn({ type: 'datetime' })
   createdAt!: Date

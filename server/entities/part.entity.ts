@@ -47,6 +47,11 @@ export class PartEntity {
   @Column({ type: 'simple-json' })
   attributes!: PartAttributes
 
+  /** The import batch that wrote it last, if any. */
+  @Index()
+  @Column({ type: 'integer', nullable: true })
+  batchId!: number | null
+
   @OneToMany(() => PartMarkEntity, (mark) => mark.part, { cascade: true })
   marks!: PartMarkEntity[]
 

@@ -15,20 +15,20 @@ export function linkRoutes(links: LinkService): Router {
     res.json(await links.list(parseQuery(linkListQuerySchema, req)))
   })
   router.post('/links', editors, async (req, res) => {
-    res.status(201).json(await links.create(parseBody(linkCreateSchema, req)))
+    res.status(201).json(await links.create(parseBody(linkCreateSchema, req), req.user!))
   })
   router.patch('/links/:id', editors, async (req, res) => {
-    res.json(await links.update(parseParams(idParams, req).id, parseBody(linkUpdateSchema, req)))
+    res.json(await links.update(parseParams(idParams, req).id, parseBody(linkUpdateSchema, req), req.user!))
   })
   router.delete('/links/:id', editors, async (req, res) => {
-    await links.remove(parseParams(idParams, req).id)
+    await links.remove(parseParams(idParams, req).id, req.user!)
     res.status(204).end()
   })
   router.post('/identities', editors, async (req, res) => {
-    res.status(201).json(await links.createIdentity(parseBody(identityCreateSchema, req)))
+    res.status(201).json(await links.createIdentity(parseBody(identityCreateSchema, req), req.user!))
   })
   router.delete('/identities/:id', editors, async (req, res) => {
-    await links.removeIdentity(parseParams(idParams, req).id)
+    await links.removeIdentity(parseParams(idParams, req).id, req.user!)
     res.status(204).end()
   })
   return router

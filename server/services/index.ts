@@ -4,16 +4,18 @@ import type { RuleBook } from '../reasoning/rule-book'
 import { BuildCompletionService } from './build-completion.service'
 import { BuildEvaluationService } from './build-evaluation.service'
 import { BuildSheetService } from './build-sheet.service'
+import { ExportService } from './export.service'
 import { FitGraphIndex } from './fit-graph'
 import { FitmentService } from './fitment.service'
 import { GraphService } from './graph.service'
 import { LinkService } from './link.service'
+import { ImportService } from './import.service'
 import { ModificationService } from './modification.service'
 import { PartService } from './part.service'
 import { UserService } from './user.service'
 
 /** Every service, built once per app around one data source and one rule book. */
-export function createServices(dataSource: DataSource, _config: AppConfig, rules: RuleBook) {
+export function createServices(dataSource: DataSource, config: AppConfig, rules: RuleBook) {
   const parts = new PartService(dataSource)
   const graphIndex = new FitGraphIndex(dataSource)
   const modifications = new ModificationService(dataSource)
@@ -30,6 +32,8 @@ export function createServices(dataSource: DataSource, _config: AppConfig, rules
     completion: new BuildCompletionService(dataSource, parts, graphIndex, evaluation, modifications),
     sheets: new BuildSheetService(dataSource, parts),
     links: new LinkService(dataSource, parts, graphIndex),
+    imports: new ImportService(dataSource, { maxRows: config.importMaxRows }, graphIndex),
+    exports: new ExportService(dataSource),
   }
 }
 export type Services = ReturnType<typeof createServices>

@@ -1,11 +1,11 @@
 import type { DataSource } from 'typeorm'
 import type { Identity, IdentityCreate, Link, LinkCreate, LinkList, LinkUpdate } from '../../shared/schemas/link'
 import type { ReviewStatus } from '../../shared/schemas/fitment'
-import { IdentityEntity } from '../entities/identity.entity'
-import { LinkEntity } from '../entities/link.entity'
+import { inTransaction } from '../db/sqlite-connection'
 import { AppError } from '../errors/app-error'
 import type { FitGraphIndex } from './fit-graph'
-import { insertIdentity, insertLink, modificationIds, orderedPair } from './link-writer'
+import { handEdit, type Editor } from './hand-edit'
+import { orderedPair } from './link-writer'
 import type { PartService } from './part.service'
 
 type LinkRow = Omit<Link, 'modifications' | 'createdAt' | 'updatedAt'> & { createdAt: string; updatedAt: string; modifications: string | null }
@@ -74,61 +74,88 @@ export class LinkService {
   }
 
   /** A link an editor writes is reviewed by that act: approved, from the editor. */
-  async create(input: LinkCreate): Promise<Link> {
-    const partIds = await this.pair(input.fromPart, input.toPart, ['fromPart', 'toPart'])
-    const id = await this.dataSource.transaction(async (manager) => {
-      if (await manager.existsBy(LinkEntity, { partAId: partIds[0], partBId: partIds[1] })) {
+  async create(input: LinkCreate, editor: Editor): Promise<Link> {
+    const [a, b] = await this.pair(input.fromPart, input.toPart, ['fromPart', 'toPart'])
+    const id = await inTransaction(this.dataSource, (db) => {
+      if (db.prepare('SELECT 1 FROM link WHERE partAId = ? AND partBId = ?').get(a, b)) {
         throw AppError.conflict('These two parts are linked already; change that link instead.', [
           { path: 'toPart', message: 'Already linked to the first part.' },
         ])
       }
-      return insertLink(manager, { partIds, relation: input.relation, modifications: input.modifications, note: input.note, source: 'editor', status: 'approved' })
+      const edit = handEdit(db, editor, { created: 1, updated: 0 })
+      const linkId = Number(
+        db
+          .prepare("INSERT INTO link (partAId, partBId, relation, note, source, status, batchId) VALUES (?, ?, ?, ?, 'editor', 'approved', ?)")
+          .run(a, b, input.relation, input.note, edit.batchId).lastInsertRowid,
+      )
+      edit.setLinkModifications(linkId, edit.modificationIds(input.modifications))
+      return linkId
     })
     this.graphIndex.invalidate()
     return this.get(id)
   }
 
   /** Changes a link, or reviews it (approve or reject a proposed link). */
-  async update(id: number, change: LinkUpdate): Promise<Link> {
+  async update(id: number, change: LinkUpdate, editor: Editor): Promise<Link> {
     const current = await this.get(id)
     const relation = change.relation ?? current.relation
     const modifications = change.modifications ?? (relation === 'fits-with-modification' ? current.modifications : [])
     if (relation === 'fits-with-modification' && modifications.length === 0) {
       throw AppError.badRequest('Name the modification a fit with modification needs.', [{ path: 'modifications', message: 'Required for a fit with modification.' }])
     }
-    await this.dataSource.transaction(async (manager) => {
-      await manager.update(LinkEntity, { id }, { relation, note: change.note ?? current.note, status: change.status ?? current.status })
-      await manager.query('DELETE FROM link_modification WHERE linkId = ?', [id])
-      for (const modificationId of await modificationIds(manager, modifications)) {
-        await manager.query('INSERT INTO link_modification (linkId, modificationId) VALUES (?, ?)', [id, modificationId])
-      }
+    await inTransaction(this.dataSource, (db) => {
+      const edit = handEdit(db, editor, { created: 0, updated: 1 })
+      edit.rememberLink(id, 'updated')
+      db.prepare(`UPDATE link SET relation = ?, note = ?, status = ?, batchId = ?, updatedAt = ${edit.now} WHERE id = ?`).run(
+        relation,
+        change.note ?? current.note,
+        change.status ?? current.status,
+        edit.batchId,
+        id,
+      )
+      edit.setLinkModifications(id, edit.modificationIds(modifications))
     })
     this.graphIndex.invalidate()
     return this.get(id)
   }
 
-  async remove(id: number): Promise<void> {
-    const result = await this.dataSource.getRepository(LinkEntity).delete({ id })
-    if (!result.affected) throw AppError.notFound(`No link ${id}.`)
+  async remove(id: number, editor: Editor): Promise<void> {
+    await this.get(id)
+    await inTransaction(this.dataSource, (db) => {
+      const edit = handEdit(db, editor, { created: 0, updated: 1 })
+      edit.rememberLink(id, 'deleted')
+      db.prepare('DELETE FROM link WHERE id = ?').run(id)
+    })
     this.graphIndex.invalidate()
   }
 
-  async createIdentity(input: IdentityCreate): Promise<Identity> {
-    const partIds = await this.pair(input.partA, input.partB, ['partA', 'partB'])
-    const id = await this.dataSource.transaction(async (manager) => {
-      if (await manager.existsBy(IdentityEntity, { partAId: partIds[0], partBId: partIds[1] })) {
+  async createIdentity(input: IdentityCreate, editor: Editor): Promise<Identity> {
+    const [a, b] = await this.pair(input.partA, input.partB, ['partA', 'partB'])
+    const id = await inTransaction(this.dataSource, (db) => {
+      if (db.prepare('SELECT 1 FROM part_identity WHERE partAId = ? AND partBId = ?').get(a, b)) {
         throw AppError.conflict('These two parts are declared identical already.')
       }
-      return insertIdentity(manager, { partIds, note: input.note, source: 'editor' })
+      const edit = handEdit(db, editor, { created: 1, updated: 0 })
+      return Number(
+        db
+          .prepare("INSERT INTO part_identity (partAId, partBId, note, source, batchId) VALUES (?, ?, ?, 'editor', ?)")
+          .run(a, b, input.note, edit.batchId).lastInsertRowid,
+      )
     })
     this.graphIndex.invalidate()
     const graph = await this.graphIndex.snapshot()
-    return { id, partA: graph.part(partIds[0]).partNumber, partB: graph.part(partIds[1]).partNumber, note: input.note, source: 'editor' }
+    return { id, partA: graph.part(a).partNumber, partB: graph.part(b).partNumber, note: input.note, source: 'editor' }
   }
 
-  async removeIdentity(id: number): Promise<void> {
-    const result = await this.dataSource.getRepository(IdentityEntity).delete({ id })
-    if (!result.affected) throw AppError.notFound(`No identity ${id}.`)
+  async removeIdentity(id: number, editor: Editor): Promise<void> {
+    const removed = await inTransaction(this.dataSource, (db) => {
+      if (!db.prepare('SELECT 1 FROM part_identity WHERE id = ?').get(id)) return false
+      const edit = handEdit(db, editor, { created: 0, updated: 1 })
+      edit.rememberIdentity(id)
+      db.prepare('DELETE FROM part_identity WHERE id = ?').run(id)
+      return true
+    })
+    if (!removed) throw AppError.notFound(`No identity ${id}.`)
     this.graphIndex.invalidate()
   }
 }

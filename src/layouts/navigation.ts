@@ -6,6 +6,7 @@ export type NavigationLink = { name: string; label: string; icon: string; permis
 /** The app's main areas, each shown only to roles that may use it. */
 export const NAVIGATION: NavigationLink[] = [
   { name: 'parts', label: 'Catalogue', icon: 'pi-list', permission: 'catalogue.read' },
+  { name: 'imports', label: 'Imports', icon: 'pi-file-import', permission: 'imports.manage' },
   { name: 'users', label: 'Users', icon: 'pi-users', permission: 'users.manage' },
 ]
 

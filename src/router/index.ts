@@ -28,6 +28,12 @@ const router = createRouter({
           meta: { permission: 'catalogue.read', title: 'Parts catalogue' },
         },
         {
+          path: 'imports',
+          name: 'imports',
+          component: () => import('@/views/ImportsView.vue'),
+          meta: { permission: 'imports.manage', title: 'Imports and exports' },
+        },
+        {
           path: 'users',
           name: 'users',
           component: () => import('@/views/UsersView.vue'),

@@ -74,6 +74,20 @@ describe('/api/links (editors review and edit the fitment graph)', () => {
     expect((await editor.get('/api/links')).body.total).toBe(before)
   })
 
+  it('records a change by hand as a batch that blocks reverting the import it changed, and can itself be reverted', async () => {
+    const link = (await editor.get('/api/links?part=TM-HD-1810')).body.items.find((l: { to: string; from: string }) => [l.from, l.to].includes('TM-BL-1800'))
+    const importBatch = (await editor.get('/api/imports')).body.find((b: { fileName: string }) => b.fileName === 'demo/links.csv')
+    expect(importBatch).toBeDefined()
+    await editor.patch(`/api/links/${link.id}`).send({ note: 'Checked again on the bench.' })
+    const batches = (await editor.get('/api/imports')).body as { id: number; fileName: string; userName: string }[]
+    const hand = batches[0]!
+    expect(hand).toMatchObject({ fileName: 'changed by hand', userName: 'Tobias Ferrand' })
+    const blocked = await editor.post(`/api/imports/${importBatch.id}/revert`)
+    expect(blocked.status).toBe(409)
+    expect((await editor.post(`/api/imports/${hand.id}/revert`)).status).toBe(200)
+    expect((await editor.get(`/api/links?part=TM-HD-1810`)).body.items[0].note).toBe(link.note)
+  })
+
   it('is for editors and administrators only', async () => {
     const tech = await t.signIn('tech')
     expect((await tech.get('/api/links')).status).toBe(403)
