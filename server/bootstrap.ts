@@ -17,7 +17,12 @@ export function readVersion(): string {
   return pkg.version
 }
 
-export type Prepared = { dataSource: DataSource; rules: RuleBook; seeded: boolean; demoAccountsLeft: string[] }
+export type Prepared = { dataSource: DataSource; rules: RuleBook; seeded: boolean }
+
+/** Accounts that still sign in with the published demo password (start-up warns about them). */
+export async function demoAccountsLeft(dataSource: DataSource): Promise<string[]> {
+  return (await new UserService(dataSource).withPassword(DEMO_PASSWORD)).map((user) => user.email)
+}
 
 /** Opens and migrates the database, then seeds the demo scenario when asked and the database is empty. */
 export async function prepareDatabase(config: AppConfig): Promise<Prepared> {
@@ -31,6 +36,5 @@ export async function prepareDatabase(config: AppConfig): Promise<Prepared> {
   if (config.firstAdmin && (await users.count()) === 0) {
     await users.create({ ...config.firstAdmin, name: 'Administrator', role: 'admin' })
   }
-  const demoAccountsLeft = (await users.withPassword(DEMO_PASSWORD)).map((user) => user.email)
-  return { dataSource, rules, seeded, demoAccountsLeft }
+  return { dataSource, rules, seeded }
 }

@@ -1,15 +1,16 @@
 import 'reflect-metadata'
 import path from 'node:path'
 import { createApp } from './app'
-import { prepareDatabase, projectRoot, readVersion } from './bootstrap'
+import { demoAccountsLeft, prepareDatabase, projectRoot, readVersion } from './bootstrap'
 import { loadConfig } from './config/env'
 
 const config = loadConfig()
-const { dataSource, rules, seeded, demoAccountsLeft } = await prepareDatabase(config)
+const { dataSource, rules, seeded } = await prepareDatabase(config)
+const demoAccounts = await demoAccountsLeft(dataSource)
 if (seeded) console.log('Seeded the demo scenario into the empty database.')
-if (demoAccountsLeft.length > 0) {
+if (demoAccounts.length > 0) {
   console.warn(
-    `WARNING: demo accounts with the published demo password are active (${demoAccountsLeft.join(', ')}). ` +
+    `WARNING: demo accounts with the published demo password are active (${demoAccounts.join(', ')}). ` +
       'They are for trying Fitwright only; remove them or change their passwords before real use.',
   )
 }

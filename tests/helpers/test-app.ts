@@ -1,4 +1,4 @@
-import { mkdtempSync, rmSync } from 'node:fs'
+import { copyFileSync, mkdtempSync, rmSync } from 'node:fs'
 import { tmpdir } from 'node:os'
 import path from 'node:path'
 import type { Express } from 'express'
@@ -19,9 +19,29 @@ export type TestApp = {
   close: () => Promise<void>
 }
 
+let demoTemplate: Promise<string> | null = null
+
+/**
+ * One migrated, seeded demo database per test worker; each app gets its own
+ * copy, so tests stay independent without paying for the seed every time.
+ */
+function demoTemplatePath(): Promise<string> {
+  demoTemplate ??= (async () => {
+    const dir = mkdtempSync(path.join(tmpdir(), 'fitwright-template-'))
+    const file = path.join(dir, 'template.sqlite')
+    const { dataSource } = await prepareDatabase(loadConfig({ NODE_ENV: 'test', FITWRIGHT_DB_PATH: file, FITWRIGHT_DEMO: '1' }))
+    await dataSource.query('PRAGMA wal_checkpoint(TRUNCATE)')
+    await dataSource.destroy()
+    return file
+  })()
+  return demoTemplate
+}
+
 /** A fresh app on its own temporary SQLite file, seeded with the demo scenario unless told not to. */
 export async function createTestApp(options: { demo?: boolean; env?: Record<string, string> } = {}): Promise<TestApp> {
   const dir = mkdtempSync(path.join(tmpdir(), 'fitwright-test-'))
+  const seedsDifferently = Object.keys(options.env ?? {}).some((key) => /^FITWRIGHT_(DEMO|ADMIN_)/.test(key))
+  if (options.demo !== false && !seedsDifferently) copyFileSync(await demoTemplatePath(), path.join(dir, 'test.sqlite'))
   const config = loadConfig({
     NODE_ENV: 'test',
     FITWRIGHT_DB_PATH: path.join(dir, 'test.sqlite'),
