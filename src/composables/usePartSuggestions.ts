@@ -14,5 +14,11 @@ export function usePartSuggestions(kind?: MaybeRefOrGetter<PartKind | undefined>
     await remote.run((signal) => partsApi.list({ q, kind: toValue(kind), pageSize }, signal))
   }
 
-  return { ...remote, suggestions, search }
+  /** Ends a search without new suggestions (the list component waits for them to change). */
+  function settle() {
+    const current = remote.data.value
+    remote.data.value = current ? { ...current, items: [...current.items] } : { items: [], total: 0 }
+  }
+
+  return { ...remote, suggestions, search, settle }
 }

@@ -17,7 +17,7 @@ export function usePlannerSheet() {
   const saving = ref(false)
   const fieldError = ref('')
 
-  const dialogTitle = computed(() => (dialog.value === 'rename' ? 'Rename the build sheet' : 'Save as a new build sheet'))
+  const dialogTitle = computed(() => (dialog.value === 'rename' ? 'Name and notes of the build sheet' : 'Save as a new build sheet'))
 
   function fail(summary: string, error: unknown) {
     if (error instanceof ApiError && error.fieldMessage('name')) {
@@ -52,7 +52,7 @@ export function usePlannerSheet() {
     fieldError.value = ''
     try {
       if (dialog.value === 'rename' && planner.sheet) {
-        planner.openSheet(await sheets.update(planner.sheet.id, { name: value.name }), true)
+        planner.openSheet(await sheets.update(planner.sheet.id, { name: value.name, notes: value.notes }), true)
         toast.add({ severity: 'success', summary: `Renamed to “${value.name}”`, life: 3000 })
       } else {
         const saved = await sheets.create(planner.sheetInput(value.name, value.notes))

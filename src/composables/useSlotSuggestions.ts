@@ -66,5 +66,11 @@ export function useSlotSuggestions(slot: SlotId, build: () => PlannerState) {
     }
   }
 
-  return { groups, note, failed, search }
+  /** Ends a search without new choices (the list component waits for its suggestions to change). */
+  function settle() {
+    controller?.abort()
+    groups.value = [...groups.value]
+  }
+
+  return { groups, note, failed, search, settle }
 }

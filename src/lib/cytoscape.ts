@@ -5,4 +5,4 @@ import fcose from 'cytoscape-fcose'
 cytoscape.use(fcose)
 
 export { cytoscape }
-export type { Core, LayoutOptions } from 'cytoscape'
+export type { Core, LayoutOptions, NodeSingular } from 'cytoscape'

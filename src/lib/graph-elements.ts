@@ -93,3 +93,29 @@ export function pathPositions(nodes: readonly { id: string; distance: number }[]
   }
   return positions
 }
+
+/**
+ * Rings for a big neighbourhood: the centre, then each distance in rings of
+ * growing size (an outer ring holds more parts), so hundreds of parts two
+ * steps out do not become one circle too wide to read. 0 is the centre ring.
+ */
+export function ringIndex(nodes: readonly { id: string; distance: number }[], first = 16, growth = 8): Record<string, number> {
+  const rings: Record<string, number> = {}
+  let ring = 0
+  const distances = [...new Set(nodes.map((node) => node.distance))].sort((a, b) => a - b)
+  for (const distance of distances) {
+    let capacity = first
+    let used = 0
+    for (const node of nodes.filter((n) => n.distance === distance)) {
+      if (used === capacity) {
+        ring++
+        used = 0
+        capacity += growth
+      }
+      rings[node.id] = ring
+      used++
+    }
+    ring++
+  }
+  return rings
+}

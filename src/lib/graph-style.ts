@@ -54,7 +54,8 @@ export function graphStylesheet(palette: GraphPalette, large: boolean): Styleshe
       selector: 'node',
       style: {
         shape: 'round-rectangle',
-        width: (node: NodeSingular) => labelWidth(String(node.data('label'))),
+        // Big views skip the per-node label measuring: every part number there has the same width.
+        width: large ? 120 : (node: NodeSingular) => labelWidth(String(node.data('label'))),
         height: 34,
         label: 'data(label)',
         'text-wrap': 'wrap',
@@ -78,10 +79,10 @@ export function graphStylesheet(palette: GraphPalette, large: boolean): Styleshe
     {
       selector: 'edge',
       style: {
-        // Straight edges draw much faster than curves in big views; labels appear once zoomed in.
+        // Straight edges draw much faster than curves; in big views an edge says its relation in
+        // words when it or one of its parts is pointed at or selected (line and markers always do).
         'curve-style': large ? 'straight' : 'bezier',
-        label: 'data(label)',
-        ...(large ? { 'min-zoomed-font-size': 9 } : {}),
+        label: large ? '' : 'data(label)',
         'font-family': FONT,
         'font-size': 10,
         color: palette.text,
@@ -94,5 +95,6 @@ export function graphStylesheet(palette: GraphPalette, large: boolean): Styleshe
     ...looks,
     { selector: 'edge.proposed', style: { opacity: 0.6, width: 1.5 } },
     { selector: 'edge:selected', style: { width: 5, 'z-index': 10 } },
+    { selector: 'edge.labelled, edge:selected', style: { label: 'data(label)', 'z-index': 10 } },
   ]
 }

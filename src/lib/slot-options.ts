@@ -4,7 +4,15 @@ import { normalisePartCode, type Part } from '@shared/schemas/part'
 import { PART_KIND_LABELS } from '@shared/schemas/part-kinds'
 import type { Relation } from '@shared/schemas/fitment'
 
-export type SlotOption = { part: Part; suggested: boolean; relation?: Relation; modifications: string[]; reasons: string[] }
+export type SlotOption = {
+  part: Part
+  suggested: boolean
+  relation?: Relation
+  modifications: string[]
+  reasons: string[]
+  /** Said beside a part that was searched for but is not among the suggestions. */
+  note?: string
+}
 export type SlotOptionGroup = { label: string; items: SlotOption[] }
 
 function matches(part: Part, query: string): boolean {
@@ -30,7 +38,7 @@ export function slotOptionGroups(slot: SlotId, query: string, candidates: readon
   const taken = new Set(candidates.map((candidate) => candidate.part.partNumber))
   const others = found
     .filter((part) => !taken.has(part.partNumber))
-    .map((part): SlotOption => ({ part, suggested: false, modifications: [], reasons: [] }))
+    .map((part): SlotOption => ({ part, suggested: false, modifications: [], reasons: [], note: candidates.length ? 'not suggested' : undefined }))
   const kind = PART_KIND_LABELS[slot].toLowerCase()
   return [
     { label: 'Fit the parts already chosen', items: suggested },

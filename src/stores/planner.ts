@@ -5,11 +5,11 @@ import { isSlotId, type SlotId } from '@shared/build-template'
 import type { BuildContext, BuildSheet, BuildSheetInput, BuildSheetUpdate, Evaluation } from '@shared/schemas/build'
 import { buildsApi } from '@/api/builds'
 import { useRemote } from '@/composables/useRemote'
-import { pickFromCompletion, unfilledNotes, type GapPick } from '@/lib/fill-gaps'
+import { createsDeadEnd, nextSlotToFill, unfilledNotes, type GapPick } from '@/lib/fill-gaps'
 import { evaluateBody, filledSlotCount, plannerFromQuery, plannerToQuery, type PlannerSlots, type PlannerState } from '@/lib/planner-query'
 
-/** At most this many rounds of "fill the gaps": the template is at most five mates deep. */
-const FILL_ROUNDS = 8
+/** Candidates "fill the gaps" tries for one slot before it leaves the slot empty. */
+const FILL_TRIES = 5
 
 /** The build in progress: its slots, its context, the saved sheet it came from and its live verdict. */
 export const usePlannerStore = defineStore('planner', () => {
@@ -97,19 +97,34 @@ export const usePlannerStore = defineStore('planner', () => {
     }
   }
 
-  /** Fills empty slots with the best-scoring candidates, round by round, and says what stayed empty and why. */
+  /**
+   * Fills empty slots one at a time, most constrained first, with the best
+   * candidate that does not leave a mating slot without any part that fits;
+   * says what stayed empty and why. The live verdict then checks the whole build.
+   */
   async function fillGaps(): Promise<{ filled: GapPick[]; unfilled: { slot: SlotId; note: string }[] }> {
+    const complete = () => buildsApi.complete({ ...evaluateBody(state.value), limit: FILL_TRIES })
     const filled: GapPick[] = []
-    let unfilled: { slot: SlotId; note: string }[] = []
-    for (let round = 0; round < FILL_ROUNDS; round++) {
-      const completion = await buildsApi.complete({ ...evaluateBody(state.value), limit: 1 })
-      const picks = pickFromCompletion(completion)
-      unfilled = unfilledNotes(completion)
-      if (picks.length === 0) break
-      for (const pick of picks) setSlot(pick.slot, pick.partNumber)
-      filled.push(...picks)
+    const stuck = new Set<SlotId>()
+    let completion = await complete()
+    for (let slot = nextSlotToFill(completion); slot; slot = nextSlotToFill(completion, stuck)) {
+      let accepted = false
+      for (const candidate of completion.slots[slot]?.candidates ?? []) {
+        setSlot(slot, candidate.part.partNumber)
+        const next = await complete()
+        if (!createsDeadEnd(slot, completion, next)) {
+          filled.push({ slot, partNumber: candidate.part.partNumber })
+          completion = next
+          accepted = true
+          break
+        }
+      }
+      if (!accepted) {
+        setSlot(slot, null)
+        stuck.add(slot)
+      }
     }
-    return { filled, unfilled }
+    return { filled, unfilled: unfilledNotes(completion, stuck) }
   }
 
   function sheetInput(name: string, notes = ''): BuildSheetInput {
