@@ -64,7 +64,7 @@ describe.skipIf(!run)('technician: plan a build, get the verdict and the parts l
     await page.screenshot({ path: `${SCREENSHOT_DIR}/planner-slot-suggestions.png` })
     await suggested.click()
     await page.waitForURL(/head=TM-HD-2000/)
-    await expect.poll(() => verdictText(page), within).toBe('The build fits with modifications')
+    await expect.poll(() => verdictText(page), within).toBe('The parts chosen so far fit with modifications')
     expect(await page.getByRole('region', { name: /Mating pairs/ }).textContent()).toContain('Head on block')
   })
 
@@ -162,7 +162,7 @@ describe.skipIf(!run)('technician: plan a build, get the verdict and the parts l
   it('shows a demo sheet that does not fit in the dark theme and at tablet width', async () => {
     await page.goto(`${server.url}/builds`)
     await page.getByRole('link', { name: 'Open TK18 head on a TK20V block with torque-to-yield bolts' }).click()
-    await expect.poll(() => verdictText(page), within).toBe('The build does not fit')
+    await expect.poll(() => verdictText(page), within).toBe('The parts chosen so far do not fit')
     await saveScreenshot(page, 'planner-does-not-fit')
     await page.getByRole('button', { name: 'Use dark theme' }).click()
     await page.setViewportSize({ width: 768, height: 1024 })

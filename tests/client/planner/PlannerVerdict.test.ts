@@ -33,6 +33,7 @@ describe('PlannerVerdict', () => {
 
   it('lists the empty slots by their labels and says the verdict covers the chosen parts only', () => {
     const wrapper = mountVerdict({ evaluation: makeEvaluation({ missingSlots: ['oil-restrictor', 'injector'] }), filledCount: 16, isLoading: false })
+    expect(wrapper.get('h2').text()).toBe('The parts chosen so far fit')
     expect(wrapper.text()).toContain('2 of 18 slots empty: Oil feed restrictor, Injectors.')
     expect(wrapper.text()).toContain('covers the chosen parts only')
   })
