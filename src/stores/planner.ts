@@ -6,7 +6,7 @@ import type { BuildContext, BuildSheet, BuildSheetInput, BuildSheetUpdate, Evalu
 import { buildsApi } from '@/api/builds'
 import { useRemote } from '@/composables/useRemote'
 import { createsDeadEnd, nextSlotToFill, unfilledNotes, type GapPick } from '@/lib/fill-gaps'
-import { evaluateBody, filledSlotCount, plannerFromQuery, plannerToQuery, type PlannerSlots, type PlannerState } from '@/lib/planner-query'
+import { evaluateBody, filledSlotCount, plannerFromQuery, plannerToQuery, sameBuild, type PlannerSlots, type PlannerState } from '@/lib/planner-query'
 
 /** Candidates "fill the gaps" tries for one slot before it leaves the slot empty. */
 const FILL_TRIES = 5
@@ -28,13 +28,7 @@ export const usePlannerStore = defineStore('planner', () => {
     Object.fromEntries((evaluation.error.value?.details ?? []).map((detail) => [detail.path.replace(/^slots\./, ''), detail.message])),
   )
 
-  const isDirty = computed(() => {
-    if (!sheet.value) return filledCount.value > 0
-    const saved = plannerToQuery(fromSheet(sheet.value))
-    const now = query.value
-    const keys = new Set([...Object.keys(saved), ...Object.keys(now)])
-    return [...keys].some((key) => saved[key] !== now[key])
-  })
+  const isDirty = computed(() => (sheet.value ? !sameBuild(plannerToQuery(fromSheet(sheet.value)), query.value) : filledCount.value > 0))
 
   function fromSheet(saved: BuildSheet): PlannerState {
     const sheetSlots: PlannerSlots = {}
