@@ -127,6 +127,7 @@ describe.skipIf(!run)('technician: plan a build, get the verdict and the parts l
     await page.getByLabel('Name of the build sheet').fill('Bench swap for bay 3, customer copy')
     await page.getByRole('dialog').getByRole('button', { name: 'Rename' }).click()
     await page.getByRole('row').filter({ hasText: 'customer copy' }).waitFor()
+    await page.getByRole('dialog').waitFor({ state: 'detached' })
     await saveScreenshot(page, 'build-sheets')
     await page.getByRole('link', { name: 'Open Bench swap for bay 3, customer copy' }).click()
     await page.waitForURL(/\/planner\/\d+/)
