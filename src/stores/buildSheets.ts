@@ -6,12 +6,15 @@ import { useRemote } from '@/composables/useRemote'
 /** The signed-in user's saved build sheets (all of them for editors and administrators). */
 export const useBuildSheetsStore = defineStore('buildSheets', () => {
   const list = useRemote<BuildSheet[]>([])
+  /** Until the list has come once, a saved sheet must not stand in for it as a list of one. */
+  let loaded = false
 
-  function load() {
-    return list.run((signal) => buildsApi.list(signal))
+  async function load() {
+    if (await list.run((signal) => buildsApi.list(signal))) loaded = true
   }
 
   function replace(saved: BuildSheet) {
+    if (!loaded) return
     const current = list.data.value ?? []
     list.data.value = [saved, ...current.filter((sheet) => sheet.id !== saved.id)]
   }

@@ -72,7 +72,7 @@ describe.skipIf(!run)('counter: what fits a head, and the fit graph', () => {
   it('filters by relation and by rule inference, keeping the filters in a shareable address', async () => {
     await page.getByRole('button', { name: /Does not fit \(\d+\)/ }).click()
     await page.waitForURL(/relation=does-not-fit/)
-    expect(await page.getByRole('list', { name: 'Cylinder block: fits with modification' }).count()).toBe(0)
+    await expect.poll(() => page.getByRole('list', { name: 'Cylinder block: fits with modification' }).count(), within).toBe(0)
     expect(await page.getByText('TM-IM-1800').first().isVisible()).toBe(true)
     await page.getByLabel('Include answers inferred by the rules').uncheck()
     await page.waitForURL(/inferred=0/)

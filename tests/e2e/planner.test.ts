@@ -122,7 +122,7 @@ describe.skipIf(!run)('technician: plan a build, get the verdict and the parts l
     await page.waitForURL(/\/builds$/)
     const row = page.getByRole('row').filter({ hasText: 'Bench swap for bay 3' })
     await row.waitFor()
-    expect(await page.getByRole('row').filter({ hasText: 'TK20V as built at the factory' }).count()).toBe(1)
+    await page.getByRole('row').filter({ hasText: 'TK20V as built at the factory' }).waitFor()
     await row.getByRole('button', { name: 'Rename Bench swap for bay 3' }).click()
     await page.getByLabel('Name of the build sheet').fill('Bench swap for bay 3, customer copy')
     await page.getByRole('dialog').getByRole('button', { name: 'Rename' }).click()
