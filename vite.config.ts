@@ -12,7 +12,8 @@ export default defineConfig({
   resolve: { alias },
   server: {
     port: 5173,
-    proxy: { '/api': 'http://localhost:3000' },
+    // FITWRIGHT_API_PROXY points the dev client at an API on another port (e.g. http://localhost:3101).
+    proxy: { '/api': process.env.FITWRIGHT_API_PROXY ?? 'http://localhost:3000' },
   },
   build: {
     outDir: 'dist',

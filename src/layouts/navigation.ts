@@ -1,15 +1,31 @@
 import type { Role } from '@shared/schemas/auth'
 import { can, type Permission } from '@shared/permissions'
 
-export type NavigationLink = { name: string; label: string; icon: string; permission: Permission }
+export type NavigationLink = {
+  name: string
+  label: string
+  icon: string
+  permission: Permission
+  /** Other routes that belong to the same area (the link shows as current there too). */
+  area?: string[]
+}
 
 /** The app's main areas, each shown only to roles that may use it. */
 export const NAVIGATION: NavigationLink[] = [
+  { name: 'lookup', label: 'Look up', icon: 'pi-search', permission: 'catalogue.read', area: ['part'] },
   { name: 'parts', label: 'Catalogue', icon: 'pi-list', permission: 'catalogue.read' },
   { name: 'imports', label: 'Imports', icon: 'pi-file-import', permission: 'imports.manage' },
+  { name: 'graph-home', label: 'Fit graph', icon: 'pi-sitemap', permission: 'catalogue.read', area: ['graph', 'graph-path'] },
+  { name: 'planner', label: 'Build planner', icon: 'pi-wrench', permission: 'builds.evaluate', area: ['planner-sheet'] },
+  { name: 'builds', label: 'Build sheets', icon: 'pi-folder-open', permission: 'builds.save' },
   { name: 'users', label: 'Users', icon: 'pi-users', permission: 'users.manage' },
 ]
 
 export function navigationFor(role: Role | undefined): NavigationLink[] {
   return NAVIGATION.filter((link) => can(role, link.permission))
+}
+
+/** Whether a link stands for the area the current route is in. */
+export function isCurrentArea(link: NavigationLink, routeName: string | symbol | null | undefined): boolean {
+  return typeof routeName === 'string' && (routeName === link.name || (link.area ?? []).includes(routeName))
 }

@@ -20,12 +20,60 @@ const router = createRouter({
       path: '/',
       component: () => import('@/layouts/AppLayout.vue'),
       children: [
-        { path: '', name: 'home', redirect: { name: 'parts' } },
+        { path: '', name: 'home', redirect: { name: 'lookup' } },
+        {
+          path: 'lookup',
+          name: 'lookup',
+          component: () => import('@/views/LookupView.vue'),
+          meta: { permission: 'catalogue.read', title: 'Look up a part' },
+        },
         {
           path: 'parts',
           name: 'parts',
           component: () => import('@/views/PartsCatalogueView.vue'),
           meta: { permission: 'catalogue.read', title: 'Parts catalogue' },
+        },
+        {
+          path: 'parts/:partNumber',
+          name: 'part',
+          component: () => import('@/views/PartView.vue'),
+          meta: { permission: 'catalogue.read', title: 'Part' },
+        },
+        {
+          path: 'graph',
+          name: 'graph-home',
+          component: () => import('@/views/GraphView.vue'),
+          meta: { permission: 'catalogue.read', title: 'Fit graph' },
+        },
+        {
+          path: 'graph/path',
+          name: 'graph-path',
+          component: () => import('@/views/GraphView.vue'),
+          meta: { permission: 'catalogue.read', title: 'Path between two parts' },
+        },
+        {
+          path: 'graph/:partNumber',
+          name: 'graph',
+          component: () => import('@/views/GraphView.vue'),
+          meta: { permission: 'catalogue.read', title: 'Fit graph' },
+        },
+        {
+          path: 'planner',
+          name: 'planner',
+          component: () => import('@/views/PlannerView.vue'),
+          meta: { permission: 'builds.evaluate', title: 'Build planner' },
+        },
+        {
+          path: 'planner/:id(\\d+)',
+          name: 'planner-sheet',
+          component: () => import('@/views/PlannerView.vue'),
+          meta: { permission: 'builds.save', title: 'Build sheet' },
+        },
+        {
+          path: 'builds',
+          name: 'builds',
+          component: () => import('@/views/BuildSheetsView.vue'),
+          meta: { permission: 'builds.save', title: 'Build sheets' },
         },
         {
           path: 'imports',

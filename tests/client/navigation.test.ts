@@ -1,19 +1,27 @@
 import { describe, expect, it } from 'vitest'
-import { navigationFor } from '@/layouts/navigation'
+import { isCurrentArea, navigationFor, NAVIGATION } from '@/layouts/navigation'
 
 describe('navigationFor', () => {
   it.each([
-    ['counter', ['parts']],
-    ['tech', ['parts']],
-    ['editor', ['parts']],
-    ['admin', ['parts', 'users']],
-  ] as const)('shows a %s only the areas the role may use', (role, expected) => {
+    ['counter', ['lookup', 'parts', 'graph-home', 'planner'], ['builds', 'users']],
+    ['tech', ['lookup', 'parts', 'graph-home', 'planner', 'builds'], ['users']],
+    ['editor', ['lookup', 'parts', 'graph-home', 'planner', 'builds'], ['users']],
+    ['admin', ['lookup', 'parts', 'graph-home', 'planner', 'builds', 'users'], []],
+  ] as const)('shows a %s the areas the role may use and none it may not', (role, shown, hidden) => {
     const names = navigationFor(role).map((link) => link.name)
-    for (const name of expected) expect(names).toContain(name)
-    if (role !== 'admin') expect(names).not.toContain('users')
+    for (const name of shown) expect(names).toContain(name)
+    for (const name of hidden) expect(names).not.toContain(name)
   })
 
   it('shows nothing without a signed-in user', () => {
     expect(navigationFor(undefined)).toEqual([])
+  })
+
+  it('marks the graph link current on a part\'s graph and on a path, and the planner link on a saved sheet', () => {
+    const link = (name: string) => NAVIGATION.find((entry) => entry.name === name)!
+    expect(isCurrentArea(link('graph-home'), 'graph')).toBe(true)
+    expect(isCurrentArea(link('graph-home'), 'graph-path')).toBe(true)
+    expect(isCurrentArea(link('planner'), 'planner-sheet')).toBe(true)
+    expect(isCurrentArea(link('planner'), 'builds')).toBe(false)
   })
 })

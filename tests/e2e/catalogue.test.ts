@@ -39,7 +39,7 @@ describe.skipIf(!run)('catalogue in the browser', () => {
 
   it('lets a counter sign in, search a part number and see it in the table', async () => {
     await signInAs(page, server.url, 'counter')
-    await page.waitForURL(/\/parts/)
+    await page.goto(`${server.url}/parts`)
     await page.getByLabel('Search').fill('tm-hd-2000')
     await page.waitForURL(/q=tm-hd-2000/)
     const table = page.getByRole('table')

@@ -1,0 +1,22 @@
+import {
+  buildSheetListSchema,
+  buildSheetSchema,
+  completionSchema,
+  evaluationSchema,
+  type BuildSheetInput,
+  type BuildSheetUpdate,
+  type EvaluateRequest,
+} from '@shared/schemas/build'
+import { request, requestVoid } from './http'
+
+export const buildsApi = {
+  evaluate: (body: EvaluateRequest, signal?: AbortSignal) =>
+    request('POST', '/builds/evaluate', evaluationSchema, { body, signal }),
+  complete: (body: EvaluateRequest & { limit?: number }, signal?: AbortSignal) =>
+    request('POST', '/builds/complete', completionSchema, { body, signal }),
+  list: (signal?: AbortSignal) => request('GET', '/builds', buildSheetListSchema, { signal }),
+  get: (id: number, signal?: AbortSignal) => request('GET', `/builds/${id}`, buildSheetSchema, { signal }),
+  create: (input: BuildSheetInput) => request('POST', '/builds', buildSheetSchema, { body: input }),
+  update: (id: number, change: BuildSheetUpdate) => request('PUT', `/builds/${id}`, buildSheetSchema, { body: change }),
+  remove: (id: number) => requestVoid('DELETE', `/builds/${id}`),
+}

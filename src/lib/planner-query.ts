@@ -1,0 +1,78 @@
+import type { LocationQuery, LocationQueryRaw } from 'vue-router'
+import { SLOT_IDS, type SlotId } from '@shared/build-template'
+import type { BuildContext, EvaluateRequest } from '@shared/schemas/build'
+
+export type PlannerSlots = Partial<Record<SlotId, string>>
+export type PlannerState = { slots: PlannerSlots; context: BuildContext }
+
+/** Context fields and the short names they have in the address. */
+const CONTEXT_KEYS = { targetPowerKw: 'power', fuelOctane: 'octane', chassisModelYear: 'year', vin: 'vin' } as const
+type NumberField = Exclude<keyof BuildContext, 'vin'>
+
+function text(value: LocationQuery[string] | undefined): string {
+  const first = Array.isArray(value) ? value[0] : value
+  return typeof first === 'string' ? first.trim() : ''
+}
+
+function number(value: LocationQuery[string] | undefined): number | undefined {
+  const raw = text(value)
+  if (!raw) return undefined
+  const parsed = Number(raw)
+  return Number.isFinite(parsed) ? parsed : undefined
+}
+
+/**
+ * A build in progress lives in the address (`?block=TM-BL-1800&head=TM-HD-2000&power=110`),
+ * so a technician can bookmark it or send it to a colleague.
+ */
+export function plannerFromQuery(query: LocationQuery): PlannerState {
+  const slots: PlannerSlots = {}
+  for (const slot of SLOT_IDS) {
+    const value = text(query[slot])
+    if (value) slots[slot] = value
+  }
+  const context: BuildContext = {}
+  for (const field of ['targetPowerKw', 'fuelOctane', 'chassisModelYear'] as NumberField[]) {
+    const value = number(query[CONTEXT_KEYS[field]])
+    if (value !== undefined) context[field] = value
+  }
+  const vin = text(query[CONTEXT_KEYS.vin])
+  if (vin) context.vin = vin
+  return { slots, context }
+}
+
+/** Slots in template order, then the context: the same build always gives the same address. */
+export function plannerToQuery(state: PlannerState): Record<string, string> {
+  const query: Record<string, string> = {}
+  for (const slot of SLOT_IDS) {
+    const value = state.slots[slot]?.trim()
+    if (value) query[slot] = value
+  }
+  for (const field of Object.keys(CONTEXT_KEYS) as (keyof BuildContext)[]) {
+    const value = state.context[field]
+    if (value !== undefined && value !== '') query[CONTEXT_KEYS[field]] = String(value)
+  }
+  return query
+}
+
+/** Whether two addresses describe the same build (ignoring keys that are not the planner's). */
+export function sameBuild(a: LocationQuery | LocationQueryRaw, b: Record<string, string>): boolean {
+  const fromA = plannerToQuery(plannerFromQuery(a as LocationQuery))
+  const keys = new Set([...Object.keys(fromA), ...Object.keys(b)])
+  return [...keys].every((key) => fromA[key] === b[key])
+}
+
+/** Whether an address holds no slot and no context at all. */
+export function isEmptyBuild(query: LocationQuery | LocationQueryRaw): boolean {
+  return Object.keys(plannerToQuery(plannerFromQuery(query as LocationQuery))).length === 0
+}
+
+export function evaluateBody(state: PlannerState): EvaluateRequest & { slots: Record<string, string> } {
+  const slots: Record<string, string> = {}
+  for (const [slot, value] of Object.entries(state.slots)) if (value) slots[slot] = value
+  return { slots, ...state.context }
+}
+
+export function filledSlotCount(slots: PlannerSlots): number {
+  return Object.values(slots).filter(Boolean).length
+}

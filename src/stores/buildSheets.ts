@@ -1,0 +1,44 @@
+import { defineStore } from 'pinia'
+import type { BuildSheet, BuildSheetInput, BuildSheetUpdate } from '@shared/schemas/build'
+import { buildsApi } from '@/api/builds'
+import { useRemote } from '@/composables/useRemote'
+
+/** The signed-in user's saved build sheets (all of them for editors and administrators). */
+export const useBuildSheetsStore = defineStore('buildSheets', () => {
+  const list = useRemote<BuildSheet[]>([])
+  /** Until the list has come once, a saved sheet must not stand in for it as a list of one. */
+  let loaded = false
+
+  async function load() {
+    if (await list.run((signal) => buildsApi.list(signal))) loaded = true
+  }
+
+  function replace(saved: BuildSheet) {
+    if (!loaded) return
+    const current = list.data.value ?? []
+    list.data.value = [saved, ...current.filter((sheet) => sheet.id !== saved.id)]
+  }
+
+  /** Saves a new sheet and puts it at the top of the list. */
+  async function create(input: BuildSheetInput) {
+    const saved = await buildsApi.create(input)
+    replace(saved)
+    return saved
+  }
+
+  /** Renames or re-slots a sheet; only the fields given change. */
+  async function update(id: number, change: BuildSheetUpdate) {
+    const saved = await buildsApi.update(id, change)
+    replace(saved)
+    return saved
+  }
+
+  async function remove(id: number) {
+    await buildsApi.remove(id)
+    list.data.value = (list.data.value ?? []).filter((sheet) => sheet.id !== id)
+  }
+
+  const get = (id: number) => buildsApi.get(id)
+
+  return { sheets: list.data, isLoading: list.isLoading, error: list.error, load, create, update, remove, get }
+})

@@ -1,0 +1,46 @@
+import { describe, expect, it } from 'vitest'
+import { evaluateBody, isEmptyBuild, plannerFromQuery, plannerToQuery, sameBuild } from '@/lib/planner-query'
+
+describe('planner address', () => {
+  it('reads slots and context from the query and writes the same query back', () => {
+    const query = { block: 'ZX-BL-1', head: 'ZX-HD-2', power: '110', octane: '91', year: '1994', vin: 'ABC123' }
+    const state = plannerFromQuery(query)
+    expect(state).toEqual({
+      slots: { block: 'ZX-BL-1', head: 'ZX-HD-2' },
+      context: { targetPowerKw: 110, fuelOctane: 91, chassisModelYear: 1994, vin: 'ABC123' },
+    })
+    expect(plannerToQuery(state)).toEqual(query)
+  })
+
+  it('writes slots in template order whatever order they were chosen in, so a build has one address', () => {
+    const query = plannerToQuery({ slots: { injector: 'ZX-IN-1', head: 'ZX-HD-2', block: 'ZX-BL-1' }, context: {} })
+    expect(Object.keys(query)).toEqual(['block', 'head', 'injector'])
+  })
+
+  it.each([
+    ['an unknown slot name', { wheel: 'ZX-1', head: 'ZX-HD-2' }, { slots: { head: 'ZX-HD-2' }, context: {} }],
+    ['a power that is not a number', { power: 'lots' }, { slots: {}, context: {} }],
+    ['blank values', { head: '  ', vin: '' }, { slots: {}, context: {} }],
+    ['a repeated key (first one wins)', { head: ['ZX-HD-2', 'ZX-HD-3'] }, { slots: { head: 'ZX-HD-2' }, context: {} }],
+  ])('ignores %s', (_what, query, expected) => {
+    expect(plannerFromQuery(query)).toEqual(expected)
+  })
+
+  it('treats two queries that differ only in key order or foreign keys as the same build', () => {
+    const now = plannerToQuery({ slots: { block: 'ZX-BL-1', head: 'ZX-HD-2' }, context: { targetPowerKw: 90 } })
+    expect(sameBuild({ power: '90', head: 'ZX-HD-2', block: 'ZX-BL-1', utm: 'x' }, now)).toBe(true)
+    expect(sameBuild({ head: 'ZX-HD-2', block: 'ZX-BL-1' }, now)).toBe(false)
+  })
+
+  it('says an address without slots or context holds no build', () => {
+    expect(isEmptyBuild({ sheet: '2' })).toBe(true)
+    expect(isEmptyBuild({ octane: '95' })).toBe(false)
+  })
+
+  it('sends only filled slots to the evaluation, with the context beside them', () => {
+    expect(evaluateBody({ slots: { block: 'ZX-BL-1', head: '' }, context: { fuelOctane: 95 } })).toEqual({
+      slots: { block: 'ZX-BL-1' },
+      fuelOctane: 95,
+    })
+  })
+})

@@ -1,0 +1,31 @@
+import { mount } from '@vue/test-utils'
+import { describe, expect, it } from 'vitest'
+import PlannerCautions from '@/components/planner/PlannerCautions.vue'
+import { DEFERENCE } from '@/lib/cautions'
+
+describe('PlannerCautions', () => {
+  it('shows every caution in the page, danger first, with the deference to the manual, local codes and licensed practice once', () => {
+    const wrapper = mount(PlannerCautions, {
+      props: {
+        cautions: [
+          { severity: 'info', text: 'Check local emissions rules.', reference: 'a regulation' },
+          { severity: 'warning', text: 'Disconnect the battery first.' },
+          { severity: 'danger', text: 'Never work under a load held only by a jack.' },
+          { severity: 'info', text: DEFERENCE },
+        ],
+      },
+    })
+    const items = wrapper.get('ul').findAll('li')
+    expect(items.map((item) => item.attributes('data-severity'))).toEqual(['danger', 'warning', 'info'])
+    expect(items[0]?.text()).toContain('Danger: Never work under a load held only by a jack.')
+    expect(items[2]?.text()).toContain('Source: a regulation')
+    expect(wrapper.text()).toContain('Fitwright defers to the service manual, local codes and licensed practice.')
+    expect(wrapper.text().split(DEFERENCE).length - 1).toBe(0)
+  })
+
+  it('keeps the deference sentence even when the rules raise no caution', () => {
+    const wrapper = mount(PlannerCautions, { props: { cautions: [] } })
+    expect(wrapper.find('ul').exists()).toBe(false)
+    expect(wrapper.text()).toContain('defers to the service manual')
+  })
+})

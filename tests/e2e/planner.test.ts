@@ -1,0 +1,180 @@
+import { readFileSync } from 'node:fs'
+import type { Browser, BrowserContext, Page } from 'playwright-core'
+import { afterAll, beforeAll, describe, expect, it } from 'vitest'
+import { browserAvailable, launchBrowser, saveScreenshot, SCREENSHOT_DIR, signInAs, startServer, type RunningServer } from '../helpers/browser'
+
+const run = browserAvailable()
+/** A fresh page loads the client, restores the session and asks the API: give it time. */
+const within = { timeout: 10_000 }
+
+/** Picks a part for a slot the way a technician does: type a little, choose from the suggestions. */
+async function choose(page: Page, slotLabel: string, typed: string, partNumber: string) {
+  const input = page.getByRole('combobox', { name: slotLabel, exact: true })
+  await input.click()
+  await input.pressSequentially(typed, { delay: 30 })
+  const option = page.getByRole('option', { name: new RegExp(`^${partNumber}\\b`) })
+  await option.first().click()
+  await expect.poll(() => input.inputValue(), within).toBe(partNumber)
+}
+
+function verdictText(page: Page) {
+  return page.locator('.planner-verdict').getByRole('heading', { level: 2 }).textContent()
+}
+
+describe.skipIf(!run)('technician: plan a build, get the verdict and the parts list, save and reopen it', () => {
+  let server: RunningServer
+  let browser: Browser
+  let context: BrowserContext
+  let page: Page
+  let sheetUrl = ''
+  const consoleErrors: string[] = []
+
+  beforeAll(async () => {
+    server = await startServer()
+    browser = await launchBrowser()
+    context = await browser.newContext({ viewport: { width: 1280, height: 900 }, acceptDownloads: true })
+    page = await context.newPage()
+    page.on('console', (message) => {
+      if (message.type() === 'error') consoleErrors.push(message.text())
+    })
+    page.on('pageerror', (error) => consoleErrors.push(error.message))
+  })
+  afterAll(async () => {
+    await browser?.close()
+    await server?.stop()
+  })
+
+  it('opens an empty planner from the navigation', async () => {
+    await signInAs(page, server.url, 'tech')
+    await page.getByRole('navigation', { name: 'Main' }).getByRole('link', { name: 'Build planner' }).click()
+    await page.waitForURL(/\/planner$/)
+    await expect.poll(() => verdictText(page), within).toBe('No parts chosen yet')
+  })
+
+  it('suggests for the head the parts that fit the chosen block, and gives a live verdict', async () => {
+    await choose(page, 'Cylinder block', 'TM-BL-18', 'TM-BL-1800')
+    await page.waitForURL(/block=TM-BL-1800/)
+    const head = page.getByRole('combobox', { name: 'Cylinder head', exact: true })
+    await head.click()
+    await head.pressSequentially('TM-HD', { delay: 30 })
+    const suggested = page.getByRole('option', { name: /^TM-HD-2000\b/ }).first()
+    await expect.poll(() => suggested.textContent(), within).toContain('Fits with modification')
+    // The visible window only: a full-page capture would close the open list. The block's list fades out first.
+    await page.waitForTimeout(400)
+    await page.screenshot({ path: `${SCREENSHOT_DIR}/planner-slot-suggestions.png` })
+    await suggested.click()
+    await page.waitForURL(/head=TM-HD-2000/)
+    await expect.poll(() => verdictText(page), within).toBe('The parts chosen so far fit with modifications')
+    expect(await page.getByRole('region', { name: /Mating pairs/ }).textContent()).toContain('Head on block')
+  })
+
+  it('takes the build context and fills the gaps with parts that fit', async () => {
+    await page.getByLabel('Target power').fill('110')
+    await page.getByLabel('Fuel octane').fill('91')
+    await page.getByLabel('Car model year').fill('1994')
+    await page.getByLabel('Car model year').press('Tab')
+    await page.waitForURL(/power=110.*octane=91.*year=1994/)
+    await page.getByRole('button', { name: 'Fill the gaps' }).click()
+    await expect.poll(() => page.locator('.p-toast').textContent(), within).toContain('Filled 16 slots')
+    expect(await page.locator('.p-toast').textContent()).toContain('Every slot now has a part.')
+    await expect.poll(() => page.getByRole('combobox', { name: 'Head gasket', exact: true }).inputValue(), within).toMatch(/^TM-HG-/)
+    await expect.poll(() => page.locator('.planner-verdict').getAttribute('aria-busy'), within).toBe('false')
+    // The demo's classic swap: the TK18 block needs an oil feed restrictor under the TK20V head.
+    await expect.poll(() => verdictText(page), within).toBe('The build fits with modifications')
+    expect(await page.getByRole('region', { name: /Modifications checklist/ }).textContent()).toContain('Fit an oil feed restrictor')
+  })
+
+  it('shows the full parts list with quantities, the figures with units and the cautions in plain sight', async () => {
+    const partsList = page.getByRole('region', { name: /Parts list/ })
+    const injectorRow = partsList.getByRole('row').filter({ hasText: 'Chosen injectors.' })
+    expect(await injectorRow.getByRole('cell').nth(2).textContent()).toBe('4')
+    expect(await partsList.getByRole('row').count()).toBeGreaterThan(15)
+    const figures = page.getByRole('region', { name: 'Figures' })
+    expect(await figures.textContent()).toMatch(/Displacement\s*1,796\s*cc/)
+    expect(await figures.textContent()).toMatch(/compression ratio\s*\d+\.\d\d\s*: 1/)
+    expect(await figures.textContent()).toMatch(/Injector headroom\s*-?\d+\.\d\s*%/)
+    const cautions = page.getByRole('region', { name: 'Cautions' })
+    expect(await cautions.locator('li').first().getAttribute('data-severity')).toBe('danger')
+    expect(await cautions.textContent()).toContain('defers to the service manual, local codes and licensed practice')
+    await saveScreenshot(page, 'planner-filled')
+  })
+
+  it('exports the parts list as a CSV file', async () => {
+    const [download] = await Promise.all([page.waitForEvent('download'), page.getByRole('button', { name: 'Export parts list (CSV)' }).click()])
+    expect(download.suggestedFilename()).toBe('build-parts-list.csv')
+    const text = readFileSync((await download.path())!, 'utf8')
+    expect(text.replace(/^\uFEFF/, '').split('\r\n')[0]).toBe('"Part number","Description","Quantity","Unit","Category","Reason"')
+    expect(text).toContain('"TM-HD-2000","TK20V cylinder head","1","piece","Chosen part"')
+  })
+
+  it('saves the build as a sheet under a name', async () => {
+    await page.getByRole('button', { name: 'Save build sheet' }).click()
+    await page.getByLabel('Name of the build sheet').fill('Bench swap for bay 3')
+    await page.getByRole('dialog').getByRole('button', { name: 'Save' }).click()
+    await page.waitForURL(/\/planner\/\d+\?/)
+    sheetUrl = page.url()
+    await expect.poll(() => page.getByRole('heading', { level: 1 }).textContent(), within).toBe('Bench swap for bay 3')
+    expect(await page.getByRole('button', { name: 'Save changes' }).isDisabled()).toBe(true)
+  })
+
+  it('finds the sheet among the build sheets, renames it and reopens it with its slots', async () => {
+    await page.getByRole('navigation', { name: 'Main' }).getByRole('link', { name: 'Build sheets' }).click()
+    await page.waitForURL(/\/builds$/)
+    const row = page.getByRole('row').filter({ hasText: 'Bench swap for bay 3' })
+    await row.waitFor()
+    await page.getByRole('row').filter({ hasText: 'TK20V as built at the factory' }).waitFor()
+    await row.getByRole('button', { name: 'Rename Bench swap for bay 3' }).click()
+    await page.getByLabel('Name of the build sheet').fill('Bench swap for bay 3, customer copy')
+    await page.getByRole('dialog').getByRole('button', { name: 'Rename' }).click()
+    await page.getByRole('row').filter({ hasText: 'customer copy' }).waitFor()
+    await page.getByRole('dialog').waitFor({ state: 'detached' })
+    await saveScreenshot(page, 'build-sheets')
+    await page.getByRole('link', { name: 'Open Bench swap for bay 3, customer copy' }).click()
+    await page.waitForURL(/\/planner\/\d+/)
+    await expect.poll(() => page.getByRole('combobox', { name: 'Cylinder head', exact: true }).inputValue(), within).toBe('TM-HD-2000')
+    expect(await page.getByRole('combobox', { name: 'Cylinder block', exact: true }).inputValue()).toBe('TM-BL-1800')
+    expect(await page.getByLabel('Target power').inputValue()).toBe('110 kW')
+    await expect.poll(() => verdictText(page), within).toMatch(/^The build /)
+    expect(await page.getByText('unsaved changes').count()).toBe(0)
+  })
+
+  it('opens the same build from its address in a fresh tab', async () => {
+    const other = await context.newPage()
+    await other.goto(sheetUrl)
+    await expect.poll(() => other.getByRole('combobox', { name: 'Cylinder head', exact: true }).inputValue(), within).toBe('TM-HD-2000')
+    await expect.poll(() => other.getByRole('heading', { level: 1 }).textContent(), within).toBe('Bench swap for bay 3, customer copy')
+    await other.close()
+  })
+
+  it('prints the sheet without navigation or controls, with slots, verdict, work, parts and cautions', async () => {
+    await page.emulateMedia({ media: 'print' })
+    expect(await page.getByRole('navigation', { name: 'Main' }).isVisible()).toBe(false)
+    expect(await page.getByRole('toolbar', { name: 'Build actions' }).isVisible()).toBe(false)
+    expect(await page.getByRole('combobox', { name: 'Cylinder head', exact: true }).isVisible()).toBe(false)
+    expect(await page.getByRole('region', { name: 'Chosen parts' }).isVisible()).toBe(true)
+    for (const name of [/Mating pairs/, /Modifications checklist/, /Parts list/, 'Figures', 'Cautions']) {
+      expect(await page.getByRole('region', { name }).isVisible()).toBe(true)
+    }
+    await saveScreenshot(page, 'planner-print')
+    await page.pdf({ path: `${SCREENSHOT_DIR}/planner-print.pdf`, format: 'A4', printBackground: false })
+    await page.emulateMedia({ media: 'screen' })
+  })
+
+  it('shows a demo sheet that does not fit in the dark theme and at tablet width', async () => {
+    await page.goto(`${server.url}/builds`)
+    await page.getByRole('link', { name: 'Open TK18 head on a TK20V block with torque-to-yield bolts' }).click()
+    await expect.poll(() => verdictText(page), within).toBe('The parts chosen so far do not fit')
+    await saveScreenshot(page, 'planner-does-not-fit')
+    await page.getByRole('button', { name: 'Use dark theme' }).click()
+    await page.setViewportSize({ width: 768, height: 1024 })
+    await page.waitForTimeout(300)
+    const overflow = await page.evaluate(() => document.documentElement.scrollWidth - document.documentElement.clientWidth)
+    expect(overflow).toBeLessThanOrEqual(0)
+    await saveScreenshot(page, 'planner-dark-768')
+    await page.getByRole('button', { name: 'Use light theme' }).click()
+  })
+
+  it('logged no console errors', () => {
+    expect(consoleErrors.filter((text) => !text.includes('401'))).toEqual([])
+  })
+})
