@@ -11,6 +11,7 @@ import { requireRole } from '../auth/require-role'
 import { parseBody, parseParams } from '../middleware/validate'
 import type { BuildCompletionService } from '../services/build-completion.service'
 import type { BuildEvaluationService } from '../services/build-evaluation.service'
+import type { BuildFillService } from '../services/build-fill.service'
 import type { BuildSheetService } from '../services/build-sheet.service'
 
 const idParams = z.object({ id: z.coerce.number().int().positive('Give a build sheet id.') })
@@ -18,6 +19,7 @@ const idParams = z.object({ id: z.coerce.number().int().positive('Give a build s
 export function buildRoutes(services: {
   evaluation: BuildEvaluationService
   completion: BuildCompletionService
+  fill: BuildFillService
   sheets: BuildSheetService
 }): Router {
   const router = Router()
@@ -30,6 +32,9 @@ export function buildRoutes(services: {
   router.post('/builds/complete', evaluators, async (req, res) => {
     const { limit, ...request } = parseBody(completeRequestSchema, req)
     res.json(await services.completion.complete(request, limit))
+  })
+  router.post('/builds/fill', evaluators, async (req, res) => {
+    res.json(await services.fill.fill(parseBody(evaluateRequestSchema, req)))
   })
   router.get('/builds', savers, async (req, res) => {
     res.json(await services.sheets.list(req.user!))

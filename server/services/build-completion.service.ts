@@ -29,10 +29,14 @@ export class BuildCompletionService {
    */
   async complete(request: Parameters<BuildEvaluationService['resolve']>[0], limit: number): Promise<Completion> {
     const build = await this.evaluation.resolve(request)
-    const graph = await this.graphIndex.snapshot()
+    return this.completeBuild(build, await this.graphIndex.snapshot(), limit)
+  }
+
+  /** Candidates for the empty slots of a resolved build (only those in `only`, when given). */
+  async completeBuild(build: ResolvedBuild, graph: FitGraph, limit: number, only?: SlotId[]): Promise<Completion> {
     const result: Completion = { slots: {} }
     for (const slot of BUILD_SLOTS) {
-      if (build.parts[slot.id]) continue
+      if (build.parts[slot.id] || (only && !only.includes(slot.id))) continue
       const matesWith = matingSlots(slot.id).filter((other) => build.parts[other])
       if (matesWith.length === 0) {
         result.slots[slot.id] = {

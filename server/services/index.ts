@@ -3,6 +3,7 @@ import type { AppConfig } from '../config/env'
 import type { RuleBook } from '../reasoning/rule-book'
 import { BuildCompletionService } from './build-completion.service'
 import { BuildEvaluationService } from './build-evaluation.service'
+import { BuildFillService } from './build-fill.service'
 import { BuildSheetService } from './build-sheet.service'
 import { ExportService } from './export.service'
 import { FitGraphIndex } from './fit-graph'
@@ -20,6 +21,7 @@ export function createServices(dataSource: DataSource, config: AppConfig, rules:
   const graphIndex = new FitGraphIndex(dataSource)
   const modifications = new ModificationService(dataSource)
   const evaluation = new BuildEvaluationService(dataSource, parts, graphIndex, rules, modifications)
+  const completion = new BuildCompletionService(dataSource, parts, graphIndex, evaluation, modifications)
   return {
     rules,
     users: new UserService(dataSource),
@@ -29,7 +31,8 @@ export function createServices(dataSource: DataSource, config: AppConfig, rules:
     fitment: new FitmentService(dataSource, parts, graphIndex, rules, modifications),
     graph: new GraphService(parts, graphIndex),
     evaluation,
-    completion: new BuildCompletionService(dataSource, parts, graphIndex, evaluation, modifications),
+    completion,
+    fill: new BuildFillService(graphIndex, evaluation, completion),
     sheets: new BuildSheetService(dataSource, parts),
     links: new LinkService(dataSource, parts, graphIndex),
     imports: new ImportService(dataSource, { maxRows: config.importMaxRows }, graphIndex),

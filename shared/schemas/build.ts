@@ -112,6 +112,13 @@ export const completionSchema = z.object({
 })
 export type Completion = z.infer<typeof completionSchema>
 
+export const fillResultSchema = z.object({
+  slots: z.record(z.string(), z.string()),
+  filled: z.array(z.object({ slot: z.string(), partNumber: z.string() })),
+  unfilled: z.array(z.object({ slot: z.string(), note: z.string() })),
+})
+export type FillResult = z.infer<typeof fillResultSchema>
+
 export const buildSheetInputSchema = buildContextSchema.extend({
   name: z.string().trim().min(1, 'Give the build a name.').max(120),
   slots: z.record(z.string(), z.string().trim().min(1).max(100)),

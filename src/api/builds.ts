@@ -3,6 +3,7 @@ import {
   buildSheetSchema,
   completionSchema,
   evaluationSchema,
+  fillResultSchema,
   type BuildSheetInput,
   type BuildSheetUpdate,
   type EvaluateRequest,
@@ -14,6 +15,7 @@ export const buildsApi = {
     request('POST', '/builds/evaluate', evaluationSchema, { body, signal }),
   complete: (body: EvaluateRequest & { limit?: number }, signal?: AbortSignal) =>
     request('POST', '/builds/complete', completionSchema, { body, signal }),
+  fill: (body: EvaluateRequest) => request('POST', '/builds/fill', fillResultSchema, { body }),
   list: (signal?: AbortSignal) => request('GET', '/builds', buildSheetListSchema, { signal }),
   get: (id: number, signal?: AbortSignal) => request('GET', `/builds/${id}`, buildSheetSchema, { signal }),
   create: (input: BuildSheetInput) => request('POST', '/builds', buildSheetSchema, { body: input }),

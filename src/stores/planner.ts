@@ -2,14 +2,10 @@ import { defineStore } from 'pinia'
 import { computed, ref } from 'vue'
 import type { LocationQuery } from 'vue-router'
 import { isSlotId, type SlotId } from '@shared/build-template'
-import type { BuildContext, BuildSheet, BuildSheetInput, BuildSheetUpdate, Evaluation } from '@shared/schemas/build'
+import type { BuildContext, BuildSheet, BuildSheetInput, BuildSheetUpdate, Evaluation, FillResult } from '@shared/schemas/build'
 import { buildsApi } from '@/api/builds'
 import { useRemote } from '@/composables/useRemote'
-import { createsDeadEnd, nextSlotToFill, unfilledNotes, type GapPick } from '@/lib/fill-gaps'
 import { evaluateBody, filledSlotCount, plannerFromQuery, plannerToQuery, sameBuild, type PlannerSlots, type PlannerState } from '@/lib/planner-query'
-
-/** Candidates "fill the gaps" tries for one slot before it leaves the slot empty. */
-const FILL_TRIES = 5
 
 /** The build in progress: its slots, its context, the saved sheet it came from and its live verdict. */
 export const usePlannerStore = defineStore('planner', () => {
@@ -91,34 +87,11 @@ export const usePlannerStore = defineStore('planner', () => {
     }
   }
 
-  /**
-   * Fills empty slots one at a time, most constrained first, with the best
-   * candidate that does not leave a mating slot without any part that fits;
-   * says what stayed empty and why. The live verdict then checks the whole build.
-   */
-  async function fillGaps(): Promise<{ filled: GapPick[]; unfilled: { slot: SlotId; note: string }[] }> {
-    const complete = () => buildsApi.complete({ ...evaluateBody(state.value), limit: FILL_TRIES })
-    const filled: GapPick[] = []
-    const stuck = new Set<SlotId>()
-    let completion = await complete()
-    for (let slot = nextSlotToFill(completion); slot; slot = nextSlotToFill(completion, stuck)) {
-      let accepted = false
-      for (const candidate of completion.slots[slot]?.candidates ?? []) {
-        setSlot(slot, candidate.part.partNumber)
-        const next = await complete()
-        if (!createsDeadEnd(slot, completion, next)) {
-          filled.push({ slot, partNumber: candidate.part.partNumber })
-          completion = next
-          accepted = true
-          break
-        }
-      }
-      if (!accepted) {
-        setSlot(slot, null)
-        stuck.add(slot)
-      }
-    }
-    return { filled, unfilled: unfilledNotes(completion, stuck) }
+  /** Asks the server to fill the empty slots (see POST /api/builds/fill) and takes its choices. */
+  async function fillGaps(): Promise<Pick<FillResult, 'filled' | 'unfilled'>> {
+    const result = await buildsApi.fill(evaluateBody(state.value))
+    for (const { slot, partNumber } of result.filled) if (isSlotId(slot)) setSlot(slot, partNumber)
+    return result
   }
 
   function sheetInput(name: string, notes = ''): BuildSheetInput {

@@ -57,3 +57,22 @@ describe('POST /api/builds/complete', () => {
     expectBadRequest(response, 'slots.head')
   })
 })
+
+describe('POST /api/builds/fill', () => {
+  it('fills every empty slot of the classic swap so that the whole build works', async () => {
+    const response = await agent.post('/api/builds/fill').send({ slots: { block: 'TM-BL-1800', head: 'TM-HD-2000' }, targetPowerKw: 100 })
+    expect(response.status).toBe(200)
+    expect(Object.keys(response.body.slots)).toHaveLength(18)
+    expect(response.body.filled).toHaveLength(16)
+    expect(response.body.unfilled).toEqual([])
+    const evaluation = await agent.post('/api/builds/evaluate').send({ slots: response.body.slots, targetPowerKw: 100 })
+    expect(['fits', 'fits-with-modification']).toContain(evaluation.body.verdict)
+  })
+
+  it('keeps the chosen parts and says why a slot stays empty', async () => {
+    const response = await agent.post('/api/builds/fill').send({ slots: { head: 'TM-HD-2000', 'exhaust-manifold': 'TM-EM-9001' } })
+    expect(response.body.slots).toMatchObject({ head: 'TM-HD-2000', 'exhaust-manifold': 'TM-EM-9001' })
+    const gasket = response.body.unfilled.find((u: { slot: string }) => u.slot === 'exhaust-gasket')
+    expect(gasket.note).toMatch(/fits every chosen part/)
+  })
+})

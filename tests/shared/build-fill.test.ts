@@ -1,7 +1,7 @@
 import { describe, expect, it } from 'vitest'
-import type { Completion } from '@shared/schemas/build'
-import { createsDeadEnd, nextSlotToFill, unfilledNotes } from '@/lib/fill-gaps'
-import { makeCandidate, makePart } from '../../helpers/client-factories'
+import type { Completion } from '../../shared/schemas/build'
+import { createsDeadEnd, nextSlotToFill, unfilledNotes } from '../../shared/build-fill'
+import { makeCandidate, makePart } from '../helpers/client-factories'
 
 const candidate = (partNumber: string, kind: Parameters<typeof makePart>[1]) => makeCandidate(makePart(partNumber, kind))
 

@@ -1,5 +1,5 @@
-import { BUILD_SLOTS, matingSlots, type SlotId } from '@shared/build-template'
-import type { Completion } from '@shared/schemas/build'
+import { BUILD_SLOTS, matingSlots, type SlotId } from './build-template'
+import type { Completion } from './schemas/build'
 
 export type GapPick = { slot: SlotId; partNumber: string }
 
