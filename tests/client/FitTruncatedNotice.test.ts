@@ -1,0 +1,15 @@
+import { mount } from '@vue/test-utils'
+import { describe, expect, it } from 'vitest'
+import FitTruncatedNotice from '@/components/fits/FitTruncatedNotice.vue'
+
+describe('FitTruncatedNotice', () => {
+  it('says, per kind and relation, how many inferred answers are shown of how many', () => {
+    const wrapper = mount(FitTruncatedNotice, { props: { truncated: [{ kind: 'head-gasket', relation: 'fits', shown: 50, total: 812 }] } })
+    expect(wrapper.get('[role="note"]').text()).toContain('Head gasket, fits: showing 50 of 812')
+  })
+
+  it('shows nothing when no answer was cut', () => {
+    const wrapper = mount(FitTruncatedNotice, { props: { truncated: [] } })
+    expect(wrapper.find('[role="note"]').exists()).toBe(false)
+  })
+})
