@@ -14,6 +14,7 @@ export type NavigationLink = {
 export const NAVIGATION: NavigationLink[] = [
   { name: 'lookup', label: 'Look up', icon: 'pi-search', permission: 'catalogue.read', area: ['part'] },
   { name: 'parts', label: 'Catalogue', icon: 'pi-list', permission: 'catalogue.read' },
+  { name: 'review', label: 'Review', icon: 'pi-check-square', permission: 'catalogue.edit' },
   { name: 'imports', label: 'Imports', icon: 'pi-file-import', permission: 'imports.manage' },
   { name: 'graph-home', label: 'Fit graph', icon: 'pi-sitemap', permission: 'catalogue.read', area: ['graph', 'graph-path'] },
   { name: 'planner', label: 'Build planner', icon: 'pi-wrench', permission: 'builds.evaluate', area: ['planner-sheet'] },

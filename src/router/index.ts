@@ -76,6 +76,12 @@ const router = createRouter({
           meta: { permission: 'builds.save', title: 'Build sheets' },
         },
         {
+          path: 'review',
+          name: 'review',
+          component: () => import('@/views/ReviewView.vue'),
+          meta: { permission: 'catalogue.edit', title: 'Review proposed links' },
+        },
+        {
           path: 'imports',
           name: 'imports',
           component: () => import('@/views/ImportsView.vue'),
