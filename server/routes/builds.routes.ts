@@ -30,8 +30,8 @@ export function buildRoutes(services: {
     res.json(await services.evaluation.evaluate(parseBody(evaluateRequestSchema, req)))
   })
   router.post('/builds/complete', evaluators, async (req, res) => {
-    const { limit, ...request } = parseBody(completeRequestSchema, req)
-    res.json(await services.completion.complete(request, limit))
+    const { limit, only, ...request } = parseBody(completeRequestSchema, req)
+    res.json(await services.completion.complete(request, limit, only))
   })
   router.post('/builds/fill', evaluators, async (req, res) => {
     res.json(await services.fill.fill(parseBody(evaluateRequestSchema, req)))

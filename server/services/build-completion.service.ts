@@ -1,5 +1,6 @@
 import type { DataSource } from 'typeorm'
-import { BUILD_SLOTS, matingSlots, type SlotId } from '../../shared/build-template'
+import { BUILD_SLOTS, isSlotId, matingSlots, type SlotId } from '../../shared/build-template'
+import { AppError } from '../errors/app-error'
 import type { Candidate, Completion } from '../../shared/schemas/build'
 import { SKILL_LEVELS, worstVerdict, type Relation } from '../../shared/schemas/fitment'
 import type { PartAttributes } from '../../shared/schemas/part-attributes'
@@ -27,9 +28,13 @@ export class BuildCompletionService {
    * For each empty slot: parts that fit every filled slot they mate with
    * (directly or with modification), fewest and easiest modifications first.
    */
-  async complete(request: Parameters<BuildEvaluationService['resolve']>[0], limit: number): Promise<Completion> {
+  async complete(request: Parameters<BuildEvaluationService['resolve']>[0], limit: number, only?: string[]): Promise<Completion> {
+    const unknown = (only ?? []).filter((slot) => !isSlotId(slot))
+    if (unknown.length) {
+      throw AppError.badRequest(`Unknown slot ${unknown.join(', ')}.`, unknown.map((slot) => ({ path: 'only', message: `Unknown slot "${slot}".` })))
+    }
     const build = await this.evaluation.resolve(request)
-    return this.completeBuild(build, await this.graphIndex.snapshot(), limit)
+    return this.completeBuild(build, await this.graphIndex.snapshot(), limit, only?.filter(isSlotId))
   }
 
   /** Candidates for the empty slots of a resolved build (only those in `only`, when given). */

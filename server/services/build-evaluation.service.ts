@@ -1,5 +1,6 @@
 import type { DataSource } from 'typeorm'
 import { BUILD_SLOTS, MATING_PAIRS, type SlotId } from '../../shared/build-template'
+import { DEFERENCE } from '../../shared/advisory'
 import { validateVin, vinModelYear } from '../../shared/engineering/vin'
 import type { AppliedModification, BuildContext, Caution, EvaluateRequest, Evaluation } from '../../shared/schemas/build'
 import { worstVerdict } from '../../shared/schemas/fitment'
@@ -15,11 +16,6 @@ import { resolveSlots } from './build-slots'
 import type { FitGraph, FitGraphIndex } from './fit-graph'
 import type { ModificationService } from './modification.service'
 import type { PartService } from './part.service'
-
-export const ADVISORY: Caution = {
-  severity: 'info',
-  text: 'Verdicts and figures support, and never replace, the service manual, local codes and licensed practice.',
-}
 
 /** A build with its slots resolved to parts, ready to judge. */
 export type ResolvedBuild = {
@@ -109,7 +105,7 @@ export class BuildEvaluationService {
       ...build.contextCautions,
       ...pairs.flatMap((pair) => pair.rules.cautions),
       ...buildRules.cautions,
-      ADVISORY,
+      DEFERENCE,
     ])
     return {
       verdict: pairs.length ? worstVerdict(pairs.map((pair) => pair.relation)) : 'unknown',

@@ -1,5 +1,5 @@
 import { LINK_SOURCES, RELATIONS, type LinkSource, type Relation } from '../../shared/schemas/fitment'
-import { restoreCell } from '../csv/csv-cells'
+import { restoreCell } from '../../shared/csv-cells'
 import { splitList } from '../csv/part-row'
 import { readHeader, rowShapeProblems, type Header } from './import-header'
 import { RowIssues } from './import-issues'

@@ -1,6 +1,6 @@
 import type { PartInput } from '../../shared/schemas/part-input'
 import { normalisePartCode } from '../../shared/schemas/part'
-import { restoreCell } from '../csv/csv-cells'
+import { restoreCell } from '../../shared/csv-cells'
 import { MARK_COLUMNS, PART_COLUMNS, REQUIRED_PART_COLUMNS, parsePartRow, partCells } from '../csv/part-row'
 import { readHeader, rowShapeProblems, type Header } from './import-header'
 import { RowIssues } from './import-issues'

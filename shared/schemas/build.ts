@@ -89,6 +89,8 @@ export type Evaluation = z.infer<typeof evaluationSchema>
 
 export const completeRequestSchema = evaluateRequestSchema.extend({
   limit: z.number().int().min(1).max(50).default(10),
+  /** Only these empty slots (a slot picker needs one); all empty slots when left out. */
+  only: z.array(z.string()).max(20).optional(),
 })
 
 export const candidateSchema = z.object({

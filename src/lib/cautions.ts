@@ -1,15 +1,12 @@
+import { DEFERENCE } from '@shared/advisory'
 import type { Caution } from '@shared/schemas/build'
-
-/** Said on every build sheet, whatever the rules find. */
-export const DEFERENCE =
-  'Verdicts and figures support, and never replace, the service manual, local codes and licensed practice.'
 
 const RANK: Record<Caution['severity'], number> = { danger: 0, warning: 1, info: 2 }
 
 /** Danger first, then warnings, then notes; the deference sentence is the panel's own footer, so not repeated. */
 export function orderedCautions(cautions: readonly Caution[]): Caution[] {
   return cautions
-    .filter((caution) => caution.text !== DEFERENCE)
+    .filter((caution) => caution.text !== DEFERENCE.text)
     .map((caution, index) => ({ caution, index }))
     .sort((a, b) => RANK[a.caution.severity] - RANK[b.caution.severity] || a.index - b.index)
     .map(({ caution }) => caution)

@@ -1,15 +1,6 @@
 import Papa from 'papaparse'
+import { neutraliseCell } from '@shared/csv-cells'
 import type { PartsListLine } from '@shared/schemas/build'
-
-const FORMULA_START = /^[=+\-@\t\r]/
-
-/**
- * A spreadsheet runs a cell that starts with = + - @ tab or CR as a formula;
- * a leading apostrophe makes it plain text (OWASP, CSV injection).
- */
-export function neutraliseCell(value: string): string {
-  return FORMULA_START.test(value) ? `'${value}` : value
-}
 
 const CATEGORY_LABELS: Record<PartsListLine['category'], string> = {
   chosen: 'Chosen part',

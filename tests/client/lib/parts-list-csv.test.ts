@@ -1,7 +1,8 @@
 import Papa from 'papaparse'
 import { describe, expect, it } from 'vitest'
 import type { PartsListLine } from '@shared/schemas/build'
-import { neutraliseCell, partsListCsv, partsListFileName, PARTS_LIST_COLUMNS } from '@/lib/parts-list-csv'
+import { neutraliseCell } from '@shared/csv-cells'
+import { partsListCsv, partsListFileName, PARTS_LIST_COLUMNS } from '@/lib/parts-list-csv'
 
 function line(overrides: Partial<PartsListLine>): PartsListLine {
   return { description: 'Thing', quantity: 1, unit: 'piece', reason: 'Needed.', category: 'chosen', ...overrides }

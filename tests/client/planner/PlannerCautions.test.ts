@@ -1,7 +1,7 @@
 import { mount } from '@vue/test-utils'
 import { describe, expect, it } from 'vitest'
 import PlannerCautions from '@/components/planner/PlannerCautions.vue'
-import { DEFERENCE } from '@/lib/cautions'
+import { DEFERENCE } from '@shared/advisory'
 
 describe('PlannerCautions', () => {
   it('shows every caution in the page, danger first, with the deference to the manual, local codes and licensed practice once', () => {
@@ -11,7 +11,7 @@ describe('PlannerCautions', () => {
           { severity: 'info', text: 'Check local emissions rules.', reference: 'a regulation' },
           { severity: 'warning', text: 'Disconnect the battery first.' },
           { severity: 'danger', text: 'Never work under a load held only by a jack.' },
-          { severity: 'info', text: DEFERENCE },
+          DEFERENCE,
         ],
       },
     })
@@ -20,7 +20,7 @@ describe('PlannerCautions', () => {
     expect(items[0]?.text()).toContain('Danger: Never work under a load held only by a jack.')
     expect(items[2]?.text()).toContain('Source: a regulation')
     expect(wrapper.text()).toContain('Fitwright defers to the service manual, local codes and licensed practice.')
-    expect(wrapper.text().split(DEFERENCE).length - 1).toBe(0)
+    expect(wrapper.text().split(DEFERENCE.text).length - 1).toBe(0)
   })
 
   it('keeps the deference sentence even when the rules raise no caution', () => {

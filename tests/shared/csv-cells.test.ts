@@ -1,6 +1,6 @@
 import fc from 'fast-check'
 import { describe, expect, it } from 'vitest'
-import { neutraliseCell, restoreCell } from '../../server/csv/csv-cells'
+import { neutraliseCell, restoreCell } from '../../shared/csv-cells'
 import { detectDelimiter } from '../../server/csv/csv-stream'
 
 describe('neutraliseCell and restoreCell', () => {
