@@ -40,7 +40,7 @@ export async function createApp({ config, dataSource, version, rules, clientDir 
 
   const api = express.Router()
   api.use(healthRoutes(version))
-  api.use(authRoutes(auth))
+  api.use(authRoutes(auth, { loginAttempts: config.loginAttempts }))
   api.use(partRoutes(services.parts))
   api.use(fitmentRoutes(services))
   api.use(buildRoutes(services))

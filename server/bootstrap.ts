@@ -4,7 +4,7 @@ import { fileURLToPath } from 'node:url'
 import type { DataSource } from 'typeorm'
 import type { AppConfig } from './config/env'
 import { openDatabase } from './db/data-source'
-import { DEMO_PASSWORD, seedDemo } from './demo/seed'
+import { DEMO_PASSWORD, DEMO_USERS, seedDemo } from './demo/seed'
 import { UserService } from './services/user.service'
 import { ModificationService } from './services/modification.service'
 import { RuleBook } from './reasoning/rule-book'
@@ -21,7 +21,7 @@ export type Prepared = { dataSource: DataSource; rules: RuleBook; seeded: boolea
 
 /** Accounts that still sign in with the published demo password (start-up warns about them). */
 export async function demoAccountsLeft(dataSource: DataSource): Promise<string[]> {
-  return (await new UserService(dataSource).withPassword(DEMO_PASSWORD)).map((user) => user.email)
+  return (await new UserService(dataSource).withPassword(DEMO_USERS.map((user) => user.email), DEMO_PASSWORD)).map((user) => user.email)
 }
 
 /** Opens and migrates the database, then seeds the demo scenario when asked and the database is empty. */

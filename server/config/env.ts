@@ -13,6 +13,7 @@ const envSchema = z.object({
   FITWRIGHT_SESSION_SECRET: z.string().min(16, 'Use at least 16 characters.').optional(),
   FITWRIGHT_ADMIN_EMAIL: z.email().optional(),
   FITWRIGHT_ADMIN_PASSWORD: z.string().min(10, 'Use at least 10 characters.').optional(),
+  FITWRIGHT_LOGIN_ATTEMPTS: z.coerce.number().int().positive().default(10),
   FITWRIGHT_IMPORT_MAX_BYTES: z.coerce.number().int().positive().default(50 * 1024 * 1024),
   FITWRIGHT_IMPORT_MAX_ROWS: z.coerce.number().int().positive().default(500_000),
 })
@@ -26,6 +27,8 @@ export type AppConfig = {
   sessionSecret?: string
   importMaxBytes: number
   importMaxRows: number
+  /** Failed sign-ins allowed per address and e-mail in 15 minutes. */
+  loginAttempts: number
   /** First administrator, created when the database has no users (for use without the demo). */
   firstAdmin?: { email: string; password: string }
 }
@@ -47,6 +50,7 @@ export function loadConfig(env: NodeJS.ProcessEnv = process.env): AppConfig {
     sessionSecret: value.FITWRIGHT_SESSION_SECRET,
     importMaxBytes: value.FITWRIGHT_IMPORT_MAX_BYTES,
     importMaxRows: value.FITWRIGHT_IMPORT_MAX_ROWS,
+    loginAttempts: value.FITWRIGHT_LOGIN_ATTEMPTS,
     firstAdmin:
       value.FITWRIGHT_ADMIN_EMAIL && value.FITWRIGHT_ADMIN_PASSWORD
         ? { email: value.FITWRIGHT_ADMIN_EMAIL, password: value.FITWRIGHT_ADMIN_PASSWORD }

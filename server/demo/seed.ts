@@ -1,6 +1,7 @@
 import { readdirSync, readFileSync, statSync } from 'node:fs'
 import path from 'node:path'
-import type { DataSource, EntityManager } from 'typeorm'
+import type Database from 'better-sqlite3'
+import type { DataSource } from 'typeorm'
 import { z } from 'zod'
 import type { Role } from '../../shared/schemas/auth'
 import { buildSheetInputSchema } from '../../shared/schemas/build'
@@ -8,13 +9,14 @@ import { linkSourceSchema, relationSchema, type ReviewStatus } from '../../share
 import type { ImportType } from '../../shared/schemas/imports'
 import { splitList } from '../csv/part-row'
 import { readCsvText } from '../csv/read-csv'
-import { BuildSheetEntity } from '../entities/build-sheet.entity'
+import { AppSettingEntity } from '../entities/app-setting.entity'
+import { inTransaction } from '../db/sqlite-connection'
 import { PartEntity } from '../entities/part.entity'
 import { UserEntity } from '../entities/user.entity'
 import { AppError } from '../errors/app-error'
 import { FitGraphIndex } from '../services/fit-graph'
 import { ImportService, type ImportUser } from '../services/import.service'
-import { insertLink } from '../services/link-writer'
+import { insertLinkRow } from '../services/link-rows'
 import type { UserService } from '../services/user.service'
 
 export const DEMO_PASSWORD = 'fitwright-demo'
@@ -42,53 +44,57 @@ async function importDemoFile(imports: ImportService, demoDir: string, file: str
 }
 
 /** Links still awaiting review, which an import cannot make (it approves what it writes). */
-async function seedProposedLinks(manager: EntityManager, file: string, status: ReviewStatus) {
-  const parts = (await manager.query('SELECT id, partNumber FROM part')) as { id: number; partNumber: string }[]
-  const ids = new Map(parts.map((part) => [part.partNumber, part.id]))
-  const rows = readCsvText(readFileSync(file, 'utf8')).rows
-  for (const [index, row] of rows.entries()) {
+function seedProposedLinks(db: Database.Database, file: string) {
+  const ids = new Map((db.prepare('SELECT partNumber, id FROM part').raw().all() as [string, number][]).map(([number, id]) => [number, id]))
+  readCsvText(readFileSync(file, 'utf8')).rows.forEach((row, index) => {
     const a = ids.get(row.from_part ?? '')
     const b = ids.get(row.to_part ?? '')
     if (a === undefined || b === undefined) throw new Error(`Demo data ${path.basename(file)} row ${index + 2}: unknown part`)
-    await insertLink(manager, {
+    insertLinkRow(db, {
       partIds: [a, b],
       relation: relationSchema.parse(row.relation),
       modifications: splitList(row.modifications),
       note: row.note ?? '',
       source: linkSourceSchema.parse(row.source),
-      status,
+      status: 'proposed',
+      batchId: null,
     })
-  }
+  })
 }
 
 const demoBuildsSchema = z.array(buildSheetInputSchema)
 
-async function seedBuilds(manager: EntityManager, file: string, ownerId: number) {
-  const builds = demoBuildsSchema.parse(JSON.parse(readFileSync(file, 'utf8')))
-  for (const build of builds) {
-    await manager.insert(BuildSheetEntity, {
-      ownerId,
-      name: build.name,
-      notes: build.notes,
-      slots: build.slots as Record<string, string>,
-      targetPowerKw: build.targetPowerKw ?? null,
-      fuelOctane: build.fuelOctane ?? null,
-      chassisModelYear: build.chassisModelYear ?? null,
-      vin: build.vin ?? null,
-    })
+function seedBuilds(db: Database.Database, file: string, ownerId: number) {
+  const insert = db.prepare(
+    `INSERT INTO build_sheet (ownerId, name, notes, slots, targetPowerKw, fuelOctane, chassisModelYear, vin) VALUES (?, ?, ?, ?, ?, ?, ?, ?)`,
+  )
+  for (const build of demoBuildsSchema.parse(JSON.parse(readFileSync(file, 'utf8')))) {
+    insert.run(ownerId, build.name, build.notes, JSON.stringify(build.slots), build.targetPowerKw ?? null, build.fuelOctane ?? null, build.chassisModelYear ?? null, build.vin ?? null)
   }
 }
 
+const SEEDED_KEY = 'demo-seeded'
+
 /**
- * Seeds the invented demo scenario into an empty database (no users, no parts).
+ * Seeds the invented demo scenario into an empty database (no users, no parts)
+ * and marks it done. A seed cut short (a bad demo row, a killed process) is
+ * reported at the next start rather than silently left half-filled.
  * Returns whether it seeded.
  */
 export async function seedDemo(dataSource: DataSource, users: UserService, demoDir: string): Promise<boolean> {
+  const settings = dataSource.getRepository(AppSettingEntity)
+  if (await settings.existsBy({ key: SEEDED_KEY })) return false
   const [userCount, partCount] = await Promise.all([
     dataSource.getRepository(UserEntity).count(),
     dataSource.getRepository(PartEntity).count(),
   ])
-  if (userCount > 0 || partCount > 0) return false
+  if (userCount > 0 || partCount > 0) {
+    const [{ sheets }] = (await dataSource.query('SELECT COUNT(*) AS sheets FROM build_sheet')) as [{ sheets: number }]
+    if (sheets === 0 && (await users.withPassword(DEMO_USERS.map((u) => u.email), DEMO_PASSWORD)).length > 0) {
+      console.warn('WARNING: the demo scenario looks only partly seeded (a start was cut short). Delete the database file to seed it again.')
+    }
+    return false
+  }
   const created = []
   for (const user of DEMO_USERS) created.push(await users.create({ ...user, password: DEMO_PASSWORD }))
   const editor = created.find((user) => user.role === 'editor')!
@@ -97,9 +103,10 @@ export async function seedDemo(dataSource: DataSource, users: UserService, demoD
   const partFiles = readdirSync(path.join(demoDir, 'parts')).filter((file) => file.endsWith('.csv')).sort()
   for (const file of partFiles) await importDemoFile(imports, demoDir, `parts/${file}`, 'parts', editor)
   await importDemoFile(imports, demoDir, 'links.csv', 'links', editor)
-  await dataSource.transaction(async (manager) => {
-    await seedProposedLinks(manager, path.join(demoDir, 'proposed-links.csv'), 'proposed')
-    await seedBuilds(manager, path.join(demoDir, 'builds.json'), tech.id)
+  await inTransaction(dataSource, (db) => {
+    seedProposedLinks(db, path.join(demoDir, 'proposed-links.csv'))
+    seedBuilds(db, path.join(demoDir, 'builds.json'), tech.id)
+    db.prepare('INSERT INTO app_setting (key, value) VALUES (?, ?)').run(SEEDED_KEY, new Date().toISOString())
   })
   return true
 }

@@ -15,29 +15,35 @@ export function zodDetails(error: ZodError) {
   }))
 }
 
-/** Maps every error to the one JSON shape; unknown errors are logged, never shown. */
-export function errorHandler(error: unknown, _req: Request, res: Response, next: NextFunction) {
-  if (res.headersSent) return next(error)
+/** The status and body every error is answered with; unknown errors are logged, never shown. */
+export function errorAnswer(error: unknown): { status: number; body: ErrorResponse } {
   if (error instanceof AppError) {
-    return send(res, error.status, { error: { code: error.code, message: error.message, details: error.details } })
+    return { status: error.status, body: { error: { code: error.code, message: error.message, details: error.details } } }
   }
   if (error instanceof ZodError) {
-    return send(res, 400, {
-      error: { code: 'validation_failed', message: 'Some fields are not valid.', details: zodDetails(error) },
-    })
+    return { status: 400, body: { error: { code: 'validation_failed', message: 'Some fields are not valid.', details: zodDetails(error) } } }
   }
   const httpError = error as { status?: number; type?: string; expose?: boolean; message?: string }
   if (httpError.type === 'entity.parse.failed') {
-    return send(res, 400, { error: { code: 'malformed_json', message: 'The request body is not valid JSON.' } })
+    return { status: 400, body: { error: { code: 'malformed_json', message: 'The request body is not valid JSON.' } } }
   }
   if (httpError.type === 'entity.too.large') {
-    return send(res, 413, { error: { code: 'too_large', message: 'The request body is too large.' } })
+    return { status: 413, body: { error: { code: 'too_large', message: 'The request body is too large.' } } }
   }
-  if (typeof httpError.status === 'number' && httpError.status >= 400 && httpError.status < 500 && httpError.expose) {
-    return send(res, httpError.status, { error: { code: 'bad_request', message: httpError.message ?? 'Bad request.' } })
+  if (typeof httpError.status === 'number' && httpError.status >= 400 && httpError.status < 500) {
+    // Client errors raised by Express itself (a malformed percent-encoding in the path, say); their text is not always meant for users.
+    const message = httpError.expose && httpError.message ? httpError.message : 'The request could not be read.'
+    return { status: httpError.status, body: { error: { code: 'bad_request', message } } }
   }
   console.error('Unhandled error:', error)
-  return send(res, 500, { error: { code: 'internal', message: 'Something went wrong on our side. It has been logged.' } })
+  return { status: 500, body: { error: { code: 'internal', message: 'Something went wrong on our side. It has been logged.' } } }
+}
+
+/** The one error handler: every error becomes the one JSON shape. */
+export function errorHandler(error: unknown, _req: Request, res: Response, next: NextFunction) {
+  if (res.headersSent) return next(error)
+  const { status, body } = errorAnswer(error)
+  send(res, status, body)
 }
 
 export function notFoundApi(_req: Request, res: Response) {

@@ -2,6 +2,7 @@ import type { NextFunction, Request, Response } from 'express'
 import { Router } from 'express'
 import type passport from 'passport'
 import { loginSchema, type User } from '../../shared/schemas/auth'
+import { loginThrottle } from '../auth/login-throttle'
 import { requireSignIn } from '../auth/require-role'
 import { AppError } from '../errors/app-error'
 import { parseBody } from '../middleware/validate'
@@ -10,10 +11,10 @@ function promisify(fn: (done: (error?: unknown) => void) => void): Promise<void>
   return new Promise((resolve, reject) => fn((error) => (error ? reject(error) : resolve())))
 }
 
-export function authRoutes(auth: passport.PassportStatic): Router {
+export function authRoutes(auth: passport.PassportStatic, options: { loginAttempts: number }): Router {
   const router = Router()
 
-  router.post('/auth/login', async (req: Request, res: Response, next: NextFunction) => {
+  router.post('/auth/login', loginThrottle(options.loginAttempts), async (req: Request, res: Response, next: NextFunction) => {
     req.body = parseBody(loginSchema, req)
     const user = await new Promise<User | false>((resolve, reject) => {
       auth.authenticate('local', (error: unknown, found: User | false) => (error ? reject(error) : resolve(found)))(

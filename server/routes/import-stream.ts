@@ -1,6 +1,6 @@
 import type { Request, Response } from 'express'
 import type { ImportProgress, ImportResult, ImportStreamLine } from '../../shared/schemas/imports'
-import { AppError } from '../errors/app-error'
+import { errorAnswer } from '../errors/error-handler'
 
 export const NDJSON = 'application/x-ndjson'
 
@@ -27,12 +27,7 @@ export async function streamImport(
     const result = await run((progress) => send(progress))
     send({ type: 'result', status: result.batchId === undefined ? 200 : 201, body: result })
   } catch (error) {
-    if (error instanceof AppError) {
-      send({ type: 'error', status: error.status, body: { error: { code: error.code, message: error.message, details: error.details } } })
-    } else {
-      console.error('Unhandled error during an import:', error)
-      send({ type: 'error', status: 500, body: { error: { code: 'internal', message: 'Something went wrong on our side. It has been logged.' } } })
-    }
+    send({ type: 'error', ...errorAnswer(error) })
   }
   res.end()
 }

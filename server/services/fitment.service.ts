@@ -9,7 +9,6 @@ import {
 } from '../../shared/schemas/fitment'
 import type { PartAttributes } from '../../shared/schemas/part-attributes'
 import type { PartKind } from '../../shared/schemas/part-kinds'
-import { AppError } from '../errors/app-error'
 import { chainSteps } from '../reasoning/explain'
 import { buildFacts } from '../reasoning/facts'
 import { computeFigures } from '../reasoning/figures'
@@ -53,8 +52,7 @@ export class FitmentService {
    * rules infer from attributes among parts of mating kinds.
    */
   async fitsFor(code: string, query: FitsQuery): Promise<FitsResponse> {
-    const entity = await this.parts.findEntity(code)
-    if (!entity) throw AppError.notFound(`No part with number or mark "${code}".`)
+    const entity = await this.parts.requireEntity(code)
     const graph = await this.graphIndex.snapshot()
     const members = graph.classOf(entity.id)
     const reviewed = this.reviewedFits(graph, entity.id)

@@ -6,7 +6,6 @@ import {
   type GraphPath,
   type Neighbourhood,
 } from '../../shared/schemas/graph'
-import { AppError } from '../errors/app-error'
 import type { FitGraph, GraphIdentity, GraphLink } from './fit-graph'
 import type { FitGraphIndex } from './fit-graph'
 import { shortestFitPath } from './graph-search'
@@ -46,15 +45,9 @@ export class GraphService {
     private readonly graphIndex: FitGraphIndex,
   ) {}
 
-  private async partId(code: string, label: string): Promise<number> {
-    const entity = await this.parts.findEntity(code)
-    if (!entity) throw AppError.badRequest(`Unknown part number "${code}".`, [{ path: label, message: `Unknown part number "${code}".` }])
-    return entity.id
-  }
-
   /** Shortest chain of approved fit links between two parts (see shortestFitPath). */
   async path(fromCode: string, toCode: string): Promise<GraphPath> {
-    const [from, to] = [await this.partId(fromCode, 'from'), await this.partId(toCode, 'to')]
+    const [from, to] = [await this.parts.requireId(fromCode, 'from'), await this.parts.requireId(toCode, 'to')]
     const graph = await this.graphIndex.snapshot()
     const fromNumber = graph.part(from).partNumber
     const toNumber = graph.part(to).partNumber
@@ -86,8 +79,7 @@ export class GraphService {
 
   /** Parts within one or two links or identities of a part, capped so a view stays usable. */
   async neighbourhood(code: string, depth: number): Promise<Neighbourhood> {
-    const entity = await this.parts.findEntity(code)
-    if (!entity) throw AppError.notFound(`No part with number or mark "${code}".`)
+    const entity = await this.parts.requireEntity(code)
     const graph = await this.graphIndex.snapshot()
     const distance = new Map<number, number>([[entity.id, 0]])
     let frontier = [entity.id]

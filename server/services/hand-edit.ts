@@ -1,5 +1,6 @@
 import type Database from 'better-sqlite3'
 import { changeRecorder, insertBatch, SQL_NOW, type PreviousRows } from './import-change-log'
+import { modificationIds, setLinkModifications } from './link-rows'
 
 export type Editor = { id: number; name: string }
 
@@ -18,10 +19,6 @@ export function handEdit(db: Database.Database, editor: Editor, counts: { create
     validRowsOnly: false,
   })
   const record = changeRecorder(db, batchId)
-  const insertModification = db.prepare(
-    `INSERT INTO modification (name, title, summary, steps, extraParts, consumables, skillLevel, timeMinutes, cautions, status, source, batchId)
-     VALUES (?, ?, '', '[]', '[]', '[]', 'skilled', NULL, '[]', 'proposed', 'editor', ?)`,
-  )
   return {
     batchId,
     /** Keeps the link's rows as they were, before it is updated or deleted. */
@@ -34,18 +31,9 @@ export function handEdit(db: Database.Database, editor: Editor, counts: { create
       const identity = db.prepare('SELECT * FROM part_identity WHERE id = ?').get(identityId) as Record<string, unknown> & { batchId: number | null }
       record('identity', identityId, 'deleted', identity.batchId, { part_identity: [identity] })
     },
-    /** Modification ids by name; an unknown name becomes a proposed modification of this edit. */
-    modificationIds(names: string[]): number[] {
-      const find = db.prepare('SELECT id FROM modification WHERE name = ?')
-      return names.map((name) => {
-        const found = find.get(name) as { id: number } | undefined
-        return found ? found.id : Number(insertModification.run(name, name, batchId).lastInsertRowid)
-      })
-    },
-    setLinkModifications(linkId: number, ids: number[]) {
-      db.prepare('DELETE FROM link_modification WHERE linkId = ?').run(linkId)
-      const insert = db.prepare('INSERT INTO link_modification (linkId, modificationId) VALUES (?, ?)')
-      for (const id of ids) insert.run(linkId, id)
+    /** Sets a link's modifications; an unknown name becomes a proposed modification of this edit. */
+    setModifications(linkId: number, names: string[]) {
+      setLinkModifications(db, linkId, modificationIds(db, names, batchId, 'editor'))
     },
     now: SQL_NOW,
   }

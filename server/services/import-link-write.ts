@@ -1,13 +1,11 @@
 import type Database from 'better-sqlite3'
 import { SQL_NOW, changeRecorder } from './import-change-log'
 import type { LinksPlan } from './import-link-plan'
+import { proposedModificationInserter } from './link-rows'
 
 /** Writes a links plan with prepared statements; the caller holds the transaction. */
 export function writeLinks(db: Database.Database, plan: LinksPlan, batchId: number) {
-  const insertModification = db.prepare(
-    `INSERT INTO modification (name, title, summary, steps, extraParts, consumables, skillLevel, timeMinutes, cautions, status, source, batchId)
-     VALUES (?, ?, '', '[]', '[]', '[]', 'skilled', NULL, '[]', 'proposed', 'import', ?)`,
-  )
+  const insertModification = proposedModificationInserter(db, 'import')
   const insertLink = db.prepare(
     "INSERT INTO link (partAId, partBId, relation, note, source, status, batchId) VALUES (?, ?, ?, ?, ?, 'approved', ?)",
   )
@@ -24,7 +22,7 @@ export function writeLinks(db: Database.Database, plan: LinksPlan, batchId: numb
 
   const modificationIds = new Map(plan.modificationIds)
   for (const name of plan.newModifications) {
-    modificationIds.set(name, Number(insertModification.run(name, name, batchId).lastInsertRowid))
+    modificationIds.set(name, insertModification(name, batchId))
   }
   const linkMods = (linkId: number, names: string[]) => {
     for (const name of names) insertLinkMod.run(linkId, modificationIds.get(name)!)

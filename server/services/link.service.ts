@@ -5,7 +5,7 @@ import { inTransaction } from '../db/sqlite-connection'
 import { AppError } from '../errors/app-error'
 import type { FitGraphIndex } from './fit-graph'
 import { handEdit, type Editor } from './hand-edit'
-import { orderedPair } from './link-writer'
+import { insertIdentityRow, insertLinkRow, orderedPair, pairHolder } from './link-rows'
 import type { PartService } from './part.service'
 
 type LinkRow = Omit<Link, 'modifications' | 'createdAt' | 'updatedAt'> & { createdAt: string; updatedAt: string; modifications: string | null }
@@ -39,7 +39,7 @@ export class LinkService {
       params.push(query.status)
     }
     if (query.part) {
-      const part = await this.partId(query.part, 'part')
+      const part = await this.parts.requireId(query.part, 'part')
       where.push('(l.partAId = ? OR l.partBId = ?)')
       params.push(part, part)
     }
@@ -59,14 +59,8 @@ export class LinkService {
     return toLink(row)
   }
 
-  private async partId(code: string, path: string): Promise<number> {
-    const entity = await this.parts.findEntity(code)
-    if (!entity) throw AppError.badRequest(`Unknown part number "${code}".`, [{ path, message: `Unknown part number "${code}".` }])
-    return entity.id
-  }
-
   private async pair(a: string, b: string, paths: [string, string]): Promise<[number, number]> {
-    const ids: [number, number] = [await this.partId(a, paths[0]), await this.partId(b, paths[1])]
+    const ids: [number, number] = [await this.parts.requireId(a, paths[0]), await this.parts.requireId(b, paths[1])]
     if (ids[0] === ids[1]) {
       throw AppError.badRequest('A part cannot be linked to itself.', [{ path: paths[1], message: 'Choose another part than the first.' }])
     }
@@ -75,21 +69,12 @@ export class LinkService {
 
   /** A link an editor writes is reviewed by that act: approved, from the editor. */
   async create(input: LinkCreate, editor: Editor): Promise<Link> {
-    const [a, b] = await this.pair(input.fromPart, input.toPart, ['fromPart', 'toPart'])
+    const partIds = await this.pair(input.fromPart, input.toPart, ['fromPart', 'toPart'])
     const id = await inTransaction(this.dataSource, (db) => {
-      if (db.prepare('SELECT 1 FROM link WHERE partAId = ? AND partBId = ?').get(a, b)) {
-        throw AppError.conflict('These two parts are linked already; change that link instead.', [
-          { path: 'toPart', message: 'Already linked to the first part.' },
-        ])
-      }
+      refuseTakenPair(db, partIds, 'toPart')
       const edit = handEdit(db, editor, { created: 1, updated: 0 })
-      const linkId = Number(
-        db
-          .prepare("INSERT INTO link (partAId, partBId, relation, note, source, status, batchId) VALUES (?, ?, ?, ?, 'editor', 'approved', ?)")
-          .run(a, b, input.relation, input.note, edit.batchId).lastInsertRowid,
-      )
-      edit.setLinkModifications(linkId, edit.modificationIds(input.modifications))
-      return linkId
+      const { relation, modifications, note } = input
+      return insertLinkRow(db, { partIds, relation, modifications, note, source: 'editor', status: 'approved', batchId: edit.batchId })
     })
     this.graphIndex.invalidate()
     return this.get(id)
@@ -100,9 +85,7 @@ export class LinkService {
     const current = await this.get(id)
     const relation = change.relation ?? current.relation
     const modifications = change.modifications ?? (relation === 'fits-with-modification' ? current.modifications : [])
-    if (relation === 'fits-with-modification' && modifications.length === 0) {
-      throw AppError.badRequest('Name the modification a fit with modification needs.', [{ path: 'modifications', message: 'Required for a fit with modification.' }])
-    }
+    checkModifications(relation, modifications)
     await inTransaction(this.dataSource, (db) => {
       const edit = handEdit(db, editor, { created: 0, updated: 1 })
       edit.rememberLink(id, 'updated')
@@ -113,7 +96,7 @@ export class LinkService {
         edit.batchId,
         id,
       )
-      edit.setLinkModifications(id, edit.modificationIds(modifications))
+      edit.setModifications(id, modifications)
     })
     this.graphIndex.invalidate()
     return this.get(id)
@@ -130,21 +113,15 @@ export class LinkService {
   }
 
   async createIdentity(input: IdentityCreate, editor: Editor): Promise<Identity> {
-    const [a, b] = await this.pair(input.partA, input.partB, ['partA', 'partB'])
+    const partIds = await this.pair(input.partA, input.partB, ['partA', 'partB'])
     const id = await inTransaction(this.dataSource, (db) => {
-      if (db.prepare('SELECT 1 FROM part_identity WHERE partAId = ? AND partBId = ?').get(a, b)) {
-        throw AppError.conflict('These two parts are declared identical already.')
-      }
+      refuseTakenPair(db, partIds, 'partB')
       const edit = handEdit(db, editor, { created: 1, updated: 0 })
-      return Number(
-        db
-          .prepare("INSERT INTO part_identity (partAId, partBId, note, source, batchId) VALUES (?, ?, ?, 'editor', ?)")
-          .run(a, b, input.note, edit.batchId).lastInsertRowid,
-      )
+      return insertIdentityRow(db, { partIds, note: input.note, source: 'editor', batchId: edit.batchId })
     })
     this.graphIndex.invalidate()
-    const graph = await this.graphIndex.snapshot()
-    return { id, partA: graph.part(a).partNumber, partB: graph.part(b).partNumber, note: input.note, source: 'editor' }
+    const [partA, partB] = await this.parts.byIds(orderedPair(partIds))
+    return { id, partA: partA!.partNumber, partB: partB!.partNumber, note: input.note, source: 'editor' }
   }
 
   async removeIdentity(id: number, editor: Editor): Promise<void> {
@@ -158,4 +135,21 @@ export class LinkService {
     if (!removed) throw AppError.notFound(`No identity ${id}.`)
     this.graphIndex.invalidate()
   }
+}
+
+/** Only a fit with modification names modifications, and it names at least one. */
+function checkModifications(relation: string, modifications: string[]) {
+  if (relation === 'fits-with-modification' && modifications.length === 0) {
+    throw AppError.badRequest('Name the modification a fit with modification needs.', [{ path: 'modifications', message: 'Required for a fit with modification.' }])
+  }
+  if (relation !== 'fits-with-modification' && modifications.length > 0) {
+    throw AppError.badRequest('Only a fit with modification names modifications.', [{ path: 'modifications', message: 'Leave empty for this relation.' }])
+  }
+}
+
+/** A pair holds one relation: a fit link or an identity, as imports have it too. */
+function refuseTakenPair(db: Parameters<typeof pairHolder>[0], partIds: [number, number], path: string) {
+  const holder = pairHolder(db, partIds)
+  if (holder === 'link') throw AppError.conflict('These two parts are linked already; change that link instead.', [{ path, message: 'Already linked to the first part.' }])
+  if (holder === 'identity') throw AppError.conflict('These two parts are declared identical already.', [{ path, message: 'Already the same part as the first.' }])
 }

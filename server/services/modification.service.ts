@@ -1,4 +1,6 @@
-import type { DataSource, EntityManager } from 'typeorm'
+import type { DataSource } from 'typeorm'
+import { inTransaction } from '../db/sqlite-connection'
+import { SQL_NOW } from './import-change-log'
 import { In } from 'typeorm'
 import type { Modification } from '../../shared/schemas/fitment'
 import { ModificationEntity } from '../entities/modification.entity'
@@ -41,13 +43,33 @@ export class ModificationService {
   /**
    * Writes the shipped catalogue (rules/catalogue/modifications.json) into the
    * database at start-up, so rules and reviewed links name the same entries.
+   * One transaction; entries that already read the same are left alone.
    */
-  async syncShipped(specs: ModificationSpec[], manager: EntityManager = this.dataSource.manager): Promise<void> {
-    const repo = manager.getRepository(ModificationEntity)
-    for (const spec of specs) {
-      const existing = await repo.findOneBy({ name: spec.name })
-      await repo.save({ ...(existing ?? {}), ...spec, status: 'approved', source: 'rules' })
-    }
+  async syncShipped(specs: ModificationSpec[]): Promise<void> {
+    await inTransaction(this.dataSource, (db) => {
+      const find = db.prepare('SELECT * FROM modification WHERE name = ?')
+      const upsert = db.prepare(
+        `INSERT INTO modification (name, title, summary, steps, extraParts, consumables, skillLevel, timeMinutes, cautions, status, source)
+         VALUES (@name, @title, @summary, @steps, @extraParts, @consumables, @skillLevel, @timeMinutes, @cautions, 'approved', 'rules')
+         ON CONFLICT(name) DO UPDATE SET title = @title, summary = @summary, steps = @steps, extraParts = @extraParts, consumables = @consumables,
+           skillLevel = @skillLevel, timeMinutes = @timeMinutes, cautions = @cautions, status = 'approved', source = 'rules', updatedAt = ${SQL_NOW}`,
+      )
+      for (const spec of specs) {
+        const row = {
+          ...spec,
+          steps: JSON.stringify(spec.steps),
+          extraParts: JSON.stringify(spec.extraParts),
+          consumables: JSON.stringify(spec.consumables),
+          cautions: JSON.stringify(spec.cautions),
+        }
+        const current = find.get(spec.name) as Record<string, unknown> | undefined
+        const same =
+          current?.status === 'approved' &&
+          current.source === 'rules' &&
+          (Object.keys(row) as (keyof typeof row)[]).every((key) => current[key] === row[key])
+        if (!same) upsert.run(row)
+      }
+    })
   }
 
   async list(): Promise<Modification[]> {

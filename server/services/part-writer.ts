@@ -1,8 +1,6 @@
-import type { EntityManager } from 'typeorm'
+import type Database from 'better-sqlite3'
 import type { PartInput } from '../../shared/schemas/part-input'
 import { normalisePartCode } from '../../shared/schemas/part'
-import { PartMarkEntity } from '../entities/part-mark.entity'
-import { PartEntity } from '../entities/part.entity'
 
 export function partColumns(part: PartInput) {
   return {
@@ -22,15 +20,18 @@ export function markRows(partId: number, part: PartInput) {
   return part.marks.map((mark) => ({ partId, type: mark.type, value: mark.value, valueKey: normalisePartCode(mark.value) }))
 }
 
-/** Inserts new parts with their marks, inside the caller's transaction. */
-export async function insertParts(manager: EntityManager, parts: PartInput[]): Promise<Map<string, number>> {
+/** Inserts new parts with their marks, inside the caller's transaction; their ids by part number. */
+export function insertPartRows(db: Database.Database, parts: PartInput[]): Map<string, number> {
+  const insertPart = db.prepare(
+    'INSERT INTO part (partNumber, partKey, kind, name, family, yearFrom, yearTo, notes, attributes) VALUES (@partNumber, @partKey, @kind, @name, @family, @yearFrom, @yearTo, @notes, @attributes)',
+  )
+  const insertMark = db.prepare('INSERT INTO part_mark (partId, type, value, valueKey) VALUES (@partId, @type, @value, @valueKey)')
   const ids = new Map<string, number>()
   for (const part of parts) {
-    const result = await manager.insert(PartEntity, partColumns(part))
-    const id = result.identifiers[0]?.id as number
+    const columns = partColumns(part)
+    const id = Number(insertPart.run({ ...columns, attributes: JSON.stringify(columns.attributes) }).lastInsertRowid)
     ids.set(part.partNumber, id)
-    const marks = markRows(id, part)
-    if (marks.length) await manager.insert(PartMarkEntity, marks)
+    for (const mark of markRows(id, part)) insertMark.run(mark)
   }
   return ids
 }

@@ -83,9 +83,21 @@ export class PartService {
     return mark ? this.parts.findOne({ where: { id: mark.partId }, relations: { marks: true } }) : null
   }
 
-  async get(code: string): Promise<Part> {
+  /** The part, or 404: for a part named in the address. */
+  async requireEntity(code: string): Promise<PartEntity> {
     const entity = await this.findEntity(code)
     if (!entity) throw AppError.notFound(`No part with number or mark "${code}".`)
-    return toPart(entity)
+    return entity
+  }
+
+  /** The part's id, or 400 naming the field: for a part named in a request's input. */
+  async requireId(code: string, path: string): Promise<number> {
+    const entity = await this.findEntity(code)
+    if (!entity) throw AppError.badRequest(`Unknown part number "${code}".`, [{ path, message: `Unknown part number "${code}".` }])
+    return entity.id
+  }
+
+  async get(code: string): Promise<Part> {
+    return toPart(await this.requireEntity(code))
   }
 }

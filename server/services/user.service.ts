@@ -1,5 +1,6 @@
 import bcrypt from 'bcryptjs'
-import type { DataSource, Repository } from 'typeorm'
+import { In, type DataSource, type Repository } from 'typeorm'
+import { inTransaction } from '../db/sqlite-connection'
 import type { Role, User, UserUpdateInput } from '../../shared/schemas/auth'
 import { UserEntity } from '../entities/user.entity'
 import { AppError } from '../errors/app-error'
@@ -15,7 +16,7 @@ export function toUser(entity: UserEntity): User {
 export class UserService {
   private readonly users: Repository<UserEntity>
 
-  constructor(dataSource: DataSource) {
+  constructor(private readonly dataSource: DataSource) {
     this.users = dataSource.getRepository(UserEntity)
   }
 
@@ -49,31 +50,38 @@ export class UserService {
     return toUser(await this.users.save(entity))
   }
 
-  /** Changes name, role or password; the last administrator cannot lose the role. */
+  /**
+   * Changes name, role or password; the last administrator cannot lose the
+   * role. The hash is made first: the check and the write then run as one
+   * synchronous transaction, with no other request in between.
+   */
   async update(id: number, change: UserUpdateInput, actingUserId: number): Promise<User> {
-    return this.users.manager.transaction(async (manager) => {
-      const repo = manager.getRepository(UserEntity)
-      const entity = await repo.findOneBy({ id })
-      if (!entity) throw AppError.notFound(`No user with id ${id}.`)
-      if (change.role && change.role !== 'admin' && entity.role === 'admin') {
-        const admins = await repo.countBy({ role: 'admin' })
+    const passwordHash = change.password ? await bcrypt.hash(change.password, BCRYPT_ROUNDS) : null
+    await inTransaction(this.dataSource, (db) => {
+      const current = db.prepare('SELECT role FROM user WHERE id = ?').get(id) as { role: Role } | undefined
+      if (!current) throw AppError.notFound(`No user with id ${id}.`)
+      if (change.role && change.role !== 'admin' && current.role === 'admin') {
+        const { admins } = db.prepare("SELECT COUNT(*) AS admins FROM user WHERE role = 'admin'").get() as { admins: number }
         if (admins <= 1) throw AppError.conflict('Fitwright needs at least one administrator; make another one first.')
         if (id === actingUserId) throw AppError.conflict('You cannot take the administrator role from yourself.')
       }
-      if (change.name) entity.name = change.name
-      if (change.role) entity.role = change.role
-      if (change.password) entity.passwordHash = await bcrypt.hash(change.password, BCRYPT_ROUNDS)
-      return toUser(await repo.save(entity))
+      db.prepare('UPDATE user SET name = COALESCE(?, name), role = COALESCE(?, role), passwordHash = COALESCE(?, passwordHash) WHERE id = ?').run(
+        change.name ?? null,
+        change.role ?? null,
+        passwordHash,
+        id,
+      )
     })
+    return (await this.findById(id))!
   }
 
   async count(): Promise<number> {
     return this.users.count()
   }
 
-  /** Users who still sign in with the given password (the published demo one). */
-  async withPassword(password: string): Promise<User[]> {
-    const all = await this.users.find()
+  /** Of the given accounts, those that still sign in with the given password (the published demo one). */
+  async withPassword(emails: string[], password: string): Promise<User[]> {
+    const all = await this.users.findBy({ email: In(emails) })
     const matches = await Promise.all(all.map((user) => bcrypt.compare(password, user.passwordHash)))
     return all.filter((_, index) => matches[index]).map(toUser)
   }

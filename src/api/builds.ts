@@ -13,7 +13,8 @@ import { request, requestVoid } from './http'
 export const buildsApi = {
   evaluate: (body: EvaluateRequest, signal?: AbortSignal) =>
     request('POST', '/builds/evaluate', evaluationSchema, { body, signal }),
-  complete: (body: EvaluateRequest & { limit?: number }, signal?: AbortSignal) =>
+  /** Candidates for the empty slots (only those in `only`, when given). */
+  complete: (body: EvaluateRequest & { limit?: number; only?: string[] }, signal?: AbortSignal) =>
     request('POST', '/builds/complete', completionSchema, { body, signal }),
   fill: (body: EvaluateRequest) => request('POST', '/builds/fill', fillResultSchema, { body }),
   list: (signal?: AbortSignal) => request('GET', '/builds', buildSheetListSchema, { signal }),

@@ -37,14 +37,24 @@ export function apiUrl(path: string, query?: Query): string {
   return `/api${path}${search ? `?${search}` : ''}`
 }
 
-async function toApiError(response: Response): Promise<ApiError> {
-  const body: unknown = await response.json().catch(() => null)
+/** An error answer as an `ApiError`: the server's own code and message when it sent the one error shape. */
+export function apiErrorFrom(status: number, body: unknown): ApiError {
   const parsed = errorResponseSchema.safeParse(body)
   if (parsed.success) {
     const { code, message, details } = parsed.data.error
-    return new ApiError(response.status, code, message, details)
+    return new ApiError(status, code, message, details)
   }
-  return new ApiError(response.status, 'http_error', `The server answered ${response.status}.`)
+  return new ApiError(status, 'http_error', `The server answered ${status}.`)
+}
+
+/** The error for a request that never reached the server. */
+export function networkError(): ApiError {
+  return new ApiError(0, 'network', 'Cannot reach the Fitwright server. Check the connection and try again.')
+}
+
+/** Tells the one 401 handler that the session ended (for calls that do not go through `request`, such as an upload). */
+export function notifyUnauthorized() {
+  onUnauthorized?.()
 }
 
 async function send(method: string, path: string, options: RequestOptions): Promise<Response> {
@@ -60,11 +70,11 @@ async function send(method: string, path: string, options: RequestOptions): Prom
     })
   } catch (cause) {
     if (cause instanceof DOMException && cause.name === 'AbortError') throw cause
-    throw new ApiError(0, 'network', 'Cannot reach the Fitwright server. Check the connection and try again.')
+    throw networkError()
   }
   if (!response.ok) {
-    const error = await toApiError(response)
-    if (response.status === 401 && !path.startsWith('/auth/')) onUnauthorized?.()
+    const error = apiErrorFrom(response.status, await response.json().catch(() => null))
+    if (response.status === 401 && !path.startsWith('/auth/')) notifyUnauthorized()
     throw error
   }
   return response

@@ -1,4 +1,3 @@
-import { errorResponseSchema } from '@shared/schemas/errors'
 import {
   importBatchListSchema,
   importBatchSchema,
@@ -11,7 +10,7 @@ import {
   type ImportStreamLine,
   type ImportType,
 } from '@shared/schemas/imports'
-import { ApiError, apiUrl, request } from './http'
+import { ApiError, apiErrorFrom, apiUrl, networkError, notifyUnauthorized, request } from './http'
 
 /** Sending the file (measured by the browser), then the server's own phases. */
 export type UploadProgress = { type: 'progress'; phase: 'upload'; done: number; total: number } | ImportProgress
@@ -22,13 +21,6 @@ export type UploadRequest = {
   mode: ImportMode
   validRowsOnly: boolean
   onProgress: (progress: UploadProgress) => void
-}
-
-function errorFrom(status: number, body: unknown): ApiError {
-  const parsed = errorResponseSchema.safeParse(body)
-  if (!parsed.success) return new ApiError(status, 'http_error', `The server answered ${status}.`)
-  const { code, message, details } = parsed.data.error
-  return new ApiError(status, code, message, details)
 }
 
 function parseJson(text: string): unknown {
@@ -63,12 +55,11 @@ function upload({ file, type, mode, validRowsOnly, onProgress }: UploadRequest):
     xhr.onprogress = () => {
       if (xhr.status === 200) readLines()
     }
-    xhr.onerror = () => reject(new ApiError(0, 'network', 'Cannot reach the Fitwright server. Check the connection and try again.'))
+    xhr.onerror = () => reject(networkError())
     xhr.onload = () => {
       if (xhr.status !== 200) {
-        // Let the one place that handles an ended session see it: a plain API call meets the same 401.
-        if (xhr.status === 401) void request('GET', '/imports', importBatchListSchema).catch(() => undefined)
-        return reject(errorFrom(xhr.status, parseJson(xhr.responseText)))
+        if (xhr.status === 401) notifyUnauthorized()
+        return reject(apiErrorFrom(xhr.status, parseJson(xhr.responseText)))
       }
       readLines()
       const answer = last as ImportStreamLine | null
@@ -76,7 +67,7 @@ function upload({ file, type, mode, validRowsOnly, onProgress }: UploadRequest):
         const result = importResultSchema.safeParse(answer.body)
         return result.success ? resolve(result.data) : reject(new ApiError(0, 'bad_answer', 'The server sent an answer this page does not understand.'))
       }
-      if (answer?.type === 'error') return reject(errorFrom(answer.status, answer.body))
+      if (answer?.type === 'error') return reject(apiErrorFrom(answer.status, answer.body))
       reject(new ApiError(0, 'incomplete', 'The server stopped answering before the import finished. Check the batch list before trying again.'))
     }
     const form = new FormData()

@@ -13,11 +13,13 @@ function initialScheme(): Scheme {
 // One scheme for the whole app: the shop floor and the counter often want different ones.
 const scheme = ref<Scheme>(initialScheme())
 
+// One watcher for the app, started when this module is first imported, however many components use the scheme.
+watchEffect(() => {
+  document.documentElement.classList.toggle(DARK_MODE_CLASS, scheme.value === 'dark')
+  localStorage.setItem(STORAGE_KEY, scheme.value)
+})
+
 export function useColourScheme() {
-  watchEffect(() => {
-    document.documentElement.classList.toggle(DARK_MODE_CLASS, scheme.value === 'dark')
-    localStorage.setItem(STORAGE_KEY, scheme.value)
-  })
   function toggle() {
     scheme.value = scheme.value === 'dark' ? 'light' : 'dark'
   }

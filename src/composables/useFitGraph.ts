@@ -2,13 +2,10 @@ import { computed, watch } from 'vue'
 import { useRoute, useRouter } from 'vue-router'
 import type { GraphPath, Neighbourhood } from '@shared/schemas/graph'
 import { graphApi } from '@/api/graph'
+import { queryInt, queryText } from '@/lib/route-query'
 import { useRemote } from './useRemote'
 
 export type GraphMode = 'neighbourhood' | 'path'
-
-function queryText(value: unknown): string {
-  return typeof value === 'string' ? value.trim() : ''
-}
 
 /**
  * The fit graph view: a part's neighbourhood (`/graph/:partNumber?depth=2`) or
@@ -21,7 +18,7 @@ export function useFitGraph() {
 
   const mode = computed<GraphMode>(() => (route.name === 'graph-path' ? 'path' : 'neighbourhood'))
   const partNumber = computed(() => (typeof route.params.partNumber === 'string' ? route.params.partNumber : ''))
-  const depth = computed<1 | 2>(() => (route.query.depth === '2' ? 2 : 1))
+  const depth = computed<1 | 2>(() => (queryInt(route.query.depth) === 2 ? 2 : 1))
   const from = computed(() => queryText(route.query.from))
   const to = computed(() => queryText(route.query.to))
 

@@ -1,14 +1,10 @@
 import { computed, watch, type Ref } from 'vue'
 import { useRoute, useRouter } from 'vue-router'
-import { RELATIONS, type FitsResponse, type Relation } from '@shared/schemas/fitment'
-import { PART_KINDS, type PartKind } from '@shared/schemas/part-kinds'
+import { RELATIONS, type FitsResponse } from '@shared/schemas/fitment'
 import { fitmentApi } from '@/api/fitment'
 import { filterFits, groupFits, kindsIn, relationCounts, type FitFilters } from '@/lib/fit-groups'
+import { queryKind, queryOneOf, queryText } from '@/lib/route-query'
 import { useRemote } from './useRemote'
-
-function queryText(value: unknown): string {
-  return typeof value === 'string' ? value : ''
-}
 
 /**
  * The part page: the part, its identical numbers and what fits it. The
@@ -21,15 +17,11 @@ export function usePartFits(partNumber: Ref<string>) {
   const router = useRouter()
   const remote = useRemote<FitsResponse>()
 
-  const filters = computed<FitFilters>(() => {
-    const relation = queryText(route.query.relation)
-    const kind = queryText(route.query.kind)
-    return {
-      relation: (RELATIONS as readonly string[]).includes(relation) ? (relation as Relation) : undefined,
-      kind: (PART_KINDS as readonly string[]).includes(kind) ? (kind as PartKind) : undefined,
-      inferred: queryText(route.query.inferred) !== '0',
-    }
-  })
+  const filters = computed<FitFilters>(() => ({
+    relation: queryOneOf(route.query.relation, RELATIONS),
+    kind: queryKind(route.query.kind),
+    inferred: queryText(route.query.inferred) !== '0',
+  }))
 
   function setFilters(change: Partial<FitFilters>) {
     const next = { ...filters.value, ...change }

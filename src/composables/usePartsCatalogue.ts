@@ -1,15 +1,12 @@
 import { computed, watch } from 'vue'
 import { useRoute, useRouter } from 'vue-router'
 import type { PartList } from '@shared/schemas/part'
-import { PART_KINDS, type PartKind } from '@shared/schemas/part-kinds'
+import type { PartKind } from '@shared/schemas/part-kinds'
 import { partsApi } from '@/api/parts'
+import { queryInt, queryKind, queryText } from '@/lib/route-query'
 import { useRemote } from './useRemote'
 
 const PAGE_SIZES = [25, 50, 100] as const
-
-function queryText(value: unknown): string {
-  return typeof value === 'string' ? value : ''
-}
 
 /**
  * The catalogue's search, kind filter and page live in the address, so a
@@ -21,14 +18,11 @@ export function usePartsCatalogue() {
   const remote = useRemote<PartList>()
 
   const q = computed(() => queryText(route.query.q))
-  const kind = computed<PartKind | undefined>(() => {
-    const value = queryText(route.query.kind)
-    return (PART_KINDS as readonly string[]).includes(value) ? (value as PartKind) : undefined
-  })
-  const page = computed(() => Math.max(1, Number.parseInt(queryText(route.query.page), 10) || 1))
+  const kind = computed(() => queryKind(route.query.kind))
+  const page = computed(() => Math.max(1, queryInt(route.query.page) ?? 1))
   const pageSize = computed(() => {
-    const size = Number.parseInt(queryText(route.query.size), 10)
-    return (PAGE_SIZES as readonly number[]).includes(size) ? size : PAGE_SIZES[0]
+    const size = queryInt(route.query.size)
+    return size !== undefined && (PAGE_SIZES as readonly number[]).includes(size) ? size : PAGE_SIZES[0]
   })
 
   function update(change: { q?: string; kind?: PartKind | null; page?: number; size?: number }) {

@@ -10,17 +10,18 @@ const CANDIDATE_LIMIT = 50
 const CACHE_SIZE = 24
 
 /*
- * One completion answers every empty slot of the same build, so the pickers
- * share answers (and requests in flight) by the build they were asked for.
+ * Each search in a picker asks again with the same build, so answers (and
+ * requests in flight) are kept by slot and build; the server is asked about
+ * that one slot only.
  */
 const completions = new Map<string, Promise<Completion>>()
 
-function completionFor(slots: PlannerState['slots'], context: BuildContext): Promise<Completion> {
-  const key = JSON.stringify(plannerToQuery({ slots, context }))
+function completionFor(slot: SlotId, slots: PlannerState['slots'], context: BuildContext): Promise<Completion> {
+  const key = JSON.stringify([slot, plannerToQuery({ slots, context })])
   let answer = completions.get(key)
   if (!answer) {
     if (completions.size >= CACHE_SIZE) completions.clear()
-    answer = buildsApi.complete({ ...evaluateBody({ slots, context }), limit: CANDIDATE_LIMIT })
+    answer = buildsApi.complete({ ...evaluateBody({ slots, context }), limit: CANDIDATE_LIMIT, only: [slot] })
     answer.catch(() => completions.delete(key))
     completions.set(key, answer)
   }
@@ -45,7 +46,7 @@ export function useSlotSuggestions(slot: SlotId, build: () => PlannerState) {
     if (!mates.some((mate) => others[mate])) {
       return { candidates: [], note: `Choose a part for a slot it mates with (${mates.join(', ')}) to see what fits.` }
     }
-    const entry = (await completionFor(others, context)).slots[slot]
+    const entry = (await completionFor(slot, others, context)).slots[slot]
     return { candidates: entry?.candidates ?? [], note: entry?.note ?? '' }
   }
 

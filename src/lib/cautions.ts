@@ -1,15 +1,12 @@
 import { DEFERENCE } from '@shared/advisory'
 import type { Caution } from '@shared/schemas/build'
 
-const RANK: Record<Caution['severity'], number> = { danger: 0, warning: 1, info: 2 }
-
-/** Danger first, then warnings, then notes; the deference sentence is the panel's own footer, so not repeated. */
-export function orderedCautions(cautions: readonly Caution[]): Caution[] {
-  return cautions
-    .filter((caution) => caution.text !== DEFERENCE.text)
-    .map((caution, index) => ({ caution, index }))
-    .sort((a, b) => RANK[a.caution.severity] - RANK[b.caution.severity] || a.index - b.index)
-    .map(({ caution }) => caution)
+/**
+ * The cautions a panel lists, in the server's order (danger, warning, then notes).
+ * The deference sentence is the panel's own footer, so it is not listed again.
+ */
+export function listedCautions(cautions: readonly Caution[]): Caution[] {
+  return cautions.filter((caution) => caution.text !== DEFERENCE.text)
 }
 
 export const SEVERITY_LOOKS: Record<Caution['severity'], { word: string; icon: string }> = {

@@ -1,6 +1,7 @@
 import type { LocationQuery, LocationQueryRaw } from 'vue-router'
 import { SLOT_IDS, type SlotId } from '@shared/build-template'
 import type { BuildContext, EvaluateRequest } from '@shared/schemas/build'
+import { queryNumber, queryText } from './route-query'
 
 export type PlannerSlots = Partial<Record<SlotId, string>>
 export type PlannerState = { slots: PlannerSlots; context: BuildContext }
@@ -9,18 +10,6 @@ export type PlannerState = { slots: PlannerSlots; context: BuildContext }
 const CONTEXT_KEYS = { targetPowerKw: 'power', fuelOctane: 'octane', chassisModelYear: 'year', vin: 'vin' } as const
 type NumberField = Exclude<keyof BuildContext, 'vin'>
 
-function text(value: LocationQuery[string] | undefined): string {
-  const first = Array.isArray(value) ? value[0] : value
-  return typeof first === 'string' ? first.trim() : ''
-}
-
-function number(value: LocationQuery[string] | undefined): number | undefined {
-  const raw = text(value)
-  if (!raw) return undefined
-  const parsed = Number(raw)
-  return Number.isFinite(parsed) ? parsed : undefined
-}
-
 /**
  * A build in progress lives in the address (`?block=TM-BL-1800&head=TM-HD-2000&power=110`),
  * so a technician can bookmark it or send it to a colleague.
@@ -28,15 +17,15 @@ function number(value: LocationQuery[string] | undefined): number | undefined {
 export function plannerFromQuery(query: LocationQuery): PlannerState {
   const slots: PlannerSlots = {}
   for (const slot of SLOT_IDS) {
-    const value = text(query[slot])
+    const value = queryText(query[slot])
     if (value) slots[slot] = value
   }
   const context: BuildContext = {}
   for (const field of ['targetPowerKw', 'fuelOctane', 'chassisModelYear'] as NumberField[]) {
-    const value = number(query[CONTEXT_KEYS[field]])
+    const value = queryNumber(query[CONTEXT_KEYS[field]])
     if (value !== undefined) context[field] = value
   }
-  const vin = text(query[CONTEXT_KEYS.vin])
+  const vin = queryText(query[CONTEXT_KEYS.vin])
   if (vin) context.vin = vin
   return { slots, context }
 }

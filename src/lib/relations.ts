@@ -36,9 +36,6 @@ export const FIT_LOOKS: Record<FitLook, FitLookStyle> = {
   identical: { label: 'Same part, another number', short: 'same part', icon: 'pi-equals', glyph: '≡', line: 'double', marker: 'none', colourVar: '--fw-unknown' },
 }
 
-/** Order in lists: what works first. */
-export const RELATION_ORDER: readonly FitLook[] = ['identical', 'fits', 'fits-with-modification', 'unknown', 'does-not-fit']
-
 export const REVIEW_LABELS = {
   approved: 'Reviewed link',
   proposed: 'Proposed, awaiting review',

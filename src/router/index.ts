@@ -116,7 +116,8 @@ function signInRoute(to: RouteLocationNormalized) {
 
 router.beforeEach(async (to) => {
   const session = useSessionStore()
-  await session.restore()
+  // After a failed check the sign-in page shows why; asking again on the way there would only repeat it.
+  if (!(to.meta.public && session.connectionError)) await session.restore()
   if (to.meta.public) return session.isSignedIn && to.name === 'sign-in' ? { name: 'home' } : true
   if (!session.isSignedIn) return signInRoute(to)
   if (to.meta.permission && !session.allows(to.meta.permission)) return { name: 'forbidden' }

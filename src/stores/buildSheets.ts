@@ -1,21 +1,22 @@
 import { defineStore } from 'pinia'
+import { computed } from 'vue'
 import type { BuildSheet, BuildSheetInput, BuildSheetUpdate } from '@shared/schemas/build'
 import { buildsApi } from '@/api/builds'
 import { useRemote } from '@/composables/useRemote'
 
 /** The signed-in user's saved build sheets (all of them for editors and administrators). */
 export const useBuildSheetsStore = defineStore('buildSheets', () => {
-  const list = useRemote<BuildSheet[]>([])
-  /** Until the list has come once, a saved sheet must not stand in for it as a list of one. */
-  let loaded = false
+  /** Null until the list has come once: a saved sheet must not stand in for it as a list of one. */
+  const list = useRemote<BuildSheet[]>()
+  const loaded = computed(() => list.data.value !== null)
 
   async function load() {
-    if (await list.run((signal) => buildsApi.list(signal))) loaded = true
+    await list.run((signal) => buildsApi.list(signal))
   }
 
   function replace(saved: BuildSheet) {
-    if (!loaded) return
-    const current = list.data.value ?? []
+    const current = list.data.value
+    if (current === null) return
     list.data.value = [saved, ...current.filter((sheet) => sheet.id !== saved.id)]
   }
 
@@ -35,10 +36,11 @@ export const useBuildSheetsStore = defineStore('buildSheets', () => {
 
   async function remove(id: number) {
     await buildsApi.remove(id)
-    list.data.value = (list.data.value ?? []).filter((sheet) => sheet.id !== id)
+    const current = list.data.value
+    if (current !== null) list.data.value = current.filter((sheet) => sheet.id !== id)
   }
 
   const get = (id: number) => buildsApi.get(id)
 
-  return { sheets: list.data, isLoading: list.isLoading, error: list.error, load, create, update, remove, get }
+  return { sheets: list.data, loaded, isLoading: list.isLoading, error: list.error, load, create, update, remove, get }
 })

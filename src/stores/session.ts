@@ -9,24 +9,37 @@ import { ApiError } from '@/api/http'
 export const useSessionStore = defineStore('session', () => {
   const user = ref<User | null>(null)
   const checked = ref(false)
+  /** Why the session could not be checked (no connection, a server fault); the sign-in page shows it. */
+  const connectionError = ref<ApiError | null>(null)
 
   const isSignedIn = computed(() => user.value !== null)
 
-  /** Asks the server once whether a session exists (a reload keeps the user signed in). */
+  /**
+   * Asks the server once whether a session exists (a reload keeps the user signed in).
+   * Never throws: a failed check leaves the user signed out with `connectionError` set,
+   * and the next call asks again.
+   */
   async function restore() {
     if (checked.value) return
     try {
       user.value = await authApi.me()
-    } catch (error) {
-      if (!(error instanceof ApiError && error.status === 401)) throw error
-      user.value = null
-    } finally {
+      connectionError.value = null
       checked.value = true
+    } catch (error) {
+      user.value = null
+      if (error instanceof ApiError && error.status === 401) {
+        connectionError.value = null
+        checked.value = true
+      } else {
+        connectionError.value =
+          error instanceof ApiError ? error : new ApiError(0, 'client', 'Your session could not be checked. Try again.')
+      }
     }
   }
 
   async function signIn(input: LoginInput) {
     user.value = await authApi.login(input)
+    connectionError.value = null
     checked.value = true
   }
 
@@ -44,5 +57,5 @@ export const useSessionStore = defineStore('session', () => {
     return can(user.value?.role, permission)
   }
 
-  return { user, checked, isSignedIn, restore, signIn, signOut, expire, allows }
+  return { user, checked, connectionError, isSignedIn, restore, signIn, signOut, expire, allows }
 })

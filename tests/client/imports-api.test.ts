@@ -1,5 +1,5 @@
 import { afterEach, describe, expect, it, vi } from 'vitest'
-import { ApiError } from '@/api/http'
+import { ApiError, setUnauthorizedHandler } from '@/api/http'
 import { importsApi, type UploadProgress } from '@/api/imports'
 
 /** Stands in for the browser's XMLHttpRequest, the network edge, and plays back an answer in pieces. */
@@ -79,6 +79,18 @@ describe('importsApi.upload', () => {
     const { promise, xhr } = startUpload([])
     xhr.answer(413, [JSON.stringify({ error: { code: 'file_too_large', message: 'The file is larger than 50 MB.' } })])
     await expect(promise).rejects.toMatchObject({ status: 413, code: 'file_too_large' })
+  })
+
+  it('tells the one 401 handler once and sends no other request when the session ended before the upload', async () => {
+    const onUnauthorized = vi.fn()
+    setUnauthorizedHandler(onUnauthorized)
+    const fetchSpy = vi.fn()
+    vi.stubGlobal('fetch', fetchSpy)
+    const { promise, xhr } = startUpload([])
+    xhr.answer(401, [JSON.stringify({ error: { code: 'unauthorized', message: 'Sign in first.' } })])
+    await expect(promise).rejects.toMatchObject({ status: 401, code: 'unauthorized', message: 'Sign in first.' })
+    expect(onUnauthorized).toHaveBeenCalledTimes(1)
+    expect(fetchSpy).not.toHaveBeenCalled()
   })
 
   it('rejects when the answer ends without a result line', async () => {

@@ -76,6 +76,19 @@ describe('POST /api/auth/login', () => {
   })
 })
 
+describe('sign-in throttling', () => {
+  it('answers 429 after too many failed sign-ins for one e-mail, and still lets another e-mail in', async () => {
+    const own = await createTestApp({ env: { FITWRIGHT_LOGIN_ATTEMPTS: '3' } })
+    const attempt = (email: string, password: string) => request(own.app).post('/api/auth/login').send({ email, password })
+    for (let i = 0; i < 3; i++) expect((await attempt('counter@fitwright.test', 'guess')).status).toBe(401)
+    const blocked = await attempt('counter@fitwright.test', DEMO_PASSWORD)
+    expect(blocked.status).toBe(429)
+    expect(blocked.body.error.code).toBe('too_many_attempts')
+    expect((await attempt('tech@fitwright.test', DEMO_PASSWORD)).status).toBe(200)
+    await own.close()
+  })
+})
+
 describe('sessions', () => {
   it('GET /api/auth/me answers the signed-in user and 401 after sign-out', async () => {
     const agent = await t.signIn('editor')

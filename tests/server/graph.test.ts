@@ -1,7 +1,8 @@
 import { afterAll, beforeAll, describe, expect, it } from 'vitest'
 import { MAX_NEIGHBOURHOOD_EDGES, MAX_NEIGHBOURHOOD_NODES } from '../../shared/schemas/graph'
-import { insertLink } from '../../server/services/link-writer'
-import { insertParts } from '../../server/services/part-writer'
+import { inTransaction } from '../../server/db/sqlite-connection'
+import { insertLinkRow } from '../../server/services/link-rows'
+import { insertPartRows } from '../../server/services/part-writer'
 import { expectBadRequest } from '../helpers/expect-error'
 import { createTestApp, type TestApp } from '../helpers/test-app'
 
@@ -73,14 +74,14 @@ describe('GET /api/graph/neighbourhood/:partNumber', () => {
     // A fresh app whose graph is first read after the hub is written.
     const own = await createTestApp()
     const hubNumber = 'TEST-HUB'
-    await own.dataSource.transaction(async (manager) => {
+    await inTransaction(own.dataSource, (db) => {
       const spokes = Array.from({ length: MAX_NEIGHBOURHOOD_NODES + 50 }, (_, i) => ({
         partNumber: `TEST-SPOKE-${i}`, kind: 'other' as const, name: 'Spoke', family: '', yearFrom: null, yearTo: null, notes: '', attributes: {}, marks: [],
       }))
-      const ids = await insertParts(manager, [{ ...spokes[0]!, partNumber: hubNumber }, ...spokes])
+      const ids = insertPartRows(db, [{ ...spokes[0]!, partNumber: hubNumber }, ...spokes])
       const hub = ids.get(hubNumber)!
       for (const spoke of spokes) {
-        await insertLink(manager, { partIds: [hub, ids.get(spoke.partNumber)!], relation: 'fits', modifications: [], note: '', source: 'editor', status: 'approved' })
+        insertLinkRow(db, { partIds: [hub, ids.get(spoke.partNumber)!], relation: 'fits', modifications: [], note: '', source: 'editor', status: 'approved', batchId: null })
       }
     })
     const counter = await own.signIn('counter')

@@ -15,8 +15,9 @@ import { openDatabase } from '../../server/db/data-source'
 import { ExportService } from '../../server/services/export.service'
 import { FitGraphIndex } from '../../server/services/fit-graph'
 import { ImportService } from '../../server/services/import.service'
-import { insertIdentity, insertLink } from '../../server/services/link-writer'
-import { insertParts } from '../../server/services/part-writer'
+import { inTransaction } from '../../server/db/sqlite-connection'
+import { insertIdentityRow, insertLinkRow } from '../../server/services/link-rows'
+import { insertPartRows } from '../../server/services/part-writer'
 
 /*
  * Property: any valid catalogue, written by the ordinary writers, exported and
@@ -84,14 +85,14 @@ const catalogueArb = fc
 type Catalogue = typeof catalogueArb extends fc.Arbitrary<infer T> ? T : never
 
 async function writeCatalogue(dataSource: DataSource, { parts, links }: Catalogue) {
-  await dataSource.transaction(async (manager) => {
-    const ids = await insertParts(manager, parts)
+  await inTransaction(dataSource, (db) => {
+    const ids = insertPartRows(db, parts)
     for (const link of links) {
       const partIds: [number, number] = [ids.get(parts[link.a]!.partNumber)!, ids.get(parts[link.b]!.partNumber)!]
-      if (link.relation === 'identical') await insertIdentity(manager, { partIds, note: link.note, source: link.source })
+      if (link.relation === 'identical') insertIdentityRow(db, { partIds, note: link.note, source: link.source, batchId: null })
       else {
         const modifications = link.relation === 'fits-with-modification' ? link.mods : []
-        await insertLink(manager, { partIds, relation: link.relation, modifications, note: link.note, source: link.source, status: 'approved' })
+        insertLinkRow(db, { partIds, relation: link.relation, modifications, note: link.note, source: link.source, status: 'approved', batchId: null })
       }
     }
   })

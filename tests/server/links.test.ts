@@ -88,6 +88,22 @@ describe('/api/links (editors review and edit the fitment graph)', () => {
     expect((await editor.get(`/api/links?part=TM-HD-1810`)).body.items[0].note).toBe(link.note)
   })
 
+  it('refuses modifications on a link that is not a fit with modification, even when only the modifications change', async () => {
+    const link = (await editor.get('/api/links?part=TM-HD-1810')).body.items[0]
+    expect(link.relation).toBe('fits')
+    expectBadRequest(await editor.patch(`/api/links/${link.id}`).send({ modifications: ['made-up-mod'] }), 'modifications')
+    const names = (await editor.get('/api/modifications')).body.map((m: { name: string }) => m.name)
+    expect(names).not.toContain('made-up-mod')
+  })
+
+  it('keeps one relation per pair: no identity over a link, no link over an identity', async () => {
+    const overLink = await editor.post('/api/identities').send({ partA: 'TM-HD-2000', partB: 'TM-BL-2000' })
+    expect(overLink.status).toBe(409)
+    const overIdentity = await editor.post('/api/links').send({ fromPart: 'TM-HD-2000', toPart: 'TM-HD-2000R', relation: 'fits' })
+    expect(overIdentity.status).toBe(409)
+    expect(overIdentity.body.error.message).toMatch(/identical/)
+  })
+
   it('is for editors and administrators only', async () => {
     const tech = await t.signIn('tech')
     expect((await tech.get('/api/links')).status).toBe(403)

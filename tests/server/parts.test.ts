@@ -91,6 +91,12 @@ describe('GET /api/parts/:partNumber', () => {
     expect(response.body.partNumber).toBe('TM-BL-2000')
   })
 
+  it('answers 400, not a server error, for a part number that is not valid percent-encoding', async () => {
+    const response = await agent.get('/api/parts/%E0%A4%A')
+    expect(response.status).toBe(400)
+    expect(response.body.error.message).toBeTruthy()
+  })
+
   it('answers 404 with a message for an unknown part', async () => {
     const response = await agent.get('/api/parts/NO-SUCH-PART')
     expect(response.status).toBe(404)

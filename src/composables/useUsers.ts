@@ -1,0 +1,86 @@
+import { onMounted, reactive, ref } from 'vue'
+import { useToast } from 'primevue/usetoast'
+import { ROLE_LABELS, ROLES, userCreateSchema, type Role, type User } from '@shared/schemas/auth'
+import { ApiError } from '@/api/http'
+import { usersApi } from '@/api/users'
+import { fieldMessages, issuesAsFieldErrors, placeFieldMessages } from '@/lib/field-errors'
+import { useRemote } from './useRemote'
+
+export type UserDraft = { email: string; name: string; role: Role; password: string }
+
+/** The fields the "add a user" form shows; a message for any other goes to the toast. */
+const DRAFT_FIELDS = ['email', 'name', 'role', 'password'] as const
+
+const ROLE_OPTIONS = ROLES.map((role) => ({ value: role, label: ROLE_LABELS[role] }))
+
+function messageOf(error: unknown): string {
+  return error instanceof ApiError ? error.message : 'Something went wrong. Try again.'
+}
+
+/**
+ * The users screen: the list, adding a user and changing a role. Every failure
+ * is said: a field's message beside the field, anything else in the toast.
+ */
+export function useUsers() {
+  const toast = useToast()
+  const list = useRemote<User[]>()
+  const draft = reactive<UserDraft>({ email: '', name: '', role: 'counter', password: '' })
+  const fieldErrors = ref<Record<string, string>>({})
+  const isSaving = ref(false)
+
+  const load = () => list.run((signal) => usersApi.list(signal))
+  onMounted(load)
+
+  function fail(summary: string, error: unknown) {
+    toast.add({ severity: 'error', summary, detail: messageOf(error), life: 6000 })
+  }
+
+  /** Adds the user in the draft; on success the draft is cleared (the role stays for the next one). */
+  async function create(): Promise<User | null> {
+    const parsed = userCreateSchema.safeParse(draft)
+    if (!parsed.success) {
+      fieldErrors.value = fieldMessages(issuesAsFieldErrors(parsed.error.issues))
+      return null
+    }
+    fieldErrors.value = {}
+    isSaving.value = true
+    try {
+      const user = await usersApi.create(parsed.data)
+      Object.assign(draft, { email: '', name: '', password: '' })
+      toast.add({ severity: 'success', summary: `Added ${user.name}`, life: 3000 })
+      void load()
+      return user
+    } catch (error) {
+      const { messages, unplaced } = placeFieldMessages(error instanceof ApiError ? error.details : [], DRAFT_FIELDS)
+      fieldErrors.value = messages
+      if (unplaced || Object.keys(messages).length === 0) fail('User not added', error)
+      return null
+    } finally {
+      isSaving.value = false
+    }
+  }
+
+  async function changeRole(user: User, role: Role) {
+    try {
+      await usersApi.update(user.id, { role })
+      toast.add({ severity: 'success', summary: `${user.name} is now ${ROLE_LABELS[role]}`, life: 3000 })
+    } catch (error) {
+      fail('Role not changed', error)
+    }
+    // Either way the list shows what the server holds now.
+    await load()
+  }
+
+  return {
+    users: list.data,
+    isLoading: list.isLoading,
+    error: list.error,
+    load,
+    roleOptions: ROLE_OPTIONS,
+    draft,
+    fieldErrors,
+    isSaving,
+    create,
+    changeRole,
+  }
+}
