@@ -135,9 +135,7 @@ export function checkPart(candidate: PartInput): PartRowResult {
       const column =
         first === 'attributes' && second
           ? attributeColumn(candidate.kind, second)
-          : first === 'yearFrom'
-            ? 'year_from'
-            : camelToSnake(first ?? 'row')
+          : camelToSnake(first ?? 'row')
       return { column, message: issue.message }
     }),
   }

@@ -5,7 +5,7 @@ import { checkHeadBolt, spacerFix, type HeadBoltInput, type ThreadMaterial } fro
 import { injectorHeadroom } from '../../shared/engineering/injectors'
 import { beltTeethForCentre, centreDistanceForBeltMm } from '../../shared/engineering/timing-belt'
 import { parseMetricThread } from '../../shared/schemas/part-attributes'
-import type { BuildContext, BuildFigures } from '../../shared/schemas/build'
+import type { BuildContext } from '../../shared/schemas/build'
 import type { Part } from '../../shared/schemas/part'
 
 /** What the figures read of a part. */
@@ -179,26 +179,4 @@ export function computeFigures(parts: SlotParts, context: BuildContext = {}): Fi
   figures.fuelSystemOpened = Boolean(parts['fuel-rail'] || parts.injector || parts['intake-manifold'])
   figures.electricsTouched = Boolean(parts.ecu || parts.harness)
   return figures
-}
-
-/** The API's summary of the figures, every one with its unit in its name. */
-export function summariseFigures(figures: FigureFacts, context: BuildContext): BuildFigures {
-  return {
-    displacementCc: figures.displacementCc ?? null,
-    compressionRatio: figures.compressionRatio ?? null,
-    sweptVolumeCc: figures.sweptVolumeCc ?? null,
-    clearanceVolumeCc: figures.clearanceVolumeCc ?? null,
-    injectorHeadroomPct: figures.injector?.headroomPct ?? null,
-    injectorNeededCcMin: figures.injector?.neededCcMin ?? null,
-    injectorAvailableCcMin: figures.injector?.availableCcMin ?? null,
-    headBoltProjectionMm: figures.headBolt?.projectionMm ?? null,
-    threadEngagementMinMm: figures.headBolt?.minEngagementMm ?? null,
-    headBoltMaxProjectionMm: figures.headBolt?.maxProjectionMm ?? null,
-    headBoltLengthRangeMm: figures.headBolt?.lengthRangeMm ?? null,
-    washerStackMm: figures.headBolt?.status === 'bottoms' ? (figures.headBolt.washerStackMm ?? null) : null,
-    camCrankCentreMm: figures.timing?.centreMm ?? null,
-    beltCentreShiftMm: figures.timing?.centreShiftMm ?? null,
-    beltTeethNeeded: figures.timing?.beltTeethNeeded ?? null,
-    chassisModelYear: context.chassisModelYear ?? null,
-  }
 }

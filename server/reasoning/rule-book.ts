@@ -1,5 +1,6 @@
 import { Engine, type RuleProperties } from 'json-rules-engine'
 import { pairKey } from '../../shared/build-template'
+import { pushTo } from '../services/map-list'
 import { addOperators } from './operators'
 import type { Condition, RuleEvent, RuleFile } from './rule-file.schema'
 import type { LoadedRules } from './rule-loader'
@@ -62,13 +63,11 @@ export class RuleBook {
       for (const rule of file.rules) {
         const pair = rule.pair ?? file.pair
         const key = file.scope === 'build' || !pair ? 'build' : pairKey(pair[0], pair[1])
-        grouped.set(key, [...(grouped.get(key) ?? []), { file, rule }])
+        pushTo(grouped, key, { file, rule })
       }
     }
     for (const [key, rules] of grouped) {
-      const compiled = this.compile(rules)
-      if (key === 'build') continue
-      this.pairEngines.set(key, compiled)
+      if (key !== 'build') this.pairEngines.set(key, this.compile(rules))
     }
     this.buildEngine = this.compile(grouped.get('build') ?? [])
   }
@@ -98,6 +97,18 @@ export class RuleBook {
 
   get files(): RuleFile[] {
     return this.loaded.files
+  }
+
+  /** The loaded rule files as the API lists them. */
+  summaries() {
+    return this.loaded.files.map((file) => ({
+      id: file.id,
+      title: file.title,
+      description: file.description,
+      source: file.source,
+      scope: file.scope,
+      rules: file.rules.map((rule) => ({ name: rule.name, pair: rule.pair ?? file.pair ?? null, event: rule.event.type })),
+    }))
   }
 
   hasPairRules(kindA: string, kindB: string): boolean {

@@ -8,7 +8,7 @@ import type { FitmentService } from '../services/fitment.service'
 import type { GraphService } from '../services/graph.service'
 import type { ModificationService } from '../services/modification.service'
 import type { RuleBook } from '../reasoning/rule-book'
-import { partNumberParamsSchema } from './parts.routes'
+import { partNumberParamsSchema } from '../../shared/schemas/part'
 
 export function fitmentRoutes(services: {
   fitment: FitmentService
@@ -35,16 +35,7 @@ export function fitmentRoutes(services: {
     res.json(await services.modifications.list())
   })
   router.get('/rules', readers, (_req, res) => {
-    res.json(
-      services.rules.files.map((file) => ({
-        id: file.id,
-        title: file.title,
-        description: file.description,
-        source: file.source,
-        scope: file.scope,
-        rules: file.rules.map((rule) => ({ name: rule.name, pair: rule.pair ?? file.pair ?? null, event: rule.event.type })),
-      })),
-    )
+    res.json(services.rules.summaries())
   })
   return router
 }

@@ -1,18 +1,17 @@
 import { Router } from 'express'
-import { z } from 'zod'
-import { partListQuerySchema } from '../../shared/schemas/part'
-import { requireSignIn } from '../auth/require-role'
+import { partListQuerySchema, partNumberParamsSchema } from '../../shared/schemas/part'
+import { rolesFor } from '../../shared/permissions'
+import { requireRole } from '../auth/require-role'
 import { parseParams, parseQuery } from '../middleware/validate'
 import type { PartService } from '../services/part.service'
 
-export const partNumberParamsSchema = z.object({ partNumber: z.string().trim().min(1).max(100) })
-
 export function partRoutes(parts: PartService): Router {
   const router = Router()
-  router.get('/parts', requireSignIn, async (req, res) => {
+  const readers = requireRole(...rolesFor('catalogue.read'))
+  router.get('/parts', readers, async (req, res) => {
     res.json(await parts.list(parseQuery(partListQuerySchema, req)))
   })
-  router.get('/parts/:partNumber', requireSignIn, async (req, res) => {
+  router.get('/parts/:partNumber', readers, async (req, res) => {
     res.json(await parts.get(parseParams(partNumberParamsSchema, req).partNumber))
   })
   return router

@@ -12,7 +12,39 @@ import type { PartService } from './part.service'
 
 type Row = { id: number; partNumber: string; attributes: string; yearTo: number | null }
 
-/** Harder work weighs more, so the easiest way to a working build comes first. */
+/**
+ * Reads one request can share across many completions (fill the gaps asks
+ * dozens): the catalogue rows of a kind and the skill of a modification.
+ */
+export class CompletionReads {
+  private readonly rows = new Map<SlotId, Promise<Row[]>>()
+  private readonly skills = new Map<string, Promise<number>>()
+
+  constructor(
+    private readonly dataSource: DataSource,
+    private readonly modifications: ModificationService,
+  ) {}
+
+  rowsOf(kind: SlotId): Promise<Row[]> {
+    let rows = this.rows.get(kind)
+    if (!rows) {
+      rows = this.dataSource.query('SELECT id, partNumber, attributes, yearTo FROM part WHERE kind = ? ORDER BY partNumber', [kind]) as Promise<Row[]>
+      this.rows.set(kind, rows)
+    }
+    return rows
+  }
+
+  /** Harder work weighs more, so the easiest way to a working build comes first. */
+  skillWeight(name: string): Promise<number> {
+    let weight = this.skills.get(name)
+    if (!weight) {
+      weight = this.modifications.byNames([name]).then((found) => SKILL_WEIGHT[found.get(name)!.skillLevel] ?? 2)
+      this.skills.set(name, weight)
+    }
+    return weight
+  }
+}
+
 const SKILL_WEIGHT = Object.fromEntries(SKILL_LEVELS.map((level, index) => [level, index + 1])) as Record<string, number>
 
 export class BuildCompletionService {
@@ -34,11 +66,21 @@ export class BuildCompletionService {
       throw AppError.badRequest(`Unknown slot ${unknown.join(', ')}.`, unknown.map((slot) => ({ path: 'only', message: `Unknown slot "${slot}".` })))
     }
     const build = await this.evaluation.resolve(request)
-    return this.completeBuild(build, await this.graphIndex.snapshot(), limit, only?.filter(isSlotId))
+    return this.completeBuild(build, await this.graphIndex.snapshot(), limit, { only: only?.filter(isSlotId) })
+  }
+
+  /** A fresh set of shared reads, for one request. */
+  reads(): CompletionReads {
+    return new CompletionReads(this.dataSource, this.modifications)
   }
 
   /** Candidates for the empty slots of a resolved build (only those in `only`, when given). */
-  async completeBuild(build: ResolvedBuild, graph: FitGraph, limit: number, only?: SlotId[]): Promise<Completion> {
+  async completeBuild(
+    build: ResolvedBuild,
+    graph: FitGraph,
+    limit: number,
+    { only, reads = this.reads() }: { only?: SlotId[]; reads?: CompletionReads } = {},
+  ): Promise<Completion> {
     const result: Completion = { slots: {} }
     for (const slot of BUILD_SLOTS) {
       if (build.parts[slot.id] || (only && !only.includes(slot.id))) continue
@@ -51,12 +93,11 @@ export class BuildCompletionService {
         }
         continue
       }
-      const candidates = await this.candidatesFor(slot.id, build, graph)
-      candidates.sort((a, b) => a.score - b.score || a.part.partNumber.localeCompare(b.part.partNumber))
+      const { candidates, total } = await this.candidatesFor(slot.id, build, graph, reads, limit)
       result.slots[slot.id] = {
         matesWith,
-        candidates: candidates.slice(0, limit),
-        note: candidates.length === 0 ? `No catalogue part fits every chosen part it mates with (${matesWith.join(', ')}).` : undefined,
+        candidates,
+        note: total === 0 ? `No catalogue part fits every chosen part it mates with (${matesWith.join(', ')}).` : undefined,
       }
     }
     return result
@@ -80,10 +121,9 @@ export class BuildCompletionService {
     }
   }
 
-  private async candidatesFor(slot: SlotId, build: ResolvedBuild, graph: FitGraph) {
-    const rows = (await this.dataSource.query('SELECT id, partNumber, attributes, yearTo FROM part WHERE kind = ? ORDER BY partNumber', [
-      slot,
-    ])) as Row[]
+  /** The best `limit` candidates for a slot, fewest and easiest modifications first, and how many fit in all. */
+  private async candidatesFor(slot: SlotId, build: ResolvedBuild, graph: FitGraph, reads: CompletionReads, limit: number) {
+    const rows = await reads.rowsOf(slot)
     type Judgement = { relation: Relation; modifications: string[]; reasons: string[]; byRule: boolean } | null
     const accepted: ({ row: Row } & NonNullable<Judgement>)[] = []
     const neighbourIds = matingSlots(slot).flatMap((other) => (build.ids[other] === undefined ? [] : [build.ids[other]!]))
@@ -99,15 +139,23 @@ export class BuildCompletionService {
       }
       if (judgement) accepted.push({ row, ...judgement })
     }
-    const catalogue = await this.modifications.byNames(accepted.flatMap((a) => a.modifications))
-    const full = new Map((await this.parts.byIds(accepted.map((a) => a.row.id))).map((part) => [part.partNumber, part]))
-    return accepted.map((a): Candidate => ({
+    const scored = await Promise.all(
+      accepted.map(async (a) => {
+        let score = a.byRule ? 0.1 : 0 // reviewed evidence before inference among otherwise equal candidates
+        for (const name of a.modifications) score += 1 + (await reads.skillWeight(name))
+        return { ...a, score }
+      }),
+    )
+    scored.sort((a, b) => a.score - b.score || a.row.partNumber.localeCompare(b.row.partNumber))
+    const best = scored.slice(0, limit)
+    const full = new Map((await this.parts.byIds(best.map((a) => a.row.id))).map((part) => [part.partNumber, part]))
+    const candidates = best.map((a): Candidate => ({
       part: full.get(a.row.partNumber)!,
       relation: a.relation,
       modifications: a.modifications,
-      // Reviewed evidence before inference among otherwise equal candidates.
-      score: a.modifications.reduce((sum, name) => sum + 1 + (SKILL_WEIGHT[catalogue.get(name)!.skillLevel] ?? 2), 0) + (a.byRule ? 0.1 : 0),
+      score: a.score,
       reasons: a.reasons,
     }))
+    return { candidates, total: scored.length }
   }
 }

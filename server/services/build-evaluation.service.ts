@@ -7,12 +7,14 @@ import { worstVerdict } from '../../shared/schemas/fitment'
 import type { Part } from '../../shared/schemas/part'
 import type { PartAttributes } from '../../shared/schemas/part-attributes'
 import { buildFacts } from '../reasoning/facts'
-import { computeFigures, cylinders, summariseFigures } from '../reasoning/figures'
+import { computeFigures, cylinders } from '../reasoning/figures'
+import { summariseFigures } from '../reasoning/figures-summary'
 import { judgePair, summariseOutcomes, type JudgedPair } from '../reasoning/pair-judge'
 import { buildPartsList } from '../reasoning/parts-list'
 import type { Facts, RuleBook } from '../reasoning/rule-book'
 import type { RuleExtraPart } from '../reasoning/rule-file.schema'
 import { resolveSlots } from './build-slots'
+import { toPart } from './part.mapper'
 import type { FitGraph, FitGraphIndex } from './fit-graph'
 import type { ModificationService } from './modification.service'
 import type { PartService } from './part.service'
@@ -47,12 +49,10 @@ export class BuildEvaluationService {
 
   async resolve(request: EvaluateRequest): Promise<ResolvedBuild> {
     const entities = await resolveSlots(this.parts, request.slots)
-    const partList = await this.parts.byIds([...entities.values()].map((entity) => entity.id))
-    const byNumber = new Map(partList.map((part) => [part.partNumber, part]))
     const parts: ResolvedBuild['parts'] = {}
     const ids: ResolvedBuild['ids'] = {}
     for (const [slot, entity] of entities) {
-      parts[slot] = byNumber.get(entity.partNumber)!
+      parts[slot] = toPart(entity)
       ids[slot] = entity.id
     }
     const { slots: _slots, ...rawContext } = request

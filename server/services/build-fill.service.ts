@@ -24,9 +24,10 @@ export class BuildFillService {
   async fill(request: EvaluateRequest): Promise<FillResult> {
     const graph = await this.graphIndex.snapshot()
     let build: ResolvedBuild = await this.evaluation.resolve(request)
+    const reads = this.completion.reads()
     const filled: GapPick[] = []
     const stuck = new Set<SlotId>()
-    let completion = await this.completion.completeBuild(build, graph, TRIES_PER_SLOT)
+    let completion = await this.completion.completeBuild(build, graph, TRIES_PER_SLOT, { reads })
     for (let slot = nextSlotToFill(completion); slot; slot = nextSlotToFill(completion, stuck)) {
       let accepted = false
       for (const candidate of completion.slots[slot]?.candidates ?? []) {
@@ -36,7 +37,7 @@ export class BuildFillService {
           ids: { ...build.ids, [slot]: graph.byNumber.get(candidate.part.partNumber)! },
         }
         // Only the slot's mates can become dead ends by this choice.
-        const mates = await this.completion.completeBuild(trial, graph, TRIES_PER_SLOT, matingSlots(slot))
+        const mates = await this.completion.completeBuild(trial, graph, TRIES_PER_SLOT, { only: matingSlots(slot), reads })
         if (createsDeadEnd(slot, completion, mates)) continue
         build = trial
         filled.push({ slot, partNumber: candidate.part.partNumber })
@@ -44,7 +45,7 @@ export class BuildFillService {
         break
       }
       if (!accepted) stuck.add(slot)
-      completion = await this.completion.completeBuild(build, graph, TRIES_PER_SLOT)
+      completion = await this.completion.completeBuild(build, graph, TRIES_PER_SLOT, { reads })
     }
     return {
       slots: Object.fromEntries(Object.entries(build.parts).map(([slot, part]) => [slot, part!.partNumber])),

@@ -8,6 +8,7 @@ import { toCsv } from '../../shared/csv-cells'
 import { MARK_COLUMNS, PART_COLUMNS, camelToSnake, partCells } from '../csv/part-row'
 import { sqliteConnection } from '../db/sqlite-connection'
 import { LINK_COLUMNS } from './import-link-rows'
+import { pushTo } from './map-list'
 
 type PartRow = Omit<PartInput, 'attributes' | 'marks'> & { id: number; attributes: string }
 
@@ -31,7 +32,7 @@ export class ExportService {
     const rows = db.prepare('SELECT id, partNumber, kind, name, family, yearFrom, yearTo, notes, attributes FROM part ORDER BY partNumber').all() as PartRow[]
     const marks = new Map<number, { type: MarkType; value: string }[]>()
     const markRows = db.prepare('SELECT partId, type, value FROM part_mark ORDER BY value').all() as { partId: number; type: MarkType; value: string }[]
-    for (const { partId, type, value } of markRows) marks.set(partId, [...(marks.get(partId) ?? []), { type, value }])
+    for (const { partId, type, value } of markRows) pushTo(marks, partId, { type, value })
     const cells = rows.map((row) => {
       const partMarks = (marks.get(row.id) ?? []).sort((a, b) => MARK_TYPES.indexOf(a.type) - MARK_TYPES.indexOf(b.type))
       const part: PartInput = { ...row, kind: row.kind as PartKind, attributes: JSON.parse(row.attributes) as PartInput['attributes'], marks: partMarks }
@@ -57,7 +58,7 @@ export class ExportService {
     const modRows = db
       .prepare('SELECT lm.linkId, m.name FROM link_modification lm JOIN modification m ON m.id = lm.modificationId ORDER BY m.name')
       .all() as { linkId: number; name: string }[]
-    for (const { linkId, name } of modRows) mods.set(linkId, [...(mods.get(linkId) ?? []), name])
+    for (const { linkId, name } of modRows) pushTo(mods, linkId, name)
     const identities = db
       .prepare(
         `SELECT a.partNumber AS fromPart, b.partNumber AS toPart, i.note, i.source FROM part_identity i

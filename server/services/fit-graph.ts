@@ -1,6 +1,7 @@
 import type { DataSource } from 'typeorm'
 import type { LinkSource, Relation, ReviewStatus } from '../../shared/schemas/fitment'
 import type { PartKind } from '../../shared/schemas/part-kinds'
+import { pushTo } from './map-list'
 
 export type GraphPart = { id: number; partNumber: string; kind: PartKind; name: string; family: string }
 export type GraphLink = {
@@ -33,20 +34,14 @@ export class FitGraph {
       this.byNumber.set(part.partNumber, part.id)
     }
     for (const link of links) {
-      this.push(this.linksByPart, link.a, link)
-      this.push(this.linksByPart, link.b, link)
+      pushTo(this.linksByPart, link.a, link)
+      pushTo(this.linksByPart, link.b, link)
     }
     for (const identity of identities) {
-      this.push(this.identitiesByPart, identity.a, identity)
-      this.push(this.identitiesByPart, identity.b, identity)
+      pushTo(this.identitiesByPart, identity.a, identity)
+      pushTo(this.identitiesByPart, identity.b, identity)
     }
     this.buildClasses(identities)
-  }
-
-  private push<T>(map: Map<number, T[]>, key: number, value: T) {
-    const list = map.get(key)
-    if (list) list.push(value)
-    else map.set(key, [value])
   }
 
   /** Identity is transitive: union-find over the identity pairs. */
@@ -71,7 +66,7 @@ export class FitGraph {
       if (ra !== rb) parent.set(Math.max(ra, rb), Math.min(ra, rb))
     }
     const members = new Map<number, number[]>()
-    for (const id of parent.keys()) this.push(members, find(id), id)
+    for (const id of parent.keys()) pushTo(members, find(id), id)
     for (const list of members.values()) {
       list.sort((x, y) => x - y)
       for (const id of list) this.classes.set(id, list)
@@ -186,7 +181,7 @@ export class FitGraphIndex {
       >,
     ])
     const modsByLink = new Map<number, string[]>()
-    for (const { linkId, name } of mods) modsByLink.set(linkId, [...(modsByLink.get(linkId) ?? []), name])
+    for (const { linkId, name } of mods) pushTo(modsByLink, linkId, name)
     return new FitGraph(
       parts,
       links.map((link) => ({ ...link, modifications: modsByLink.get(link.id) ?? [] })),

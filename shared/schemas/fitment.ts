@@ -83,6 +83,9 @@ export const fitResultSchema = z.object({
 })
 export type FitResult = z.infer<typeof fitResultSchema>
 
+/** Inferred answers per kind and relation unless asked otherwise. */
+export const INFERRED_LIMIT_DEFAULT = 50
+
 export const fitsQuerySchema = z.object({
   relation: relationSchema.optional(),
   kind: partKindSchema.optional(),
@@ -91,10 +94,9 @@ export const fitsQuerySchema = z.object({
     .optional()
     .transform((value) => value !== '0' && value !== 'false'),
   /** Most inferred results per kind and relation; the answer says how many more there are. */
-  inferredLimit: z.coerce.number().int().min(1).max(500).default(50),
+  inferredLimit: z.coerce.number().int().min(1).max(500).default(INFERRED_LIMIT_DEFAULT),
 })
 
-export const INFERRED_LIMIT_DEFAULT = 50
 
 export const fitsResponseSchema = z.object({
   part: partSchema,

@@ -23,6 +23,8 @@ export const partSchema = z.object({
 })
 export type Part = z.infer<typeof partSchema>
 
+export const partNumberParamsSchema = z.object({ partNumber: z.string().trim().min(1, 'Give a part number.').max(100) })
+
 export const partListQuerySchema = z.object({
   q: z.string().trim().max(100).optional().default(''),
   kind: partKindSchema.optional(),
