@@ -77,7 +77,8 @@ describe('first load without a connection', () => {
     await alert.get('button').trigger('click')
     await flushPromises()
     expect(fetchMock).toHaveBeenCalledTimes(2)
-    expect(router.currentRoute.value.name).toBe('parts')
+    // The page's code is loaded on first visit, so the navigation may take a moment.
+    await vi.waitFor(() => expect(router.currentRoute.value.name).toBe('parts'), { timeout: 10_000 })
     wrapper.unmount()
   })
 

@@ -1,0 +1,115 @@
+import { flushPromises, mount } from '@vue/test-utils'
+import PrimeVue from 'primevue/config'
+import Toast from 'primevue/toast'
+import ToastService from 'primevue/toastservice'
+import { afterEach, describe, expect, it, vi } from 'vitest'
+import { defineComponent, h } from 'vue'
+import UsersView from '@/views/UsersView.vue'
+
+const admin = { id: 1, email: 'admin@fitwright.test', name: 'Admin Person', role: 'admin' }
+
+type Call = { method: string; path: string; body: unknown }
+
+/** The network edge: answers GET /api/users with the list and POST with `onCreate`; keeps what was sent. */
+function stubServer(onCreate: () => Response) {
+  const calls: Call[] = []
+  vi.stubGlobal('fetch', async (url: string, init: RequestInit) => {
+    const method = init.method ?? 'GET'
+    const path = new URL(url, 'http://fitwright.test').pathname
+    calls.push({ method, path, body: typeof init.body === 'string' ? JSON.parse(init.body) : null })
+    if (method === 'POST') return onCreate()
+    return new Response(JSON.stringify([admin]), { status: 200, headers: { 'Content-Type': 'application/json' } })
+  })
+  return calls
+}
+
+function errorAnswer(status: number, code: string, message: string, details?: { path: string; message: string }[]) {
+  return new Response(JSON.stringify({ error: { code, message, details } }), { status, headers: { 'Content-Type': 'application/json' } })
+}
+
+/** The view as the layout shows it: with the app's one Toast beside it. */
+async function mountView() {
+  const Host = defineComponent({ render: () => [h(Toast), h(UsersView)] })
+  const wrapper = mount(Host, { global: { plugins: [PrimeVue, ToastService], stubs: { DataTable: true, Column: true } }, attachTo: document.body })
+  await flushPromises()
+  return wrapper
+}
+
+async function addUser(wrapper: Awaited<ReturnType<typeof mountView>>) {
+  await wrapper.get('#new-user-email').setValue('new.tech@fitwright.test')
+  await wrapper.get('#new-user-name').setValue('New Tech')
+  await wrapper.get('#new-user-password').setValue('a-long-enough-passphrase-9')
+  await wrapper.get('form[aria-label="Add a user"]').trigger('submit')
+  await flushPromises()
+}
+
+afterEach(() => {
+  vi.unstubAllGlobals()
+  document.body.innerHTML = ''
+})
+
+describe('UsersView, adding a user', () => {
+  it('says in the toast that the user was not added when the server cannot be reached, and keeps the form filled', async () => {
+    const calls = stubServer(() => {
+      throw new TypeError('Failed to fetch')
+    })
+    const wrapper = await mountView()
+
+    await addUser(wrapper)
+
+    expect(calls.filter((call) => call.method === 'POST')).toHaveLength(1)
+    expect(document.body.textContent).toContain('User not added')
+    expect(document.body.textContent).toContain('Cannot reach the Fitwright server')
+    expect((wrapper.get('#new-user-email').element as HTMLInputElement).value).toBe('new.tech@fitwright.test')
+    wrapper.unmount()
+  })
+
+  it('says a server fault in the toast', async () => {
+    stubServer(() => errorAnswer(500, 'internal', 'Something went wrong on the server.'))
+    const wrapper = await mountView()
+
+    await addUser(wrapper)
+
+    expect(document.body.textContent).toContain('Something went wrong on the server.')
+    wrapper.unmount()
+  })
+
+  it('puts the server\'s field message next to its field and nothing in the toast', async () => {
+    stubServer(() => errorAnswer(409, 'conflict', 'A user with e-mail new.tech@fitwright.test exists already.', [{ path: 'email', message: 'This e-mail is taken.' }]))
+    const wrapper = await mountView()
+
+    await addUser(wrapper)
+
+    expect(wrapper.get('#new-user-email-error').text()).toBe('This e-mail is taken.')
+    expect(document.body.textContent).not.toContain('User not added')
+    wrapper.unmount()
+  })
+
+  it('shows field messages and sends nothing when the form is incomplete', async () => {
+    const calls = stubServer(() => errorAnswer(500, 'internal', 'not expected'))
+    const wrapper = await mountView()
+
+    await wrapper.get('form[aria-label="Add a user"]').trigger('submit')
+    await flushPromises()
+
+    expect(wrapper.get('#new-user-email-error').text()).toBe('Enter a valid e-mail address.')
+    expect(wrapper.get('#new-user-name-error').text()).toBe('Name is required.')
+    expect(calls.filter((call) => call.method === 'POST')).toHaveLength(0)
+    wrapper.unmount()
+  })
+
+  it('adds the user, says so, clears the form and loads the list again', async () => {
+    const created = { id: 9, email: 'new.tech@fitwright.test', name: 'New Tech', role: 'counter' }
+    const calls = stubServer(() => new Response(JSON.stringify(created), { status: 201, headers: { 'Content-Type': 'application/json' } }))
+    const wrapper = await mountView()
+
+    await addUser(wrapper)
+
+    const post = calls.find((call) => call.method === 'POST')
+    expect(post?.body).toEqual({ email: 'new.tech@fitwright.test', name: 'New Tech', role: 'counter', password: 'a-long-enough-passphrase-9' })
+    expect(document.body.textContent).toContain('Added New Tech')
+    expect((wrapper.get('#new-user-email').element as HTMLInputElement).value).toBe('')
+    expect(calls.filter((call) => call.method === 'GET')).toHaveLength(2)
+    wrapper.unmount()
+  })
+})
