@@ -1,27 +1,20 @@
-import type { Browser, Page } from 'playwright-core'
+import type { Page } from 'playwright-core'
 import { afterAll, beforeAll, describe, expect, it } from 'vitest'
-import { browserAvailable, launchBrowser, saveScreenshot, signInAs, startServer, type RunningServer } from '../helpers/browser'
+import { browserAvailable, saveScreenshot, signInAs, type RunningServer, openBrowserSession, type BrowserSession } from '../helpers/browser'
 
 const run = browserAvailable()
 
 describe.skipIf(!run)('catalogue in the browser', () => {
+  let session: BrowserSession
   let server: RunningServer
-  let browser: Browser
   let page: Page
-  const consoleErrors: string[] = []
+  let consoleErrors: string[] = []
 
   beforeAll(async () => {
-    server = await startServer()
-    browser = await launchBrowser()
-    page = await browser.newPage({ viewport: { width: 1280, height: 860 } })
-    page.on('console', (message) => {
-      if (message.type() === 'error') consoleErrors.push(message.text())
-    })
+    session = await openBrowserSession({ viewport: { width: 1280, height: 860 } })
+    ;({ server, page, consoleErrors } = session)
   })
-  afterAll(async () => {
-    await browser?.close()
-    await server?.stop()
-  })
+  afterAll(() => session?.close())
 
   it('sends a visitor without a session to sign-in', async () => {
     await page.goto(`${server.url}/parts`)

@@ -1,6 +1,6 @@
-import type { Browser, Page } from 'playwright-core'
+import type { Page } from 'playwright-core'
 import { afterAll, beforeAll, describe, expect, it } from 'vitest'
-import { browserAvailable, launchBrowser, saveScreenshot, signInAs, startServer, type RunningServer } from '../helpers/browser'
+import { browserAvailable, saveScreenshot, signInAs, type RunningServer, openBrowserSession, type BrowserSession } from '../helpers/browser'
 
 const run = browserAvailable()
 
@@ -12,24 +12,17 @@ const PARTS_CSV = [
 ].join('\n')
 
 describe.skipIf(!run)('imports in the browser', () => {
+  let session: BrowserSession
   let server: RunningServer
-  let browser: Browser
   let page: Page
-  const consoleErrors: string[] = []
+  let consoleErrors: string[] = []
 
   beforeAll(async () => {
-    server = await startServer()
-    browser = await launchBrowser()
-    page = await browser.newPage({ viewport: { width: 1280, height: 900 } })
-    page.on('console', (message) => {
-      if (message.type() === 'error') consoleErrors.push(message.text())
-    })
+    session = await openBrowserSession()
+    ;({ server, page, consoleErrors } = session)
     await signInAs(page, server.url, 'editor')
   })
-  afterAll(async () => {
-    await browser?.close()
-    await server?.stop()
-  })
+  afterAll(() => session?.close())
 
   it('lets an editor preview a parts file and see counts, row errors and changes', async () => {
     await page.getByRole('navigation', { name: 'Main' }).getByRole('link', { name: 'Imports' }).click()

@@ -1,6 +1,6 @@
-import type { Browser, BrowserContext, Page } from 'playwright-core'
+import type { BrowserContext, Page } from 'playwright-core'
 import { afterAll, beforeAll, describe, expect, it } from 'vitest'
-import { browserAvailable, launchBrowser, saveScreenshot, signInAs, startServer, type RunningServer } from '../helpers/browser'
+import { browserAvailable, saveScreenshot, signInAs, type RunningServer, openBrowserSession, type BrowserSession } from '../helpers/browser'
 import { nodePosition, waitForGraph } from '../helpers/graph-page'
 
 const run = browserAvailable()
@@ -8,26 +8,17 @@ const run = browserAvailable()
 const within = { timeout: 10_000 }
 
 describe.skipIf(!run)('counter: what fits a head, and the fit graph', () => {
+  let session: BrowserSession
   let server: RunningServer
-  let browser: Browser
-  let context: BrowserContext
   let page: Page
-  const consoleErrors: string[] = []
+  let context: BrowserContext
+  let consoleErrors: string[] = []
 
   beforeAll(async () => {
-    server = await startServer()
-    browser = await launchBrowser()
-    context = await browser.newContext({ viewport: { width: 1280, height: 860 } })
-    page = await context.newPage()
-    page.on('console', (message) => {
-      if (message.type() === 'error') consoleErrors.push(message.text())
-    })
-    page.on('pageerror', (error) => consoleErrors.push(error.message))
+    session = await openBrowserSession({ viewport: { width: 1280, height: 860 } })
+    ;({ server, page, context, consoleErrors } = session)
   })
-  afterAll(async () => {
-    await browser?.close()
-    await server?.stop()
-  })
+  afterAll(() => session?.close())
 
   it('lands a counter on the lookup after sign-in', async () => {
     await signInAs(page, server.url, 'counter')

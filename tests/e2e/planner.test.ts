@@ -1,7 +1,7 @@
 import { readFileSync } from 'node:fs'
-import type { Browser, BrowserContext, Page } from 'playwright-core'
+import type { BrowserContext, Page } from 'playwright-core'
 import { afterAll, beforeAll, describe, expect, it } from 'vitest'
-import { browserAvailable, launchBrowser, saveScreenshot, SCREENSHOT_DIR, signInAs, startServer, type RunningServer } from '../helpers/browser'
+import { browserAvailable, saveScreenshot, SCREENSHOT_DIR, signInAs, type RunningServer, openBrowserSession, type BrowserSession } from '../helpers/browser'
 
 const run = browserAvailable()
 /** A fresh page loads the client, restores the session and asks the API: give it time. */
@@ -22,27 +22,18 @@ function verdictText(page: Page) {
 }
 
 describe.skipIf(!run)('technician: plan a build, get the verdict and the parts list, save and reopen it', () => {
+  let session: BrowserSession
   let server: RunningServer
-  let browser: Browser
-  let context: BrowserContext
   let page: Page
+  let context: BrowserContext
   let sheetUrl = ''
-  const consoleErrors: string[] = []
+  let consoleErrors: string[] = []
 
   beforeAll(async () => {
-    server = await startServer()
-    browser = await launchBrowser()
-    context = await browser.newContext({ viewport: { width: 1280, height: 900 }, acceptDownloads: true })
-    page = await context.newPage()
-    page.on('console', (message) => {
-      if (message.type() === 'error') consoleErrors.push(message.text())
-    })
-    page.on('pageerror', (error) => consoleErrors.push(error.message))
+    session = await openBrowserSession({ acceptDownloads: true })
+    ;({ server, page, context, consoleErrors } = session)
   })
-  afterAll(async () => {
-    await browser?.close()
-    await server?.stop()
-  })
+  afterAll(() => session?.close())
 
   it('opens an empty planner from the navigation', async () => {
     await signInAs(page, server.url, 'tech')

@@ -1,24 +1,20 @@
-import type { Browser, Page } from 'playwright-core'
+import type { Page } from 'playwright-core'
 import { afterAll, beforeAll, describe, expect, it } from 'vitest'
-import { browserAvailable, launchBrowser, saveScreenshot, signInAs, startServer, type RunningServer } from '../helpers/browser'
+import { browserAvailable, saveScreenshot, signInAs, type RunningServer, openBrowserSession, type BrowserSession } from '../helpers/browser'
 
 const run = browserAvailable()
 
 describe.skipIf(!run)('reviewing proposed links in the browser', () => {
+  let session: BrowserSession
   let server: RunningServer
-  let browser: Browser
   let page: Page
 
   beforeAll(async () => {
-    server = await startServer()
-    browser = await launchBrowser()
-    page = await browser.newPage({ viewport: { width: 1280, height: 900 } })
+    session = await openBrowserSession()
+    ;({ server, page } = session)
     await signInAs(page, server.url, 'editor')
   })
-  afterAll(async () => {
-    await browser?.close()
-    await server?.stop()
-  })
+  afterAll(() => session?.close())
 
   it('lets an editor approve a field report, which then counts as a reviewed fit on the part page', async () => {
     await page.getByRole('navigation', { name: 'Main' }).getByRole('link', { name: 'Review' }).click()

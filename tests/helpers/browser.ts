@@ -2,7 +2,7 @@ import { spawn, type ChildProcess } from 'node:child_process'
 import { existsSync, mkdirSync, mkdtempSync, rmSync } from 'node:fs'
 import { tmpdir } from 'node:os'
 import path from 'node:path'
-import { chromium, type Browser, type Page } from 'playwright-core'
+import { chromium, type Browser, type BrowserContext, type BrowserContextOptions, type Page } from 'playwright-core'
 
 const ROOT = path.resolve(import.meta.dirname, '../..')
 export const SCREENSHOT_DIR = path.join(ROOT, 'tests', 'output')
@@ -86,4 +86,38 @@ export async function signInAs(page: Page, baseUrl: string, role: 'admin' | 'edi
   await page.getByLabel('Password').fill('fitwright-demo')
   await page.getByRole('button', { name: 'Sign in' }).click()
   await page.waitForURL((url) => !url.pathname.startsWith('/sign-in'))
+}
+
+export type BrowserSession = {
+  server: RunningServer
+  browser: Browser
+  context: BrowserContext
+  page: Page
+  /** Console errors and uncaught page errors seen so far. */
+  consoleErrors: string[]
+  close: () => Promise<void>
+}
+
+/** A production server on a fresh demo database and one browser page, for one test file. */
+export async function openBrowserSession(options: BrowserContextOptions = {}): Promise<BrowserSession> {
+  const server = await startServer()
+  const browser = await launchBrowser()
+  const context = await browser.newContext({ viewport: { width: 1280, height: 900 }, ...options })
+  const page = await context.newPage()
+  const consoleErrors: string[] = []
+  page.on('console', (message) => {
+    if (message.type() === 'error') consoleErrors.push(message.text())
+  })
+  page.on('pageerror', (error) => consoleErrors.push(error.message))
+  return {
+    server,
+    browser,
+    context,
+    page,
+    consoleErrors,
+    async close() {
+      await browser.close()
+      await server.stop()
+    },
+  }
 }
