@@ -5,8 +5,8 @@ import Papa from 'papaparse'
 import { prepareDatabase } from '../server/bootstrap'
 import { loadConfig } from '../server/config/env'
 import { sqliteConnection } from '../server/db/sqlite-connection'
-import { FitGraphIndex } from '../server/services/fit-graph'
-import { ImportService, type ImportRun } from '../server/services/import.service'
+import { FitGraphIndex } from '../server/fitment/fit-graph'
+import { ImportService, type ImportRun } from '../server/imports/import.service'
 import type { Benchmark } from './types'
 
 const LINK_ROWS = 100_000

@@ -7,29 +7,27 @@ import { requireSignIn } from './auth/require-role'
 import { createSessionMiddleware } from './auth/session'
 import type { AppConfig } from './config/env'
 import { errorHandler, notFoundApi } from './errors/error-handler'
-import { authRoutes } from './routes/auth.routes'
-import { healthRoutes } from './routes/health.routes'
-import { partRoutes } from './routes/parts.routes'
-import { userRoutes } from './routes/users.routes'
-import { buildRoutes } from './routes/builds.routes'
-import { fitmentRoutes } from './routes/fitment.routes'
-import { linkRoutes } from './routes/links.routes'
-import { importRoutes } from './routes/imports.routes'
-import type { RuleBook } from './reasoning/rule-book'
-import { createServices } from './services'
+import { authRoutes } from './auth/auth.routes'
+import { healthRoutes } from './health/health.routes'
+import { partRoutes } from './catalogue/parts.routes'
+import { userRoutes } from './users/users.routes'
+import { buildRoutes } from './builds/builds.routes'
+import { fitmentRoutes } from './fitment/fitment.routes'
+import { linkRoutes } from './fitment/links.routes'
+import { importRoutes } from './imports/imports.routes'
+import type { Services } from './services'
 
 export type AppOptions = {
   config: AppConfig
   dataSource: DataSource
+  services: Services
   version: string
-  rules: RuleBook
   /** Folder of the built client; served with a history fallback when it exists. */
   clientDir?: string
 }
 
 /** Builds the Express app without listening, so tests can drive it with supertest. */
-export async function createApp({ config, dataSource, version, rules, clientDir }: AppOptions): Promise<Express> {
-  const services = createServices(dataSource, config, rules)
+export async function createApp({ config, dataSource, services, version, clientDir }: AppOptions): Promise<Express> {
   const auth = createPassport(services.users)
   const app = express()
   app.disable('x-powered-by')

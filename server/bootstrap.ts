@@ -5,8 +5,8 @@ import type { DataSource } from 'typeorm'
 import type { AppConfig } from './config/env'
 import { openDatabase } from './db/data-source'
 import { DEMO_PASSWORD, DEMO_USERS, seedDemo } from './demo/seed'
-import { UserService } from './services/user.service'
-import { ModificationService } from './services/modification.service'
+import { UserService } from './users/user.service'
+import { createServices, type Services } from './services'
 import { RuleBook } from './reasoning/rule-book'
 import { loadRules } from './reasoning/rule-loader'
 
@@ -17,24 +17,27 @@ export function readVersion(): string {
   return pkg.version
 }
 
-export type Prepared = { dataSource: DataSource; rules: RuleBook; seeded: boolean }
+export type Prepared = { dataSource: DataSource; rules: RuleBook; services: Services; seeded: boolean }
 
 /** Accounts that still sign in with the published demo password (start-up warns about them). */
 export async function demoAccountsLeft(dataSource: DataSource): Promise<string[]> {
   return (await new UserService(dataSource).withPassword(DEMO_USERS.map((user) => user.email), DEMO_PASSWORD)).map((user) => user.email)
 }
 
-/** Opens and migrates the database, then seeds the demo scenario when asked and the database is empty. */
+/**
+ * Opens and migrates the database, builds every service once, then seeds the
+ * demo scenario through those services when asked and the database is empty.
+ */
 export async function prepareDatabase(config: AppConfig): Promise<Prepared> {
   // Rules first: a broken rule file stops start-up before anything is written.
   const rules = new RuleBook(loadRules(path.join(projectRoot, 'rules')))
   const dbPath = config.dbPath === ':memory:' ? ':memory:' : path.resolve(projectRoot, config.dbPath)
   const dataSource = await openDatabase(dbPath)
-  const users = new UserService(dataSource)
-  await new ModificationService(dataSource).syncShipped(rules.loaded.modifications)
-  const seeded = config.demo ? await seedDemo(dataSource, users, path.join(projectRoot, 'data', 'demo')) : false
-  if (config.firstAdmin && (await users.count()) === 0) {
-    await users.create({ ...config.firstAdmin, name: 'Administrator', role: 'admin' })
+  const services = createServices(dataSource, config, rules)
+  await services.modifications.syncShipped(rules.loaded.modifications)
+  const seeded = config.demo ? await seedDemo(dataSource, services, path.join(projectRoot, 'data', 'demo')) : false
+  if (config.firstAdmin && (await services.users.count()) === 0) {
+    await services.users.create({ ...config.firstAdmin, name: 'Administrator', role: 'admin' })
   }
-  return { dataSource, rules, seeded }
+  return { dataSource, rules, services, seeded }
 }

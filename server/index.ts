@@ -5,7 +5,7 @@ import { demoAccountsLeft, prepareDatabase, projectRoot, readVersion } from './b
 import { loadConfig } from './config/env'
 
 const config = loadConfig()
-const { dataSource, rules, seeded } = await prepareDatabase(config)
+const { dataSource, services, seeded } = await prepareDatabase(config)
 const demoAccounts = await demoAccountsLeft(dataSource)
 if (seeded) console.log('Seeded the demo scenario into the empty database.')
 if (demoAccounts.length > 0) {
@@ -17,8 +17,8 @@ if (demoAccounts.length > 0) {
 const app = await createApp({
   config,
   dataSource,
+  services,
   version: readVersion(),
-  rules,
   clientDir: config.env === 'production' ? path.join(projectRoot, 'dist') : undefined,
 })
 const server = app.listen(config.port, config.host, () => {

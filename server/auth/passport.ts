@@ -1,7 +1,7 @@
 import passport from 'passport'
 import { Strategy as LocalStrategy } from 'passport-local'
 import type { Role, User } from '../../shared/schemas/auth'
-import type { UserService } from '../services/user.service'
+import type { UserService } from '../users/user.service'
 
 declare global {
   namespace Express {

@@ -2,8 +2,8 @@ import { randomBytes } from 'node:crypto'
 import { TypeormStore } from 'connect-typeorm'
 import session from 'express-session'
 import type { DataSource } from 'typeorm'
-import { AppSettingEntity } from '../entities/app-setting.entity'
-import { SessionEntity } from '../entities/session.entity'
+import { AppSettingEntity } from '../settings/app-setting.entity'
+import { SessionEntity } from './session.entity'
 
 const EIGHT_HOURS_S = 8 * 60 * 60
 

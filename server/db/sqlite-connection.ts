@@ -1,7 +1,9 @@
-import type Database from 'better-sqlite3'
+import type BetterSqlite3 from 'better-sqlite3'
 import type { DataSource, EntityManager } from 'typeorm'
+import type { Database } from './database'
+import { SqliteDatabase } from './sqlite-database'
 
-function isDatabase(value: unknown): value is Database.Database {
+function isDatabase(value: unknown): value is BetterSqlite3.Database {
   return (
     typeof value === 'object' &&
     value !== null &&
@@ -11,11 +13,10 @@ function isDatabase(value: unknown): value is Database.Database {
 }
 
 /**
- * The better-sqlite3 handle under TypeORM, for bulk work that TypeORM's
- * per-row overhead would make too slow. TypeORM keeps one connection for
- * SQLite, so statements run on it join the transaction TypeORM has open.
+ * The better-sqlite3 handle under TypeORM. TypeORM keeps one connection for
+ * SQLite; the port (`databaseOf`) runs on the same one.
  */
-export function sqliteConnection(source: DataSource | EntityManager): Database.Database {
+export function sqliteConnection(source: DataSource | EntityManager): BetterSqlite3.Database {
   const driver = 'driver' in source ? source.driver : source.dataSource.driver
   const connection: unknown = 'databaseConnection' in driver ? driver.databaseConnection : undefined
   if (driver.options.type !== 'better-sqlite3' || !isDatabase(connection)) {
@@ -24,16 +25,23 @@ export function sqliteConnection(source: DataSource | EntityManager): Database.D
   return connection
 }
 
+const ports = new WeakMap<DataSource, SqliteDatabase>()
+
+/** The data port of an initialised data source (one per data source, so every caller shares its turn-taking). */
+export function databaseOf(dataSource: DataSource): Database & Pick<SqliteDatabase, 'transactionSync'> {
+  let port = ports.get(dataSource)
+  if (!port) {
+    port = new SqliteDatabase(sqliteConnection(dataSource))
+    ports.set(dataSource, port)
+  }
+  return port
+}
+
 /**
- * Runs `work` inside a TypeORM transaction on the raw connection. `work` is
- * synchronous on purpose: TypeORM shares that one connection with every
- * request, so letting the event loop turn while the transaction is open would
- * let other requests' statements slip into it.
+ * Runs synchronous `work` in one transaction on the raw connection, taking its
+ * turn with the port's other transactions. `work` is synchronous on purpose:
+ * nothing else can run on the shared connection while it holds it.
  */
-export async function inTransaction<T>(dataSource: DataSource, work: (db: Database.Database) => T): Promise<T> {
-  return dataSource.transaction(async (manager) => {
-    const db = sqliteConnection(manager)
-    if (!db.inTransaction) throw new Error('Expected the TypeORM transaction to be open on the raw connection.')
-    return work(db)
-  })
+export async function inTransaction<T>(dataSource: DataSource, work: (db: BetterSqlite3.Database) => T): Promise<T> {
+  return databaseOf(dataSource).transactionSync(work)
 }

@@ -7,17 +7,16 @@ import type { Role } from '../../shared/schemas/auth'
 import { buildSheetInputSchema } from '../../shared/schemas/build'
 import { linkSourceSchema, relationSchema, type ReviewStatus } from '../../shared/schemas/fitment'
 import type { ImportType } from '../../shared/schemas/imports'
-import { splitList } from '../csv/part-row'
-import { readCsvText } from '../csv/read-csv'
-import { AppSettingEntity } from '../entities/app-setting.entity'
+import { splitList } from '../imports/csv/part-row'
+import { readCsvText } from '../imports/csv/read-csv'
+import { AppSettingEntity } from '../settings/app-setting.entity'
 import { inTransaction } from '../db/sqlite-connection'
-import { PartEntity } from '../entities/part.entity'
-import { UserEntity } from '../entities/user.entity'
+import { PartEntity } from '../catalogue/part.entity'
+import { UserEntity } from '../users/user.entity'
 import { AppError } from '../errors/app-error'
-import { FitGraphIndex } from '../services/fit-graph'
-import { ImportService, type ImportUser } from '../services/import.service'
-import { insertLinkRow } from '../services/link-rows'
-import type { UserService } from '../services/user.service'
+import type { ImportService, ImportUser } from '../imports/import.service'
+import { insertLinkRow } from '../fitment/link-rows'
+import type { Services } from '../services'
 
 export const DEMO_PASSWORD = 'fitwright-demo'
 export const DEMO_USERS: { email: string; name: string; role: Role }[] = [
@@ -81,7 +80,8 @@ const SEEDED_KEY = 'demo-seeded'
  * reported at the next start rather than silently left half-filled.
  * Returns whether it seeded.
  */
-export async function seedDemo(dataSource: DataSource, users: UserService, demoDir: string): Promise<boolean> {
+export async function seedDemo(dataSource: DataSource, services: Pick<Services, 'users' | 'imports' | 'graphIndex'>, demoDir: string): Promise<boolean> {
+  const { users, imports } = services
   const settings = dataSource.getRepository(AppSettingEntity)
   if (await settings.existsBy({ key: SEEDED_KEY })) return false
   const [userCount, partCount] = await Promise.all([
@@ -99,7 +99,6 @@ export async function seedDemo(dataSource: DataSource, users: UserService, demoD
   for (const user of DEMO_USERS) created.push(await users.create({ ...user, password: DEMO_PASSWORD }))
   const editor = created.find((user) => user.role === 'editor')!
   const tech = created.find((user) => user.role === 'tech')!
-  const imports = new ImportService(dataSource, { maxRows: Number.MAX_SAFE_INTEGER }, new FitGraphIndex(dataSource))
   const partFiles = readdirSync(path.join(demoDir, 'parts')).filter((file) => file.endsWith('.csv')).sort()
   for (const file of partFiles) await importDemoFile(imports, demoDir, `parts/${file}`, 'parts', editor)
   await importDemoFile(imports, demoDir, 'links.csv', 'links', editor)
@@ -108,5 +107,6 @@ export async function seedDemo(dataSource: DataSource, users: UserService, demoD
     seedBuilds(db, path.join(demoDir, 'builds.json'), tech.id)
     db.prepare('INSERT INTO app_setting (key, value) VALUES (?, ?)').run(SEEDED_KEY, new Date().toISOString())
   })
+  services.graphIndex.invalidate()
   return true
 }

@@ -1,6 +1,6 @@
 import { Engine, type RuleProperties } from 'json-rules-engine'
 import { pairKey } from '../../shared/build-template'
-import { pushTo } from '../services/map-list'
+import { pushTo } from '../lib/map-list'
 import { addOperators } from './operators'
 import type { Condition, RuleEvent, RuleFile } from './rule-file.schema'
 import type { LoadedRules } from './rule-loader'

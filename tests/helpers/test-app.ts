@@ -48,8 +48,8 @@ export async function createTestApp(options: { demo?: boolean; env?: Record<stri
     FITWRIGHT_DEMO: options.demo === false ? '0' : '1',
     ...options.env,
   })
-  const { dataSource, rules } = await prepareDatabase(config)
-  const app = await createApp({ config, dataSource, rules, version: 'test' })
+  const { dataSource, services } = await prepareDatabase(config)
+  const app = await createApp({ config, dataSource, services, version: 'test' })
   return {
     app,
     dataSource,

@@ -2,7 +2,7 @@ import { createReadStream, readdirSync, readFileSync } from 'node:fs'
 import { createRequire } from 'node:module'
 import path from 'node:path'
 import { describe, expect, it } from 'vitest'
-import { readCsvStream } from '../../server/csv/csv-stream'
+import { readCsvStream } from '../../server/imports/csv/csv-stream'
 
 /*
  * csv-spectrum (npm package csv-spectrum): RFC 4180 edge cases, each a CSV file

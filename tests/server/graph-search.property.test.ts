@@ -1,8 +1,8 @@
 import cytoscape from 'cytoscape'
 import fc from 'fast-check'
 import { describe, expect, it } from 'vitest'
-import { FitGraph, type GraphIdentity, type GraphLink, type GraphPart } from '../../server/services/fit-graph'
-import { reviewedFits, shortestFitPath } from '../../server/services/graph-search'
+import { FitGraph, type GraphIdentity, type GraphLink, type GraphPart } from '../../server/fitment/fit-graph'
+import { reviewedFits, shortestFitPath } from '../../server/fitment/graph-search'
 
 // Written out here, not imported: only approved fits carry a path.
 const carriesPath = (link: GraphLink) => link.status === 'approved' && (link.relation === 'fits' || link.relation === 'fits-with-modification')

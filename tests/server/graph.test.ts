@@ -1,8 +1,8 @@
 import { afterAll, beforeAll, describe, expect, it } from 'vitest'
 import { MAX_NEIGHBOURHOOD_EDGES, MAX_NEIGHBOURHOOD_NODES } from '../../shared/schemas/graph'
 import { inTransaction } from '../../server/db/sqlite-connection'
-import { insertLinkRow } from '../../server/services/link-rows'
-import { insertPartRows } from '../../server/services/part-writer'
+import { insertLinkRow } from '../../server/fitment/link-rows'
+import { insertPartRows } from '../../server/catalogue/part-writer'
 import { expectBadRequest } from '../helpers/expect-error'
 import { createTestApp, type TestApp } from '../helpers/test-app'
 

@@ -1,6 +1,6 @@
 import { afterAll, beforeAll, describe, expect, it } from 'vitest'
 import { loadRules } from '../../server/reasoning/rule-loader'
-import { ModificationService } from '../../server/services/modification.service'
+import { ModificationService } from '../../server/catalogue/modification.service'
 import { createTestApp, type TestApp } from '../helpers/test-app'
 
 let t: TestApp

@@ -1,5 +1,5 @@
 import { describe, expect, it } from 'vitest'
-import { parsePartRow } from '../../server/csv/part-row'
+import { parsePartRow } from '../../server/imports/csv/part-row'
 
 const row = (values: Record<string, string>) => ({ part_number: 'X-1', kind: 'head', name: 'A head', ...values })
 

@@ -1,7 +1,7 @@
 import fc from 'fast-check'
 import { describe, expect, it } from 'vitest'
 import { neutraliseCell, restoreCell } from '../../shared/csv-cells'
-import { detectDelimiter } from '../../server/csv/csv-stream'
+import { detectDelimiter } from '../../server/imports/csv/csv-stream'
 
 describe('neutraliseCell and restoreCell', () => {
   it.each([

@@ -1,0 +1,115 @@
+import type Database from 'better-sqlite3'
+import type { FieldError } from '../../shared/schemas/errors'
+import { AppError } from '../errors/app-error'
+import type { ImportRecordType } from './import-change.entity'
+import { SQL_NOW, type PreviousRows } from './change-log'
+
+type ChangeRow = { recordType: ImportRecordType; recordId: number; action: 'updated' | 'deleted'; previousValues: string }
+type Blocker = { batchId: number | null; fileName: string | null; what: string }
+
+const TABLES: Record<ImportRecordType, { table: string; children: Record<string, string> }> = {
+  part: { table: 'part', children: { part_mark: 'partId' } },
+  link: { table: 'link', children: { link_modification: 'linkId' } },
+  identity: { table: 'part_identity', children: {} },
+}
+const COLUMN = /^[A-Za-z]+$/
+
+/** Later writes that lean on what the batch wrote; while any is in place the batch cannot be undone exactly. */
+function findBlockers(db: Database.Database, batchId: number): Blocker[] {
+  const created = (type: ImportRecordType, table: string) =>
+    `SELECT id FROM ${table} WHERE batchId = @batch AND id NOT IN
+       (SELECT recordId FROM import_change WHERE batchId = @batch AND recordType = '${type}')`
+  const outside = (alias: string) => `(${alias}.batchId IS NULL OR ${alias}.batchId != @batch)`
+  const sql = `
+    SELECT c.batchId AS batchId, 'changed records this batch wrote' AS what FROM import_change c
+      JOIN import_batch b ON b.id = c.batchId WHERE c.previousBatchId = @batch AND b.status = 'committed'
+    UNION SELECT l.batchId, 'links parts this batch added' FROM link l
+      WHERE ${outside('l')} AND (l.partAId IN (${created('part', 'part')}) OR l.partBId IN (${created('part', 'part')}))
+    UNION SELECT i.batchId, 'declares parts this batch added identical' FROM part_identity i
+      WHERE ${outside('i')} AND (i.partAId IN (${created('part', 'part')}) OR i.partBId IN (${created('part', 'part')}))
+    UNION SELECT l.batchId, 'uses modifications this batch proposed' FROM link_modification lm
+      JOIN link l ON l.id = lm.linkId JOIN modification m ON m.id = lm.modificationId
+      WHERE m.batchId = @batch AND ${outside('l')}`
+  const rows = db.prepare(`SELECT x.batchId, x.what, b.fileName FROM (${sql}) x LEFT JOIN import_batch b ON b.id = x.batchId`).all({ batch: batchId }) as Blocker[]
+  return rows.sort((a, b) => (b.batchId ?? 0) - (a.batchId ?? 0))
+}
+
+/** Rows a revert would write back that point at a part or modification gone since (its batch was reverted). */
+function missingReferences(db: Database.Database, changes: { type: ImportRecordType; rows: PreviousRows }[]): string[] {
+  const partExists = db.prepare('SELECT 1 FROM part WHERE id = ?')
+  const modificationExists = db.prepare('SELECT 1 FROM modification WHERE id = ?')
+  const missing: string[] = []
+  for (const { type, rows } of changes) {
+    if (type === 'part') continue
+    const main = rows[TABLES[type].table]?.[0] ?? {}
+    for (const column of ['partAId', 'partBId']) {
+      if (!partExists.get(main[column])) missing.push(`part id ${String(main[column])}`)
+    }
+    for (const mod of rows.link_modification ?? []) {
+      if (!modificationExists.get(mod.modificationId)) missing.push(`modification id ${String(mod.modificationId)}`)
+    }
+  }
+  return [...new Set(missing)]
+}
+
+function restorer(db: Database.Database) {
+  const statements = new Map<string, Database.Statement>()
+  const run = (sql: string, values: unknown[]) => {
+    let statement = statements.get(sql)
+    if (!statement) statements.set(sql, (statement = db.prepare(sql)))
+    statement.run(...values)
+  }
+  const insert = (table: string, row: Record<string, unknown>) => {
+    const columns = Object.keys(row).filter((column) => COLUMN.test(column))
+    run(`INSERT INTO ${table} (${columns.map((c) => `"${c}"`).join(', ')}) VALUES (${columns.map(() => '?').join(', ')})`, columns.map((c) => row[c]))
+  }
+  return (type: ImportRecordType, recordId: number, action: 'updated' | 'deleted', previous: PreviousRows) => {
+    const { table, children } = TABLES[type]
+    const main = previous[table]?.[0]
+    if (!main) throw new Error(`Change of ${type} ${recordId} has no previous row`)
+    if (action === 'updated') {
+      const columns = Object.keys(main).filter((column) => COLUMN.test(column) && column !== 'id')
+      run(`UPDATE ${table} SET ${columns.map((c) => `"${c}" = ?`).join(', ')} WHERE id = ?`, [...columns.map((c) => main[c]), recordId])
+      for (const [child, key] of Object.entries(children)) run(`DELETE FROM ${child} WHERE ${key} = ?`, [recordId])
+    } else {
+      insert(table, main)
+    }
+    for (const child of Object.keys(children)) for (const row of previous[child] ?? []) insert(child, row)
+  }
+}
+
+/**
+ * Puts back the catalogue as it was before the batch: records it updated get
+ * their previous rows, records it created go, records it deleted return (with
+ * their ids). Synchronous, for the caller's transaction.
+ */
+export function revertBatch(db: Database.Database, batchId: number, userName: string) {
+  const batch = db.prepare('SELECT status FROM import_batch WHERE id = ?').get(batchId) as { status: string } | undefined
+  if (!batch) throw AppError.notFound(`No import batch ${batchId}.`)
+  if (batch.status === 'reverted') throw new AppError(409, 'already_reverted', `Batch ${batchId} is already reverted.`)
+
+  const blockers = findBlockers(db, batchId)
+  if (blockers.length) {
+    const details: FieldError[] = blockers.map((b) => ({
+      path: b.batchId ? `batch ${b.batchId}` : 'outside imports',
+      message: b.batchId ? `Batch ${b.batchId} (${b.fileName ?? 'unknown file'}) ${b.what}.` : `A record made outside imports ${b.what}.`,
+    }))
+    const later = blockers.find((b) => b.batchId)
+    const message = later
+      ? `Batch ${later.batchId} (${later.fileName}) came later and touches what this batch wrote; revert it first.`
+      : `${details[0]!.message} Remove it first.`
+    throw new AppError(409, 'revert_blocked', message, details)
+  }
+
+  const changes = (db.prepare('SELECT recordType, recordId, action, previousValues FROM import_change WHERE batchId = ? ORDER BY id').all(batchId) as ChangeRow[])
+    .map((change) => ({ ...change, type: change.recordType, rows: JSON.parse(change.previousValues) as PreviousRows }))
+  const missing = missingReferences(db, changes)
+  if (missing.length) {
+    throw new AppError(409, 'revert_blocked', `The records this batch replaced point at ${missing.join(', ')}, removed since by another revert, so they cannot be put back exactly.`)
+  }
+  const restore = restorer(db)
+  for (const change of changes) if (change.action === 'updated') restore(change.type, change.recordId, 'updated', change.rows)
+  for (const table of ['link', 'part_identity', 'part', 'modification']) db.prepare(`DELETE FROM ${table} WHERE batchId = ?`).run(batchId)
+  for (const change of changes) if (change.action === 'deleted') restore(change.type, change.recordId, 'deleted', change.rows)
+  db.prepare(`UPDATE import_batch SET status = 'reverted', revertedAt = ${SQL_NOW}, revertedByName = ? WHERE id = ?`).run(userName, batchId)
+}

@@ -1,0 +1,161 @@
+import type { DataSource } from 'typeorm'
+import { BUILD_SLOTS, isSlotId, matingSlots, type SlotId } from '../../shared/build-template'
+import { AppError } from '../errors/app-error'
+import type { Candidate, Completion } from '../../shared/schemas/build'
+import { SKILL_LEVELS, worstVerdict, type Relation } from '../../shared/schemas/fitment'
+import type { PartAttributes } from '../../shared/schemas/part-attributes'
+import type { BuildEvaluationService, ResolvedBuild } from './build-evaluation.service'
+import type { FitGraph, FitGraphIndex } from '../fitment/fit-graph'
+import type { Part } from '../../shared/schemas/part'
+import type { ModificationService } from '../catalogue/modification.service'
+import type { PartService } from '../catalogue/part.service'
+
+type Row = { id: number; partNumber: string; attributes: string; yearTo: number | null }
+
+/**
+ * Reads one request can share across many completions (fill the gaps asks
+ * dozens): the catalogue rows of a kind and the skill of a modification.
+ */
+export class CompletionReads {
+  private readonly rows = new Map<SlotId, Promise<Row[]>>()
+  private readonly skills = new Map<string, Promise<number>>()
+
+  constructor(
+    private readonly dataSource: DataSource,
+    private readonly modifications: ModificationService,
+  ) {}
+
+  rowsOf(kind: SlotId): Promise<Row[]> {
+    let rows = this.rows.get(kind)
+    if (!rows) {
+      rows = this.dataSource.query('SELECT id, partNumber, attributes, yearTo FROM part WHERE kind = ? ORDER BY partNumber', [kind]) as Promise<Row[]>
+      this.rows.set(kind, rows)
+    }
+    return rows
+  }
+
+  /** Harder work weighs more, so the easiest way to a working build comes first. */
+  skillWeight(name: string): Promise<number> {
+    let weight = this.skills.get(name)
+    if (!weight) {
+      weight = this.modifications.byNames([name]).then((found) => SKILL_WEIGHT[found.get(name)!.skillLevel] ?? 2)
+      this.skills.set(name, weight)
+    }
+    return weight
+  }
+}
+
+const SKILL_WEIGHT = Object.fromEntries(SKILL_LEVELS.map((level, index) => [level, index + 1])) as Record<string, number>
+
+export class BuildCompletionService {
+  constructor(
+    private readonly dataSource: DataSource,
+    private readonly parts: PartService,
+    private readonly graphIndex: FitGraphIndex,
+    private readonly evaluation: BuildEvaluationService,
+    private readonly modifications: ModificationService,
+  ) {}
+
+  /**
+   * For each empty slot: parts that fit every filled slot they mate with
+   * (directly or with modification), fewest and easiest modifications first.
+   */
+  async complete(request: Parameters<BuildEvaluationService['resolve']>[0], limit: number, only?: string[]): Promise<Completion> {
+    const unknown = (only ?? []).filter((slot) => !isSlotId(slot))
+    if (unknown.length) {
+      throw AppError.badRequest(`Unknown slot ${unknown.join(', ')}.`, unknown.map((slot) => ({ path: 'only', message: `Unknown slot "${slot}".` })))
+    }
+    const build = await this.evaluation.resolve(request)
+    return this.completeBuild(build, await this.graphIndex.snapshot(), limit, { only: only?.filter(isSlotId) })
+  }
+
+  /** A fresh set of shared reads, for one request. */
+  reads(): CompletionReads {
+    return new CompletionReads(this.dataSource, this.modifications)
+  }
+
+  /** Candidates for the empty slots of a resolved build (only those in `only`, when given). */
+  async completeBuild(
+    build: ResolvedBuild,
+    graph: FitGraph,
+    limit: number,
+    { only, reads = this.reads() }: { only?: SlotId[]; reads?: CompletionReads } = {},
+  ): Promise<Completion> {
+    const result: Completion = { slots: {} }
+    for (const slot of BUILD_SLOTS) {
+      if (build.parts[slot.id] || (only && !only.includes(slot.id))) continue
+      const matesWith = matingSlots(slot.id).filter((other) => build.parts[other])
+      if (matesWith.length === 0) {
+        result.slots[slot.id] = {
+          matesWith,
+          candidates: [],
+          note: `Choose a part for a slot it mates with first (${matingSlots(slot.id).join(', ')}).`,
+        }
+        continue
+      }
+      const { candidates, total } = await this.candidatesFor(slot.id, build, graph, reads, limit)
+      result.slots[slot.id] = {
+        matesWith,
+        candidates,
+        note: total === 0 ? `No catalogue part fits every chosen part it mates with (${matesWith.join(', ')}).` : undefined,
+      }
+    }
+    return result
+  }
+
+  /** A candidate in the slot against every filled slot it mates with; null unless all fit. */
+  private async judge(slot: SlotId, row: Row, build: ResolvedBuild, graph: FitGraph) {
+    const trial: ResolvedBuild = {
+      ...build,
+      parts: { ...build.parts, [slot]: { partNumber: row.partNumber, attributes: JSON.parse(row.attributes) as PartAttributes, yearTo: row.yearTo } as Part },
+      ids: { ...build.ids, [slot]: row.id },
+    }
+    const { facts } = this.evaluation.prepare(trial)
+    const pairs = await this.evaluation.judgePairs(graph, trial, facts, slot)
+    if (pairs.some((pair) => pair.relation === 'does-not-fit' || pair.relation === 'unknown')) return null
+    return {
+      relation: worstVerdict(pairs.map((pair) => pair.relation)) as Relation,
+      modifications: [...new Set(pairs.flatMap((pair) => pair.modifications))],
+      reasons: pairs.map((pair) => `${pair.label}: ${pair.explanation[0]?.text ?? pair.relation}`),
+      byRule: pairs.some((pair) => pair.decidedBy === 'rule'),
+    }
+  }
+
+  /** The best `limit` candidates for a slot, fewest and easiest modifications first, and how many fit in all. */
+  private async candidatesFor(slot: SlotId, build: ResolvedBuild, graph: FitGraph, reads: CompletionReads, limit: number) {
+    const rows = await reads.rowsOf(slot)
+    type Judgement = { relation: Relation; modifications: string[]; reasons: string[]; byRule: boolean } | null
+    const accepted: ({ row: Row } & NonNullable<Judgement>)[] = []
+    const neighbourIds = matingSlots(slot).flatMap((other) => (build.ids[other] === undefined ? [] : [build.ids[other]!]))
+    // Without a reviewed link the rules decide, and parts with the same attributes get the same answer.
+    const byAttributes = new Map<string, Judgement>()
+    for (const row of rows) {
+      const linked = neighbourIds.some((id) => graph.linkBetween(row.id, id))
+      const memoKey = `${row.yearTo}|${row.attributes}`
+      let judgement = linked ? undefined : byAttributes.get(memoKey)
+      if (judgement === undefined) {
+        judgement = await this.judge(slot, row, build, graph)
+        if (!linked) byAttributes.set(memoKey, judgement)
+      }
+      if (judgement) accepted.push({ row, ...judgement })
+    }
+    const scored = await Promise.all(
+      accepted.map(async (a) => {
+        let score = a.byRule ? 0.1 : 0 // reviewed evidence before inference among otherwise equal candidates
+        for (const name of a.modifications) score += 1 + (await reads.skillWeight(name))
+        return { ...a, score }
+      }),
+    )
+    scored.sort((a, b) => a.score - b.score || a.row.partNumber.localeCompare(b.row.partNumber))
+    const best = scored.slice(0, limit)
+    const full = new Map((await this.parts.byIds(best.map((a) => a.row.id))).map((part) => [part.partNumber, part]))
+    const candidates = best.map((a): Candidate => ({
+      part: full.get(a.row.partNumber)!,
+      relation: a.relation,
+      modifications: a.modifications,
+      score: a.score,
+      reasons: a.reasons,
+    }))
+    return { candidates, total: scored.length }
+  }
+}

@@ -1,0 +1,176 @@
+import type { DataSource } from 'typeorm'
+import { BUILD_SLOTS, MATING_PAIRS, type SlotId } from '../../shared/build-template'
+import { DEFERENCE } from '../../shared/advisory'
+import { validateVin, vinModelYear } from '../../shared/engineering/vin'
+import type { AppliedModification, BuildContext, Caution, EvaluateRequest, Evaluation } from '../../shared/schemas/build'
+import { worstVerdict } from '../../shared/schemas/fitment'
+import type { Part } from '../../shared/schemas/part'
+import type { PartAttributes } from '../../shared/schemas/part-attributes'
+import { buildFacts } from '../reasoning/facts'
+import { computeFigures, cylinders } from '../reasoning/figures'
+import { summariseFigures } from '../reasoning/figures-summary'
+import { judgePair, type JudgedPair } from '../fitment/pair-judge'
+import { summariseOutcomes } from '../reasoning/rule-summary'
+import { buildPartsList } from '../reasoning/parts-list'
+import type { Facts, RuleBook } from '../reasoning/rule-book'
+import type { RuleExtraPart } from '../reasoning/rule-file.schema'
+import { resolveSlots } from './build-slots'
+import { toPart } from '../catalogue/part.repository'
+import type { FitGraph, FitGraphIndex } from '../fitment/fit-graph'
+import type { ModificationService } from '../catalogue/modification.service'
+import type { PartService } from '../catalogue/part.service'
+
+/** A build with its slots resolved to parts, ready to judge. */
+export type ResolvedBuild = {
+  parts: Partial<Record<SlotId, Part>>
+  ids: Partial<Record<SlotId, number>>
+  context: BuildContext
+  contextCautions: Caution[]
+}
+
+/** A VIN gives the chassis model year when none is given; a bad check digit only warns (optional outside North America). */
+export function normaliseContext(context: BuildContext): { context: BuildContext; cautions: Caution[] } {
+  if (!context.vin) return { context, cautions: [] }
+  const check = validateVin(context.vin)
+  const cautions: Caution[] = check.valid
+    ? []
+    : [{ severity: 'warning', text: `VIN ${context.vin}: ${check.problems.join(' ')}`, reference: '49 CFR 565.15 [published]' }]
+  const year = context.chassisModelYear ?? vinModelYear(context.vin)
+  return { context: { ...context, chassisModelYear: year ?? context.chassisModelYear }, cautions }
+}
+
+export class BuildEvaluationService {
+  constructor(
+    private readonly dataSource: DataSource,
+    private readonly parts: PartService,
+    private readonly graphIndex: FitGraphIndex,
+    private readonly rules: RuleBook,
+    private readonly modifications: ModificationService,
+  ) {}
+
+  async resolve(request: EvaluateRequest): Promise<ResolvedBuild> {
+    const entities = await resolveSlots(this.parts, request.slots)
+    const parts: ResolvedBuild['parts'] = {}
+    const ids: ResolvedBuild['ids'] = {}
+    for (const [slot, entity] of entities) {
+      parts[slot] = toPart(entity)
+      ids[slot] = entity.id
+    }
+    const { slots: _slots, ...rawContext } = request
+    const { context, cautions } = normaliseContext(rawContext)
+    return { parts, ids, context, contextCautions: cautions }
+  }
+
+  /** The figures of a build and the facts its rules read. */
+  prepare(build: Pick<ResolvedBuild, 'parts' | 'context'>) {
+    const figures = computeFigures(build.parts, build.context)
+    const numbers = Object.fromEntries(Object.entries(build.parts).map(([slot, part]) => [slot, part!.partNumber]))
+    return { figures, facts: buildFacts(build.parts, figures, build.context, numbers) }
+  }
+
+  /** Judges every mating pair whose two slots are filled. */
+  async judgePairs(graph: FitGraph, build: Pick<ResolvedBuild, 'ids'>, facts: Facts, only?: SlotId): Promise<JudgedPair[]> {
+    const judged: JudgedPair[] = []
+    for (const pair of MATING_PAIRS) {
+      const [a, b] = pair.slots
+      const idA = build.ids[a]
+      const idB = build.ids[b]
+      if (idA === undefined || idB === undefined || (only && a !== only && b !== only)) continue
+      judged.push(await judgePair(graph, this.rules, { slots: [a, b], label: pair.label, partIds: [idA, idB], facts }))
+    }
+    return judged
+  }
+
+  async evaluate(request: EvaluateRequest): Promise<Evaluation> {
+    const build = await this.resolve(request)
+    const graph = await this.graphIndex.snapshot()
+    const { figures, facts } = this.prepare(build)
+    const pairs = await this.judgePairs(graph, build, facts)
+    const buildRules = summariseOutcomes(await this.rules.evaluateBuild(facts))
+
+    const applied = await this.appliedModifications(pairs)
+    const count = cylinders(build.parts)
+    const partsList = await buildPartsList({
+      parts: build.parts,
+      cylinders: count,
+      modifications: applied,
+      extraParts: [
+        ...pairs.filter((pair) => pair.relation !== 'does-not-fit').flatMap((pair) => pair.rules.extraParts),
+        ...buildRules.extraParts,
+      ],
+      consumables: this.rules.loaded.consumables,
+      findParts: (spec) => this.findParts(spec),
+    })
+
+    const cautions = dedupeCautions([
+      ...build.contextCautions,
+      ...pairs.flatMap((pair) => pair.rules.cautions),
+      ...buildRules.cautions,
+      DEFERENCE,
+    ])
+    return {
+      verdict: pairs.length ? worstVerdict(pairs.map((pair) => pair.relation)) : 'unknown',
+      missingSlots: BUILD_SLOTS.filter((slot) => !build.parts[slot.id]).map((slot) => slot.id),
+      pairs: pairs.map(({ rules: _rules, linkModifications: _mods, ...pair }) => pair),
+      modifications: applied.map(({ ruleExtraParts: _extra, ...modification }) => modification),
+      partsList,
+      cautions,
+      figures: summariseFigures(figures, build.context),
+      parts: Object.fromEntries(Object.entries(build.parts)) as Record<string, Part>,
+    }
+  }
+
+  /**
+   * The modifications a build needs: from the reviewed link where a link
+   * decides a pair (with the rules' worked detail for the same modification),
+   * otherwise from the rules. Pairs that do not fit need no modification.
+   */
+  private async appliedModifications(pairs: JudgedPair[]): Promise<(AppliedModification & { ruleExtraParts: RuleExtraPart[] })[]> {
+    const wanted = pairs
+      .filter((pair) => pair.relation === 'fits-with-modification')
+      .flatMap((pair) =>
+        pair.decidedBy === 'link'
+          ? pair.linkModifications.map((name) => {
+              const fromRule = pair.rules.modifications.find((m) => m.name === name)
+              return {
+                pair,
+                name,
+                reason: fromRule?.reason ?? `Named by the reviewed link between ${pair.partNumbers.join(' and ')}.`,
+                extraParts: fromRule?.extraParts ?? [],
+              }
+            })
+          : pair.rules.modifications.map((m) => ({ pair, name: m.name, reason: m.reason, extraParts: m.extraParts })),
+      )
+    const catalogue = await this.modifications.byNames(wanted.map((w) => w.name))
+    const seen = new Set<string>()
+    return wanted.flatMap(({ pair, name, reason, extraParts }) => {
+      const key = `${name}|${pair.slots.join('|')}`
+      if (seen.has(key)) return []
+      seen.add(key)
+      return [{ ...catalogue.get(name)!, slots: pair.slots, reason, ruleExtraParts: extraParts }]
+    })
+  }
+
+  /** Catalogue parts of a kind whose attributes equal the ones asked for. */
+  async findParts(spec: { kind: string; attributes?: Record<string, string> }): Promise<string[]> {
+    const rows = (await this.dataSource.query('SELECT partNumber, attributes FROM part WHERE kind = ? ORDER BY partNumber', [
+      spec.kind,
+    ])) as { partNumber: string; attributes: string }[]
+    return rows
+      .filter((row) => {
+        const attributes = JSON.parse(row.attributes) as PartAttributes
+        return Object.entries(spec.attributes ?? {}).every(([name, value]) => String(attributes[name]) === value)
+      })
+      .map((row) => row.partNumber)
+  }
+}
+
+const SEVERITY_ORDER = { danger: 0, warning: 1, info: 2 }
+
+/** Each caution once, the ones that can hurt someone first. */
+export function dedupeCautions(cautions: Caution[]): Caution[] {
+  const seen = new Set<string>()
+  return cautions
+    .filter((caution) => !seen.has(caution.text) && seen.add(caution.text))
+    .sort((a, b) => SEVERITY_ORDER[a.severity] - SEVERITY_ORDER[b.severity])
+}

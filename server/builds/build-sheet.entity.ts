@@ -1,0 +1,54 @@
+import {
+  Column,
+  CreateDateColumn,
+  Entity,
+  Index,
+  JoinColumn,
+  ManyToOne,
+  PrimaryGeneratedColumn,
+  UpdateDateColumn,
+} from 'typeorm'
+import { UserEntity } from '../users/user.entity'
+
+/** A technician's saved target combination. */
+@Entity('build_sheet')
+export class BuildSheetEntity {
+  @PrimaryGeneratedColumn({ type: 'integer' })
+  id!: number
+
+  @Index()
+  @Column({ type: 'integer' })
+  ownerId!: number
+
+  @ManyToOne(() => UserEntity, { onDelete: 'CASCADE' })
+  @JoinColumn({ name: 'ownerId' })
+  owner!: UserEntity
+
+  @Column({ type: 'text' })
+  name!: string
+
+  /** Slot -> part number. */
+  @Column({ type: 'simple-json' })
+  slots!: Record<string, string>
+
+  @Column({ type: 'real', nullable: true })
+  targetPowerKw!: number | null
+
+  @Column({ type: 'real', nullable: true })
+  fuelOctane!: number | null
+
+  @Column({ type: 'integer', nullable: true })
+  chassisModelYear!: number | null
+
+  @Column({ type: 'text', nullable: true })
+  vin!: string | null
+
+  @Column({ type: 'text', default: '' })
+  notes!: string
+
+  @CreateDateColumn({ type: 'datetime' })
+  createdAt!: Date
+
+  @UpdateDateColumn({ type: 'datetime' })
+  updatedAt!: Date
+}

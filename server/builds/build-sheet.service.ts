@@ -1,0 +1,98 @@
+import type { DataSource, Repository } from 'typeorm'
+import { isSlotId } from '../../shared/build-template'
+import type { BuildSheet, BuildSheetInput, BuildSheetUpdate } from '../../shared/schemas/build'
+import type { User } from '../../shared/schemas/auth'
+import { can } from '../../shared/permissions'
+import { BuildSheetEntity } from './build-sheet.entity'
+import { AppError } from '../errors/app-error'
+import { resolveSlots } from './build-slots'
+import type { PartService } from '../catalogue/part.service'
+
+function toBuildSheet(entity: BuildSheetEntity): BuildSheet {
+  return {
+    id: entity.id,
+    name: entity.name,
+    slots: entity.slots,
+    targetPowerKw: entity.targetPowerKw,
+    fuelOctane: entity.fuelOctane,
+    chassisModelYear: entity.chassisModelYear,
+    vin: entity.vin,
+    notes: entity.notes,
+    owner: { id: entity.owner.id, name: entity.owner.name },
+    createdAt: entity.createdAt.toISOString(),
+    updatedAt: entity.updatedAt.toISOString(),
+  }
+}
+
+/** Build sheets belong to their author; editors and administrators see and manage all of them. */
+export class BuildSheetService {
+  private readonly sheets: Repository<BuildSheetEntity>
+
+  constructor(
+    dataSource: DataSource,
+    private readonly parts: PartService,
+  ) {
+    this.sheets = dataSource.getRepository(BuildSheetEntity)
+  }
+
+  async list(user: User): Promise<BuildSheet[]> {
+    const where = can(user.role, 'builds.see-all') ? {} : { ownerId: user.id }
+    const all = await this.sheets.find({ where, relations: { owner: true }, order: { updatedAt: 'DESC', id: 'DESC' } })
+    return all.map(toBuildSheet)
+  }
+
+  private async owned(id: number, user: User): Promise<BuildSheetEntity> {
+    const entity = await this.sheets.findOne({ where: { id }, relations: { owner: true } })
+    // Someone else's sheet answers like a missing one, so ids cannot be probed.
+    if (!entity || (entity.ownerId !== user.id && !can(user.role, 'builds.see-all'))) {
+      throw AppError.notFound(`No build sheet ${id}.`)
+    }
+    return entity
+  }
+
+  async get(id: number, user: User): Promise<BuildSheet> {
+    return toBuildSheet(await this.owned(id, user))
+  }
+
+  /** Slots are checked like an evaluation's (known slot, known part, right kind) and stored by part number. */
+  private async checkedSlots(slots: Record<string, string>): Promise<Record<string, string>> {
+    const resolved = await resolveSlots(this.parts, slots)
+    return Object.fromEntries(Object.keys(slots).filter(isSlotId).flatMap((slot) => {
+      const entity = resolved.get(slot)
+      return entity ? [[slot, entity.partNumber]] : []
+    }))
+  }
+
+  async create(input: BuildSheetInput, user: User): Promise<BuildSheet> {
+    const entity = this.sheets.create({
+      ownerId: user.id,
+      name: input.name,
+      slots: await this.checkedSlots(input.slots),
+      targetPowerKw: input.targetPowerKw ?? null,
+      fuelOctane: input.fuelOctane ?? null,
+      chassisModelYear: input.chassisModelYear ?? null,
+      vin: input.vin ?? null,
+      notes: input.notes,
+    })
+    const saved = await this.sheets.save(entity)
+    return this.get(saved.id, user)
+  }
+
+  async update(id: number, change: BuildSheetUpdate, user: User): Promise<BuildSheet> {
+    const entity = await this.owned(id, user)
+    if (change.name !== undefined) entity.name = change.name
+    if (change.slots !== undefined) entity.slots = await this.checkedSlots(change.slots)
+    if ('targetPowerKw' in change) entity.targetPowerKw = change.targetPowerKw ?? null
+    if ('fuelOctane' in change) entity.fuelOctane = change.fuelOctane ?? null
+    if ('chassisModelYear' in change) entity.chassisModelYear = change.chassisModelYear ?? null
+    if ('vin' in change) entity.vin = change.vin ?? null
+    if (change.notes !== undefined) entity.notes = change.notes
+    await this.sheets.save(entity)
+    return this.get(id, user)
+  }
+
+  async remove(id: number, user: User): Promise<void> {
+    const entity = await this.owned(id, user)
+    await this.sheets.remove(entity)
+  }
+}

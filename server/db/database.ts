@@ -1,0 +1,46 @@
+/**
+ * The one way the server reaches its tables: repositories write SQL against
+ * this port, and an adapter runs it on SQLite (the embedded default) or, later,
+ * PostgreSQL.
+ *
+ * SQL written for it must run on both: `?` placeholders (the PostgreSQL adapter
+ * numbers them), double-quoted camelCase identifiers ("partAId"), `RETURNING`
+ * for new ids, no `datetime('now')` (pass a Date), no `group_concat`, and
+ * `CAST(COUNT(*) AS INTEGER)` so counts come back as numbers.
+ */
+export type SqlValue = string | number | bigint | boolean | null | Date | Buffer
+export type Row = Record<string, unknown>
+
+export type Dialect = 'sqlite' | 'postgres'
+
+export interface Database {
+  readonly dialect: Dialect
+  all<T = Row>(sql: string, params?: readonly SqlValue[]): Promise<T[]>
+  get<T = Row>(sql: string, params?: readonly SqlValue[]): Promise<T | undefined>
+  run(sql: string, params?: readonly SqlValue[]): Promise<{ changes: number }>
+  /** Runs an `INSERT … RETURNING "id"` and answers the new id. */
+  insert(sql: string, params?: readonly SqlValue[]): Promise<number>
+  /**
+   * Runs `work` in one transaction: all of it is written, or none. Statements
+   * made through `tx` (or through this database from inside `work`) join it;
+   * other requests wait until it ends, so keep slow work (hashing, files) out.
+   */
+  transaction<T>(work: (tx: Database) => Promise<T>): Promise<T>
+}
+
+/** `?, ?, ?` for a list of values. */
+export function placeholders(count: number): string {
+  return Array.from({ length: count }, () => '?').join(', ')
+}
+
+/** Splits a long id list so `IN (…)` stays under every driver's parameter limit. */
+export function* chunks<T>(items: readonly T[], size = 500): Generator<T[]> {
+  for (let start = 0; start < items.length; start += size) yield items.slice(start, start + size)
+}
+
+/** A timestamp as either driver hands it back (SQLite: UTC text without zone; PostgreSQL: Date). */
+export function toIsoTime(value: unknown): string {
+  if (value instanceof Date) return value.toISOString()
+  const text = String(value)
+  return new Date(/[zZ]|[+-]\d\d:?\d\d$/.test(text) ? text : `${text.replace(' ', 'T')}Z`).toISOString()
+}

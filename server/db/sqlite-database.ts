@@ -1,0 +1,126 @@
+import { AsyncLocalStorage } from 'node:async_hooks'
+import { setTimeout as sleep } from 'node:timers/promises'
+import type BetterSqlite3 from 'better-sqlite3'
+import type { Database, Row, SqlValue } from './database'
+
+const STATEMENT_CACHE_LIMIT = 1000
+/** How long a statement keeps retrying while another connection (the import worker) holds the write lock. */
+const BUSY_GIVE_UP_MS = 60_000
+
+/** SQLite's own text form of a UTC time, as TypeORM writes it, so every timestamp sorts together. */
+export function sqliteTime(date: Date): string {
+  return date.toISOString().replace('T', ' ').replace('Z', '')
+}
+
+function bind(params: readonly SqlValue[]): unknown[] {
+  return params.map((value) => {
+    if (typeof value === 'boolean') return value ? 1 : 0
+    if (value instanceof Date) return sqliteTime(value)
+    return value
+  })
+}
+
+function isBusy(error: unknown): boolean {
+  const code = (error as { code?: string }).code
+  return code === 'SQLITE_BUSY' || code === 'SQLITE_BUSY_SNAPSHOT' || code === 'SQLITE_LOCKED'
+}
+
+/**
+ * The port on one better-sqlite3 connection. better-sqlite3 is synchronous, so
+ * a statement never lets another request in; a transaction that awaits would,
+ * so while one is open every statement from outside it waits its turn. When
+ * another connection (the import worker) holds the write lock, a write waits
+ * by yielding to the event loop, never by blocking it (the connection's own
+ * busy timeout is 0).
+ */
+export class SqliteDatabase implements Database {
+  readonly dialect = 'sqlite' as const
+  private readonly statements = new Map<string, BetterSqlite3.Statement>()
+  private readonly context = new AsyncLocalStorage<SqliteDatabase>()
+  private open: Promise<void> | null = null
+
+  constructor(readonly handle: BetterSqlite3.Database) {
+    handle.pragma('busy_timeout = 0')
+  }
+
+  private statement(sql: string): BetterSqlite3.Statement {
+    let statement = this.statements.get(sql)
+    if (!statement) {
+      if (this.statements.size >= STATEMENT_CACHE_LIMIT) this.statements.clear()
+      statement = this.handle.prepare(sql)
+      this.statements.set(sql, statement)
+    }
+    return statement
+  }
+
+  /** Waits for a transaction opened by someone else; statements inside one run at once. */
+  private async turn(): Promise<void> {
+    if (this.context.getStore() === this) return
+    while (this.open) await this.open
+  }
+
+  private async retrying<T>(work: () => T): Promise<T> {
+    const started = Date.now()
+    for (let wait = 5; ; wait = Math.min(wait * 2, 100)) {
+      try {
+        return work()
+      } catch (error) {
+        if (!isBusy(error) || Date.now() - started > BUSY_GIVE_UP_MS) throw error
+        await sleep(wait)
+      }
+    }
+  }
+
+  async all<T = Row>(sql: string, params: readonly SqlValue[] = []): Promise<T[]> {
+    await this.turn()
+    return this.retrying(() => this.statement(sql).all(...bind(params)) as T[])
+  }
+
+  async get<T = Row>(sql: string, params: readonly SqlValue[] = []): Promise<T | undefined> {
+    await this.turn()
+    return this.retrying(() => this.statement(sql).get(...bind(params)) as T | undefined)
+  }
+
+  async run(sql: string, params: readonly SqlValue[] = []): Promise<{ changes: number }> {
+    await this.turn()
+    return this.retrying(() => ({ changes: this.statement(sql).run(...bind(params)).changes }))
+  }
+
+  async insert(sql: string, params: readonly SqlValue[] = []): Promise<number> {
+    const row = await this.get<{ id: number }>(sql, params)
+    if (!row || typeof row.id !== 'number') throw new Error('An insert through the port must end with RETURNING "id".')
+    return row.id
+  }
+
+  async transaction<T>(work: (tx: Database) => Promise<T>): Promise<T> {
+    if (this.context.getStore() === this) return work(this)
+    await this.turn()
+    let release!: () => void
+    this.open = new Promise<void>((resolve) => (release = resolve))
+    try {
+      await this.retrying(() => this.handle.exec('BEGIN IMMEDIATE'))
+      return await this.context.run(this, async () => {
+        try {
+          const result = await work(this)
+          this.handle.exec('COMMIT')
+          return result
+        } catch (error) {
+          if (this.handle.inTransaction) this.handle.exec('ROLLBACK')
+          throw error
+        }
+      })
+    } finally {
+      this.open = null
+      release()
+    }
+  }
+
+  /**
+   * A synchronous transaction on the raw connection, for bulk work where
+   * per-statement awaits would cost too much (imports, the demo seed). It
+   * still takes its turn with the port's other transactions.
+   */
+  async transactionSync<T>(work: (handle: BetterSqlite3.Database) => T): Promise<T> {
+    return this.transaction(async () => work(this.handle))
+  }
+}

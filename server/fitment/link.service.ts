@@ -1,0 +1,155 @@
+import type { DataSource } from 'typeorm'
+import type { Identity, IdentityCreate, Link, LinkCreate, LinkList, LinkUpdate } from '../../shared/schemas/link'
+import type { ReviewStatus } from '../../shared/schemas/fitment'
+import { inTransaction } from '../db/sqlite-connection'
+import { AppError } from '../errors/app-error'
+import type { FitGraphIndex } from './fit-graph'
+import { handEdit, type Editor } from '../audit/hand-edit'
+import { insertIdentityRow, insertLinkRow, orderedPair, pairHolder } from './link-rows'
+import type { PartService } from '../catalogue/part.service'
+
+type LinkRow = Omit<Link, 'modifications' | 'createdAt' | 'updatedAt'> & { createdAt: string; updatedAt: string; modifications: string | null }
+
+const LINK_SELECT = `SELECT l.id, a.partNumber AS "from", b.partNumber AS "to", l.relation, l.note, l.source, l.status, l.createdAt, l.updatedAt,
+  (SELECT group_concat(m.name, ';') FROM link_modification lm JOIN modification m ON m.id = lm.modificationId WHERE lm.linkId = l.id) AS modifications
+  FROM link l JOIN part a ON a.id = l.partAId JOIN part b ON b.id = l.partBId`
+
+function toLink(row: LinkRow): Link {
+  return {
+    ...row,
+    modifications: row.modifications ? row.modifications.split(';').sort() : [],
+    createdAt: new Date(`${row.createdAt}Z`).toISOString(),
+    updatedAt: new Date(`${row.updatedAt}Z`).toISOString(),
+  }
+}
+
+/** An editor's own changes to the fitment graph: links, their review, identities. */
+export class LinkService {
+  constructor(
+    private readonly dataSource: DataSource,
+    private readonly parts: PartService,
+    private readonly graphIndex: FitGraphIndex,
+  ) {}
+
+  async list(query: { status?: ReviewStatus; part?: string; page: number; pageSize: number }): Promise<LinkList> {
+    const where: string[] = []
+    const params: unknown[] = []
+    if (query.status) {
+      where.push('l.status = ?')
+      params.push(query.status)
+    }
+    if (query.part) {
+      const part = await this.parts.requireId(query.part, 'part')
+      where.push('(l.partAId = ? OR l.partBId = ?)')
+      params.push(part, part)
+    }
+    const whereSql = where.length ? ` WHERE ${where.join(' AND ')}` : ''
+    const [{ total }] = (await this.dataSource.query(`SELECT COUNT(*) AS total FROM link l${whereSql}`, params)) as [{ total: number }]
+    const rows = (await this.dataSource.query(`${LINK_SELECT}${whereSql} ORDER BY l.updatedAt DESC, l.id DESC LIMIT ? OFFSET ?`, [
+      ...params,
+      query.pageSize,
+      (query.page - 1) * query.pageSize,
+    ])) as LinkRow[]
+    return { items: rows.map(toLink), total }
+  }
+
+  async get(id: number): Promise<Link> {
+    const [row] = (await this.dataSource.query(`${LINK_SELECT} WHERE l.id = ?`, [id])) as LinkRow[]
+    if (!row) throw AppError.notFound(`No link ${id}.`)
+    return toLink(row)
+  }
+
+  private async pair(a: string, b: string, paths: [string, string]): Promise<[number, number]> {
+    const ids: [number, number] = [await this.parts.requireId(a, paths[0]), await this.parts.requireId(b, paths[1])]
+    if (ids[0] === ids[1]) {
+      throw AppError.badRequest('A part cannot be linked to itself.', [{ path: paths[1], message: 'Choose another part than the first.' }])
+    }
+    return orderedPair(ids)
+  }
+
+  /** A link an editor writes is reviewed by that act: approved, from the editor. */
+  async create(input: LinkCreate, editor: Editor): Promise<Link> {
+    const partIds = await this.pair(input.fromPart, input.toPart, ['fromPart', 'toPart'])
+    const id = await inTransaction(this.dataSource, (db) => {
+      refuseTakenPair(db, partIds, 'toPart')
+      const edit = handEdit(db, editor, { created: 1, updated: 0 })
+      const { relation, modifications, note } = input
+      return insertLinkRow(db, { partIds, relation, modifications, note, source: 'editor', status: 'approved', batchId: edit.batchId })
+    })
+    await this.graphIndex.applyChanges({ links: [id] })
+    return this.get(id)
+  }
+
+  /** Changes a link, or reviews it (approve or reject a proposed link). */
+  async update(id: number, change: LinkUpdate, editor: Editor): Promise<Link> {
+    const current = await this.get(id)
+    const relation = change.relation ?? current.relation
+    const modifications = change.modifications ?? (relation === 'fits-with-modification' ? current.modifications : [])
+    checkModifications(relation, modifications)
+    await inTransaction(this.dataSource, (db) => {
+      const edit = handEdit(db, editor, { created: 0, updated: 1 })
+      edit.rememberLink(id, 'updated')
+      db.prepare(`UPDATE link SET relation = ?, note = ?, status = ?, batchId = ?, updatedAt = ${edit.now} WHERE id = ?`).run(
+        relation,
+        change.note ?? current.note,
+        change.status ?? current.status,
+        edit.batchId,
+        id,
+      )
+      edit.setModifications(id, modifications)
+    })
+    await this.graphIndex.applyChanges({ links: [id] })
+    return this.get(id)
+  }
+
+  async remove(id: number, editor: Editor): Promise<void> {
+    await this.get(id)
+    await inTransaction(this.dataSource, (db) => {
+      const edit = handEdit(db, editor, { created: 0, updated: 1 })
+      edit.rememberLink(id, 'deleted')
+      db.prepare('DELETE FROM link WHERE id = ?').run(id)
+    })
+    await this.graphIndex.applyChanges({ links: [id] })
+  }
+
+  async createIdentity(input: IdentityCreate, editor: Editor): Promise<Identity> {
+    const partIds = await this.pair(input.partA, input.partB, ['partA', 'partB'])
+    const id = await inTransaction(this.dataSource, (db) => {
+      refuseTakenPair(db, partIds, 'partB')
+      const edit = handEdit(db, editor, { created: 1, updated: 0 })
+      return insertIdentityRow(db, { partIds, note: input.note, source: 'editor', batchId: edit.batchId })
+    })
+    await this.graphIndex.applyChanges({ identities: [id] })
+    const [partA, partB] = await this.parts.byIds(orderedPair(partIds))
+    return { id, partA: partA!.partNumber, partB: partB!.partNumber, note: input.note, source: 'editor' }
+  }
+
+  async removeIdentity(id: number, editor: Editor): Promise<void> {
+    const removed = await inTransaction(this.dataSource, (db) => {
+      if (!db.prepare('SELECT 1 FROM part_identity WHERE id = ?').get(id)) return false
+      const edit = handEdit(db, editor, { created: 0, updated: 1 })
+      edit.rememberIdentity(id)
+      db.prepare('DELETE FROM part_identity WHERE id = ?').run(id)
+      return true
+    })
+    if (!removed) throw AppError.notFound(`No identity ${id}.`)
+    await this.graphIndex.applyChanges({ identities: [id] })
+  }
+}
+
+/** Only a fit with modification names modifications, and it names at least one. */
+function checkModifications(relation: string, modifications: string[]) {
+  if (relation === 'fits-with-modification' && modifications.length === 0) {
+    throw AppError.badRequest('Name the modification a fit with modification needs.', [{ path: 'modifications', message: 'Required for a fit with modification.' }])
+  }
+  if (relation !== 'fits-with-modification' && modifications.length > 0) {
+    throw AppError.badRequest('Only a fit with modification names modifications.', [{ path: 'modifications', message: 'Leave empty for this relation.' }])
+  }
+}
+
+/** A pair holds one relation: a fit link or an identity, as imports have it too. */
+function refuseTakenPair(db: Parameters<typeof pairHolder>[0], partIds: [number, number], path: string) {
+  const holder = pairHolder(db, partIds)
+  if (holder === 'link') throw AppError.conflict('These two parts are linked already; change that link instead.', [{ path, message: 'Already linked to the first part.' }])
+  if (holder === 'identity') throw AppError.conflict('These two parts are declared identical already.', [{ path, message: 'Already the same part as the first.' }])
+}

@@ -1,0 +1,60 @@
+import type { PairJudgement } from '../../shared/schemas/build'
+import type { ExplanationStep, Verdict } from '../../shared/schemas/fitment'
+import type { FitGraph } from './fit-graph'
+import { chainSteps, RELATION_WORDS } from './explain'
+import type { Facts, RuleBook } from '../reasoning/rule-book'
+import { summariseOutcomes, type RuleSummary } from '../reasoning/rule-summary'
+
+export type JudgedPair = PairJudgement & { rules: RuleSummary; linkModifications: string[] }
+
+/**
+ * Judges one filled mating pair: a reviewed link (looking through identical
+ * parts) outranks the rules; with neither, the pair is unknown, never a fit.
+ */
+export async function judgePair(
+  graph: FitGraph,
+  rules: RuleBook,
+  input: { slots: [string, string]; label: string; partIds: [number, number]; facts: Facts },
+): Promise<JudgedPair> {
+  const [idA, idB] = input.partIds
+  const partNumbers: [string, string] = [graph.part(idA).partNumber, graph.part(idB).partNumber]
+  const summary = summariseOutcomes(await rules.evaluatePair(input.slots[0], input.slots[1], input.facts))
+  const found = graph.linkBetween(idA, idB)
+  if (found) {
+    const explanation = chainSteps(graph, idA, found.viaA, found.link, found.viaB, idB)
+    if (summary.relation && summary.relation !== found.link.relation) {
+      explanation.push({
+        type: 'note',
+        text: `The rules alone would say "${RELATION_WORDS[summary.relation]}" (${summary.ruleIds.join(', ')}); the reviewed link decides.`,
+      })
+    }
+    return {
+      slots: input.slots,
+      label: input.label,
+      partNumbers,
+      relation: found.link.relation,
+      decidedBy: 'link',
+      ruleIds: summary.ruleIds,
+      modifications: found.link.modifications,
+      explanation,
+      rules: summary,
+      linkModifications: found.link.modifications,
+    }
+  }
+  const relation: Verdict = summary.relation ?? 'unknown'
+  const explanation: ExplanationStep[] = summary.relation
+    ? summary.steps
+    : [{ type: 'note', text: `No reviewed link and no rule decides ${partNumbers[0]} with ${partNumbers[1]}: no evidence is not a fit.` }]
+  return {
+    slots: input.slots,
+    label: input.label,
+    partNumbers,
+    relation,
+    decidedBy: summary.relation ? 'rule' : 'none',
+    ruleIds: summary.ruleIds,
+    modifications: summary.modifications.map((m) => m.name),
+    explanation,
+    rules: summary,
+    linkModifications: [],
+  }
+}

@@ -1,0 +1,73 @@
+import { rm } from 'node:fs/promises'
+import path from 'node:path'
+import { Router } from 'express'
+import { z } from 'zod'
+import { rolesFor } from '../../shared/permissions'
+import { EXPORT_FILES, importFieldsSchema } from '../../shared/schemas/imports'
+import { requireRole } from '../auth/require-role'
+import type { AppConfig } from '../config/env'
+import { AppError } from '../errors/app-error'
+import { UTF8_BOM } from '../../shared/csv-cells'
+import { csvUpload } from './csv-upload'
+import { parseBody, parseParams } from '../middleware/validate'
+import type { ExportService } from './export.service'
+import type { ImportService } from './import.service'
+import { streamImport, wantsProgress } from './import-stream'
+
+const batchParamsSchema = z.object({ id: z.coerce.number().int().positive('Give a batch id.') })
+const exportParamsSchema = z.object({ file: z.enum(EXPORT_FILES, { error: () => 'Export parts.csv or links.csv.' }) })
+
+/** A name safe to show and store: no folders, no control characters, not endless. */
+function cleanFileName(name: string): string {
+  const base = path.basename(name.replace(/\\/g, '/')).replace(/[\u0000-\u001f\u007f]/g, '').trim()
+  return (base || 'upload.csv').slice(0, 200)
+}
+
+export function importRoutes(services: { imports: ImportService; exports: ExportService }, config: AppConfig): Router {
+  const router = Router()
+  const editors = requireRole(...rolesFor('imports.manage'))
+
+  router.get('/imports', editors, async (_req, res) => {
+    res.json(await services.imports.list())
+  })
+
+  router.post('/imports', editors, csvUpload(config.importMaxBytes), async (req, res) => {
+    const file = req.file
+    try {
+      const fields = parseBody(importFieldsSchema, req)
+      if (!file) throw AppError.badRequest('Attach the CSV file in the form field "file".')
+      const user = req.user!
+      const input = {
+        ...fields,
+        filePath: file.path,
+        fileName: cleanFileName(file.originalname),
+        fileSize: file.size,
+        user: { id: user.id, name: user.name },
+      }
+      if (wantsProgress(req)) {
+        await streamImport(res, (onProgress) => services.imports.run({ ...input, onProgress }))
+        return
+      }
+      const result = await services.imports.run(input)
+      res.status(result.batchId === undefined ? 200 : 201).json(result)
+    } finally {
+      if (file) await rm(file.path, { force: true })
+    }
+  })
+
+  router.post('/imports/:id/revert', editors, async (req, res) => {
+    const { id } = parseParams(batchParamsSchema, req)
+    res.json(await services.imports.revert(id, { id: req.user!.id, name: req.user!.name }))
+  })
+
+  // Editors' tool for the spreadsheet round trip; the catalogue as one file is not a counter task.
+  router.get('/export/:file', editors, (req, res) => {
+    const { file } = parseParams(exportParamsSchema, req)
+    const stamp = new Date().toISOString().slice(0, 10)
+    res.attachment(`fitwright-${file.replace('.csv', '')}-${stamp}.csv`)
+    res.type('text/csv; charset=utf-8')
+    res.send(`${UTF8_BOM}${services.exports.csv(file)}`)
+  })
+
+  return router
+}

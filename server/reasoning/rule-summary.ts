@@ -1,0 +1,48 @@
+import type { Caution } from '../../shared/schemas/build'
+import { worstVerdict, type ExplanationStep, type Relation } from '../../shared/schemas/fitment'
+import type { RuleOutcome } from './rule-book'
+import type { RuleExtraPart } from './rule-file.schema'
+
+export type RuleModification = { name: string; reason: string; extraParts: RuleExtraPart[]; ruleId: string }
+
+/** What the rules that fired say about one pair, gathered. */
+export type RuleSummary = {
+  relation?: Relation
+  modifications: RuleModification[]
+  extraParts: (RuleExtraPart & { reason: string })[]
+  cautions: Caution[]
+  steps: ExplanationStep[]
+  ruleIds: string[]
+}
+
+export function summariseOutcomes(outcomes: RuleOutcome[]): RuleSummary {
+  const summary: RuleSummary = { modifications: [], extraParts: [], cautions: [], steps: [], ruleIds: [] }
+  const relations: Relation[] = []
+  for (const { ruleId, event } of outcomes) {
+    if (!summary.ruleIds.includes(ruleId)) summary.ruleIds.push(ruleId)
+    switch (event.type) {
+      case 'relation':
+        relations.push(event.params.relation)
+        summary.steps.push({ type: 'rule', ruleId, relation: event.params.relation, text: event.params.reason })
+        break
+      case 'modification':
+        relations.push('fits-with-modification')
+        summary.modifications.push({
+          name: event.params.modification,
+          reason: event.params.reason,
+          extraParts: event.params.extraParts ?? [],
+          ruleId,
+        })
+        summary.steps.push({ type: 'rule', ruleId, relation: 'fits-with-modification', text: event.params.reason })
+        break
+      case 'extra-part':
+        summary.extraParts.push(event.params)
+        break
+      case 'caution':
+        summary.cautions.push({ ...event.params, ruleId })
+        break
+    }
+  }
+  if (relations.length) summary.relation = worstVerdict(relations) as Relation
+  return summary
+}

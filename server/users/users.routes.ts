@@ -1,0 +1,25 @@
+import { Router } from 'express'
+import { z } from 'zod'
+import { userCreateSchema, userUpdateSchema } from '../../shared/schemas/auth'
+import { rolesFor } from '../../shared/permissions'
+import { requireRole } from '../auth/require-role'
+import { parseBody, parseParams } from '../middleware/validate'
+import type { UserService } from './user.service'
+
+const idParamsSchema = z.object({ id: z.coerce.number().int().positive('Give a user id.') })
+
+export function userRoutes(users: UserService): Router {
+  const router = Router()
+  const adminOnly = requireRole(...rolesFor('users.manage'))
+  router.get('/users', adminOnly, async (_req, res) => {
+    res.json(await users.list())
+  })
+  router.post('/users', adminOnly, async (req, res) => {
+    res.status(201).json(await users.create(parseBody(userCreateSchema, req)))
+  })
+  router.patch('/users/:id', adminOnly, async (req, res) => {
+    const { id } = parseParams(idParamsSchema, req)
+    res.json(await users.update(id, parseBody(userUpdateSchema, req), req.user!.id))
+  })
+  return router
+}
