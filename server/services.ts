@@ -8,6 +8,7 @@ import { BuildSheetService } from './builds/build-sheet.service'
 import { ExportService } from './imports/export.service'
 import { FitGraphIndex } from './fitment/fit-graph'
 import { FitmentService } from './fitment/fitment.service'
+import { InferredFits } from './fitment/inferred-fits'
 import { GraphService } from './fitment/graph.service'
 import { LinkService } from './fitment/link.service'
 import { ImportService } from './imports/import.service'
@@ -28,7 +29,7 @@ export function createServices(dataSource: DataSource, config: AppConfig, rules:
     parts,
     graphIndex,
     modifications,
-    fitment: new FitmentService(dataSource, parts, graphIndex, rules, modifications),
+    fitment: new FitmentService(parts, graphIndex, new InferredFits(dataSource, rules), modifications),
     graph: new GraphService(parts, graphIndex),
     evaluation,
     completion,
