@@ -39,8 +39,13 @@ export class FitmentService {
     const members = graph.classOf(entity.id)
     const reviewed = this.reviewedFits(graph, entity.id)
     const inferred = query.inferred && isSlotId(entity.kind)
-      ? await this.inferred.find(entity.kind, entity.attributes, entity.yearTo, new Set([...members, ...reviewed.keys()]), query)
-      : { found: [], truncated: [] }
+      ? await this.inferred.find(entity.kind, entity.attributes, entity.yearTo, new Set([...members, ...reviewed.keys()]), {
+          relation: query.relation,
+          kind: query.kind,
+          offset: 0,
+          limit: query.inferredLimit,
+        })
+      : { found: [], groups: [] }
     const all = [...reviewed.values(), ...inferred.found].filter(
       (found) =>
         (!query.relation || found.relation === query.relation) &&
@@ -64,7 +69,9 @@ export class FitmentService {
       part: byNumber.get(entity.partNumber)!,
       identical: members.filter((id) => id !== entity.id).map((id) => byNumber.get(graph.part(id).partNumber)!),
       results,
-      truncated: inferred.truncated,
+      truncated: inferred.groups
+        .filter((group) => group.total > query.inferredLimit)
+        .map((group) => ({ ...group, shown: query.inferredLimit })),
     }
   }
 

@@ -1,6 +1,6 @@
 import type { DataSource } from 'typeorm'
 import { matingSlots, type SlotId } from '../../shared/build-template'
-import type { ExplanationStep, FitsResponse, Relation } from '../../shared/schemas/fitment'
+import type { ExplanationStep, Relation } from '../../shared/schemas/fitment'
 import type { PartAttributes } from '../../shared/schemas/part-attributes'
 import type { PartKind } from '../../shared/schemas/part-kinds'
 import { buildFacts } from '../reasoning/facts'
@@ -10,8 +10,10 @@ import { summariseOutcomes, type RuleSummary } from '../reasoning/rule-summary'
 import type { Found } from './found'
 
 type RuleCandidate = { id: number; kind: PartKind; attributes: string; yearTo: number | null }
-type Truncated = FitsResponse['truncated']
-export type InferredQuery = { relation?: Relation; kind?: PartKind; inferredLimit: number }
+/** One page of each (kind, relation) group: the items at [offset, offset + limit) in part-number order. */
+export type InferredQuery = { relation?: Relation; kind?: PartKind; offset: number; limit: number }
+/** The page's answers, and every group's honest total (parts in `exclude` never count). */
+export type InferredAnswer = { found: Found[]; groups: { kind: SlotId; relation: Relation; total: number }[] }
 
 /** Fits the rules infer from attributes, among the parts of the kinds a part mates with. */
 export class InferredFits {
@@ -22,7 +24,7 @@ export class InferredFits {
 
   /**
    * Parts of mating kinds whose pair the rules decide from attributes alone,
-   * at most `inferredLimit` per kind and relation. Parts with the same
+   * one page per kind and relation. Parts with the same
    * attributes get the same answer, so each distinct set is judged once.
    */
   async find(
@@ -31,9 +33,9 @@ export class InferredFits {
     yearTo: number | null,
     exclude: Set<number>,
     query: InferredQuery,
-  ): Promise<{ found: Found[]; truncated: Truncated }> {
+  ): Promise<InferredAnswer> {
     const kinds = matingSlots(kind).filter((other) => this.rules.hasPairRules(kind, other) && (!query.kind || query.kind === other))
-    if (kinds.length === 0) return { found: [], truncated: [] }
+    if (kinds.length === 0) return { found: [], groups: [] }
     const candidates = (await this.dataSource.query(
       `SELECT id, kind, attributes, yearTo FROM part WHERE kind IN (${kinds.map(() => '?').join(',')}) ORDER BY partNumber`,
       kinds,
@@ -57,7 +59,7 @@ export class InferredFits {
       const countKey = `${otherKind}|${summary.relation}`
       const count = (counts.get(countKey) ?? 0) + 1
       counts.set(countKey, count)
-      if (count > query.inferredLimit) continue
+      if (count <= query.offset || count > query.offset + query.limit) continue
       found.push({
         partId: candidate.id,
         relation: summary.relation,
@@ -71,12 +73,10 @@ export class InferredFits {
         ],
       })
     }
-    const truncated = [...counts]
-      .filter(([, total]) => total > query.inferredLimit)
-      .map(([key, total]) => {
-        const [otherKind, relation] = key.split('|') as [SlotId, Relation]
-        return { kind: otherKind, relation, shown: query.inferredLimit, total }
-      })
-    return { found, truncated }
+    const groups = [...counts].map(([key, total]) => {
+      const [otherKind, relation] = key.split('|') as [SlotId, Relation]
+      return { kind: otherKind, relation, total }
+    })
+    return { found, groups }
   }
 }
