@@ -1,5 +1,6 @@
 export * from './units'
 export * from './compression'
+export * from './quench'
 export * from './displacement'
 export * from './injectors'
 export * from './fasteners'
