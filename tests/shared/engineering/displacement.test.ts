@@ -7,7 +7,10 @@ import { ccToIn3, inToMm } from '../../../shared/engineering/units'
 const CC_TOLERANCE = 0.001
 
 describe('displacementCc', () => {
-  // Heywood, Internal Combustion Engine Fundamentals, sec. 2.2; NIST SP 811 (2008), Appendix B.8 [published]
+  // Formula: Heywood, Internal Combustion Engine Fundamentals, sec. 2.2; 1 in³ = 16.387064 cc exactly,
+  // NIST SP 811 (2008), Appendix B.8 [published]. Values hand-worked:
+  //   4 · π/4 · 86² · 86 mm³ = 4 · 499,557 mm³ = 1,998.229 cc; / 16.387064 = 121.939 in³
+  //   8 · π/4 · 4.000² · 3.480 in³ = 8 · 0.785398 · 16 · 3.48 = 349.848 in³; · 16.387064 = 5,732.978 cc
   it.each([
     ['4 × 86 × 86 mm', 4, 86, 86, 1998.229, 121.939],
     ['8 × 4.000 × 3.480 in', 8, inToMm(4.0), inToMm(3.48), 5732.978, 349.848],
