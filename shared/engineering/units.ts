@@ -38,3 +38,9 @@ export const barToPsi = (bar: number): number => (bar * KPA_PER_BAR) / KPA_PER_P
 
 export const lbfToN = (lbf: number): number => lbf * N_PER_LBF
 export const nToLbf = (n: number): number => n / N_PER_LBF
+
+/** Exact: 1 µin = 0.0254 µm. Surface finish (Ra) is often quoted in microinches in the trade. */
+export const UM_PER_MICROINCH = 0.0254
+
+export const microinchToUm = (microinch: number): number => microinch * UM_PER_MICROINCH
+export const umToMicroinch = (um: number): number => um / UM_PER_MICROINCH

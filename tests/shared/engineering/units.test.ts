@@ -21,7 +21,9 @@ import {
   psiToBar,
   W_PER_HP,
   lbfToN,
+  microinchToUm,
   nToLbf,
+  umToMicroinch,
 } from '../../../shared/engineering/units'
 
 const EXACT = 1e-12
@@ -84,6 +86,8 @@ describe('conversion functions against mathjs as reference', () => {
     ['nmToLbfFt', nmToLbfFt, 'N m', 'lbf ft', ROUNDED],
     ['psiToBar', psiToBar, 'psi', 'bar', ROUNDED],
     ['barToPsi', barToPsi, 'bar', 'psi', ROUNDED],
+    ['microinchToUm', (x: number) => microinchToUm(x * 1e6), 'inch', 'micrometer', EXACT],
+    ['umToMicroinch', (x: number) => umToMicroinch(x) / 1e6, 'micrometer', 'inch', EXACT],
     ['lbfToN', lbfToN, 'lbf', 'N', EXACT],
     ['nToLbf', nToLbf, 'N', 'lbf', EXACT],
   ]
