@@ -12,11 +12,11 @@ export const CC_PER_IN3 = 16.387064
 export const KG_PER_LB = 0.45359237
 /** Exact: pound-force at standard gravity 9.80665 m/s². */
 export const N_PER_LBF = 4.4482216152605
-/** Mechanical (imperial) horsepower, rounded; metric PS (735.5 W) is a different unit. */
+/** Mechanical horsepower, 550 ft·lbf/s, rounded as NIST SP 811 B.8 prints it; metric PS (735.5 W) is a different unit. */
 export const W_PER_HP = 745.6999
-/** Rounded. */
+/** Rounded as NIST SP 811 B.8 prints it. */
 export const NM_PER_LBFFT = 1.355818
-/** Rounded. */
+/** Rounded as NIST SP 811 B.8 prints it. */
 export const KPA_PER_PSI = 6.894757
 /** Exact. */
 export const KPA_PER_BAR = 100
