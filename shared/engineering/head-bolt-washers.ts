@@ -2,7 +2,7 @@
  * Head bolts over bosses of different heights. Where one boss sits lower than the rest (a later
  * head, a repaired corner), the same bolt projects further there and can bottom in its blind hole;
  * hardened washers under THAT bolt only take up the difference, as long as enough thread still
- * engages [common practice, TRADE.md §4]. A washer cannot lengthen a bolt that is already short,
+ * engages [common practice]. A washer cannot lengthen a bolt that is already short,
  * and torque-to-yield bolts never get washers: extra grip voids the torque-angle specification.
  * In those cases the answer is the bolt length that fits. Lengths in mm.
  */

@@ -13,8 +13,7 @@ const RATIO_TOLERANCE = 0.005
 const CC_TOLERANCE = 0.001
 // The formula is Heywood's (Internal Combustion Engine Fundamentals, sec. 2.2 [published]). Heywood
 // prints no worked example for these builds, so every check value below is hand-worked from first
-// principles in the comment beside it (π/4 = 0.785398) and agrees with the independent computation
-// in TRADE.md §1; none was produced by running this code.
+// principles in the comment beside it (π/4 = 0.785398); none was produced by running this code.
 const HEYWOOD = 'formula: Heywood sec. 2.2 [published]; values hand-worked'
 
 function within(actual: number, expected: number, tolerance: number): void {

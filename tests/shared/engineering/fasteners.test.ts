@@ -14,7 +14,7 @@ import { inToMm, lbfToN, nmToLbfFt } from '../../../shared/engineering/units'
 
 // T = K·D·F: Shigley's Mechanical Engineering Design, 10th ed., sec. 8-8 [published]; the nut factors
 // (0.30 plain, 0.20 zinc, 0.18 lubricated) are its torque-factor table (table number from memory).
-// Blind-hole fit and engagement are common practice (TRADE.md §4). Values hand-worked beside each check.
+// Blind-hole fit and engagement are common practice. Values hand-worked beside each check.
 const SHIGLEY = "Shigley's Mechanical Engineering Design, 10th ed., sec. 8-8 [published]"
 const MATERIALS: ThreadMaterial[] = ['steel', 'cast-iron', 'aluminium']
 
@@ -110,7 +110,7 @@ describe('minimum thread engagement (common practice)', () => {
 
 describe('checkHeadBolt in a blind hole (common practice)', () => {
   // grip 68 + 1.0 + 2.0 = 71; projection 110 − 71 = 39; engagement 2.0 · 10 = 20; deepest 35 − 2 · 1.5 = 32;
-  // 39 > 32 bottoms by 7 mm; lengths 71 + 20 = 91 to 71 + 32 = 103 mm fit (TRADE.md §4, common practice)
+  // 39 > 32 bottoms by 7 mm; lengths 71 + 20 = 91 to 71 + 32 = 103 mm fit (common practice)
   it('M10×1.5 into aluminium, 110 mm bolt, 71 mm grip: projection 39 > 32 mm, bottoms; 91–103 mm fit', () => {
     const check = checkHeadBolt(m10IntoAluminium())
     within(check.gripMm, 71, 1e-9)

@@ -1,8 +1,8 @@
 import { describe, expect, it } from 'vitest'
 import { planHeadBoltWashers, type WasherStackInput } from '../../../shared/engineering/head-bolt-washers'
 
-// Blind-hole rule and washers under one bolt: common practice (TRADE.md §4); no published source.
-// The bolt of TRADE.md §4: M10×1.5 into aluminium, 110 mm long, 1.0 mm compressed gasket, 2.0 mm
+// Blind-hole rule and washers under one bolt: common practice; no published source.
+// The bolt of the fastener tests: M10×1.5 into aluminium, 110 mm long, 1.0 mm compressed gasket, 2.0 mm
 // standard washer, 35 mm tapped depth. Hand-worked limits: engagement ≥ 2.0 · 10 = 20 mm; projection
 // ≤ 35 − 2 · 1.5 = 32 mm; so at a boss of height h a bolt of (h + 3 + 20) to (h + 3 + 32) mm fits.
 function head(change: Partial<WasherStackInput> = {}): WasherStackInput {

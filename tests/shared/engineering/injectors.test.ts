@@ -13,7 +13,7 @@ import {
 import { hpToKw } from '../../../shared/engineering/units'
 
 // The sizing formula and its defaults (BSFC 0.50 lb/hp·h, 80 % duty, 0.72 g/cm³) are common practice
-// (TRADE.md §3); every check value is hand-worked in the comment beside it.
+// every check value is hand-worked in the comment beside it.
 const TOLERANCE = 0.05
 
 function within(actual: number, expected: number, tolerance = TOLERANCE): void {

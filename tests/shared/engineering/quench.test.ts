@@ -3,7 +3,7 @@ import { describe, expect, it } from 'vitest'
 import { checkQuench, quenchMm, TYPICAL_QUENCH_MM } from '../../../shared/engineering/quench'
 
 // Quench = deck clearance + compressed gasket: geometry, hand-worked. The band is common practice
-// (the trade's 0.035–0.045 in, rounded to 0.9–1.15 mm in TRADE.md §1); no published source.
+// (the trade's 0.035–0.045 in, rounded to 0.9–1.15 mm); no published source.
 const inch = (inches: number): number => unit(inches, 'inch').toNumber('mm')
 
 function within(actual: number, expected: number, tolerance = 1e-9): void {
@@ -12,7 +12,7 @@ function within(actual: number, expected: number, tolerance = 1e-9): void {
 
 describe('quenchMm (geometry, hand-worked)', () => {
   it.each([
-    // 0.2 + 1.2 = 1.4 mm (the 86 × 86 mm bottom end of TRADE.md §1)
+    // 0.2 + 1.2 = 1.4 mm (the 86 × 86 mm bottom end of the compression tests)
     ['piston 0.2 mm below deck, 1.2 mm gasket', 0.2, 1.2, 1.4],
     // a proud piston takes its height off the gasket: −0.1 + 1.0 = 0.9 mm
     ['piston 0.1 mm proud, 1.0 mm gasket', -0.1, 1.0, 0.9],

@@ -40,7 +40,7 @@ describe(`two-pulley belt geometry (${ISO_9010})`, () => {
     within(centreDistanceForBeltMm({ ...thirtyDegrees, beltTeeth: 68.7198 }), THIRTY_DEGREE_CENTRE_MM, 0.001)
   })
 
-  // 21 and 42 teeth at 9.525 mm (TRADE.md §5): d = 63.670, D = 127.340 mm, C = 300 mm.
+  // 21 and 42 teeth at 9.525 mm: d = 63.670, D = 127.340 mm, C = 300 mm.
   //   sin φ = 63.670/600 = 0.106117, φ = 0.106317 rad
   //   2C·cos φ = 600 · 0.994354 = 596.612;  π(D+d)/2 = (21+42) · 9.525/2 = 300.038;  φ(D−d) = 6.769
   //   L = 903.419 mm = 94.85 teeth. (The approximation gives 903.416: the 0.001 mm tolerance tells them apart.)
