@@ -83,13 +83,3 @@ export function chamberForRatio(input: Omit<CompressionInput, 'chamberCc'>, targ
   }
   return chamberCc
 }
-
-/** Squish band that promotes turbulence without contact at speed [common practice]. */
-export const TYPICAL_QUENCH_MM = { min: 0.9, max: 1.15 } as const
-
-/** Piston-to-head gap at TDC: deck clearance plus compressed gasket thickness. */
-export function quenchMm(deckClearanceMm: number, gasketThicknessMm: number): number {
-  requireFinite(deckClearanceMm, 'deckClearanceMm')
-  requireNonNegative(gasketThicknessMm, 'gasketThicknessMm')
-  return deckClearanceMm + gasketThicknessMm
-}

@@ -7,7 +7,7 @@ import { requireFinite, requireNonNegative, requirePositive } from './guards'
 
 export type ThreadMaterial = 'steel' | 'cast-iron' | 'aluminium'
 
-/** Engagement as a multiple of nominal diameter: softer parent metal needs more threads to match the bolt. */
+/** Engagement as a multiple of nominal diameter [common practice]: softer parent metal needs more threads to match the bolt. */
 export const MIN_ENGAGEMENT_FACTOR: Record<ThreadMaterial, number> = {
   steel: 1.0,
   'cast-iron': 1.5,
@@ -63,7 +63,7 @@ export type HeadBoltInput = {
   washerThicknessMm: number
   tappedDepthMm: number
   material: ThreadMaterial
-  /** Unthreaded run-out left at the bottom of a blind hole; 2 pitches by default. */
+  /** Unthreaded run-out left at the bottom of a blind hole; 2 pitches by default [common practice]. */
   clearancePitches?: number
 }
 

@@ -6,11 +6,14 @@
 import { requireNonNegative, requirePositive, requirePositiveInteger } from './guards'
 import { KG_PER_LB, hpToKw, kwToHp } from './units'
 
-/** The usual assumption for a naturally aspirated petrol engine; pass a measured figure when there is one. */
+/** The usual assumption for a naturally aspirated petrol engine [common practice]; pass a measured figure when there is one. */
 export const DEFAULT_BSFC_LB_PER_HP_H = 0.5
-/** Headroom so the injector never runs static at full load. */
+/** Headroom so the injector never runs static at full load [common practice]. */
 export const DEFAULT_MAX_DUTY = 0.8
-/** The density behind the trade's "lb/h × 10.5 = cc/min" shortcut. */
+/**
+ * The density behind the trade's "lb/h × 10.5 = cc/min" shortcut [common practice]; pump petrol runs
+ * about 0.72–0.775 g/cm³ at 15 °C (from memory), so pass the fuel's own figure when it is known.
+ */
 export const GASOLINE_DENSITY_G_PER_CC = 0.72
 
 const G_PER_LB = KG_PER_LB * 1000

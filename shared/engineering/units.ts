@@ -12,11 +12,11 @@ export const CC_PER_IN3 = 16.387064
 export const KG_PER_LB = 0.45359237
 /** Exact: pound-force at standard gravity 9.80665 m/s². */
 export const N_PER_LBF = 4.4482216152605
-/** Mechanical (imperial) horsepower, rounded; metric PS (735.5 W) is a different unit. */
+/** Mechanical horsepower, 550 ft·lbf/s, rounded as NIST SP 811 B.8 prints it; metric PS (735.5 W) is a different unit. */
 export const W_PER_HP = 745.6999
-/** Rounded. */
+/** Rounded as NIST SP 811 B.8 prints it. */
 export const NM_PER_LBFFT = 1.355818
-/** Rounded. */
+/** Rounded as NIST SP 811 B.8 prints it. */
 export const KPA_PER_PSI = 6.894757
 /** Exact. */
 export const KPA_PER_BAR = 100
@@ -38,3 +38,9 @@ export const barToPsi = (bar: number): number => (bar * KPA_PER_BAR) / KPA_PER_P
 
 export const lbfToN = (lbf: number): number => lbf * N_PER_LBF
 export const nToLbf = (n: number): number => n / N_PER_LBF
+
+/** Exact: 1 µin = 0.0254 µm. Surface finish (Ra) is often quoted in microinches in the trade. */
+export const UM_PER_MICROINCH = 0.0254
+
+export const microinchToUm = (microinch: number): number => microinch * UM_PER_MICROINCH
+export const umToMicroinch = (um: number): number => um / UM_PER_MICROINCH

@@ -3,7 +3,6 @@ import { describe, expect, it } from 'vitest'
 import {
   checkHeadBolt,
   type HeadBoltInput,
-  MIN_ENGAGEMENT_FACTOR,
   minThreadEngagementMm,
   preloadForTorqueN,
   spacerFix,
@@ -13,6 +12,9 @@ import {
 } from '../../../shared/engineering/fasteners'
 import { inToMm, lbfToN, nmToLbfFt } from '../../../shared/engineering/units'
 
+// T = K·D·F: Shigley's Mechanical Engineering Design, 10th ed., sec. 8-8 [published]; the nut factors
+// (0.30 plain, 0.20 zinc, 0.18 lubricated) are its torque-factor table (table number from memory).
+// Blind-hole fit and engagement are common practice. Values hand-worked beside each check.
 const SHIGLEY = "Shigley's Mechanical Engineering Design, 10th ed., sec. 8-8 [published]"
 const MATERIALS: ThreadMaterial[] = ['steel', 'cast-iron', 'aluminium']
 
@@ -36,16 +38,19 @@ function m10IntoAluminium(change: Partial<HeadBoltInput> = {}): HeadBoltInput {
 }
 
 describe(`torque–tension T = K·D·F (${SHIGLEY})`, () => {
+  // 0.20 · 0.5 in · 12,000 lbf = 1,200 lbf·in = 100 lbf·ft; · 1.355818 = 135.582 N·m
   it('K 0.20, D 0.5 in, F 12,000 lbf gives 100 lbf·ft = 135.582 N·m', () => {
     const torqueNm = tighteningTorqueNm({ nutFactor: 0.2, diameterMm: inToMm(0.5), preloadN: lbfToN(12_000) })
     within(torqueNm, 135.582, 0.001)
     within(nmToLbfFt(torqueNm), 100, 0.001)
   })
 
+  // 0.20 · 0.010 m · 30,000 N = 60 N·m
   it('K 0.20, M10, 30 kN gives 60.0 N·m', () => {
     within(tighteningTorqueNm({ nutFactor: 0.2, diameterMm: 10, preloadN: 30_000 }), 60.0, 0.05)
   })
 
+  // 80 N·m / (0.15 · 0.012 m) = 80 / 0.0018 = 44,444 N
   it('80 N·m, K 0.15, M12 gives 44.44 kN', () => {
     within(preloadForTorqueN({ torqueNm: 80, nutFactor: 0.15, diameterMm: 12 }) / 1000, 44.44, 0.005)
   })
@@ -79,8 +84,9 @@ describe(`torque–tension T = K·D·F (${SHIGLEY})`, () => {
     )
   })
 
-  it('a lubricated thread (K 0.18) needs less torque than a zinc one (K 0.20)', () => {
-    expect(torqueForNewLubricant(60, 0.2, 0.18)).toBeLessThan(60)
+  // 60 N·m · 0.18 / 0.20 = 54 N·m: a lubricated thread needs less torque for the same preload
+  it('60 N·m on a zinc thread (K 0.20) becomes 54 N·m lubricated (K 0.18)', () => {
+    within(torqueForNewLubricant(60, 0.2, 0.18), 54, 1e-9)
   })
 
   it.each([
@@ -97,13 +103,14 @@ describe('minimum thread engagement (common practice)', () => {
     ['steel', 1.0, 10],
     ['cast-iron', 1.5, 15],
     ['aluminium', 2.0, 20],
-  ] as const)('%s: %f × D, so an M10 needs %f mm', (material, factor, expectedMm) => {
-    expect(MIN_ENGAGEMENT_FACTOR[material]).toBe(factor)
+  ] as const)('%s: %f × D, so an M10 needs %f mm', (material, _factor, expectedMm) => {
     within(minThreadEngagementMm(10, material), expectedMm, 1e-9)
   })
 })
 
 describe('checkHeadBolt in a blind hole (common practice)', () => {
+  // grip 68 + 1.0 + 2.0 = 71; projection 110 − 71 = 39; engagement 2.0 · 10 = 20; deepest 35 − 2 · 1.5 = 32;
+  // 39 > 32 bottoms by 7 mm; lengths 71 + 20 = 91 to 71 + 32 = 103 mm fit (common practice)
   it('M10×1.5 into aluminium, 110 mm bolt, 71 mm grip: projection 39 > 32 mm, bottoms; 91–103 mm fit', () => {
     const check = checkHeadBolt(m10IntoAluminium())
     within(check.gripMm, 71, 1e-9)
@@ -128,6 +135,7 @@ describe('checkHeadBolt in a blind hole (common practice)', () => {
     expect(check.extraGripNeededMm > 0).toBe(status === 'bottoms')
   })
 
+  // 35 − 1 · 1.5 = 33.5 mm
   it('honours a different clearance allowance', () => {
     within(checkHeadBolt(m10IntoAluminium({ clearancePitches: 1 })).maxProjectionMm, 33.5, 1e-9)
   })

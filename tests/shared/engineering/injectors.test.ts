@@ -4,10 +4,7 @@ import { describe, expect, it } from 'vitest'
 import {
   bsfcToGPerKwh,
   ccPerMinToLbPerHour,
-  DEFAULT_BSFC_LB_PER_HP_H,
-  DEFAULT_MAX_DUTY,
   flowAtPressure,
-  GASOLINE_DENSITY_G_PER_CC,
   injectorFlowNeededLbH,
   injectorHeadroom,
   lbPerHourToCcPerMin,
@@ -15,6 +12,8 @@ import {
 } from '../../../shared/engineering/injectors'
 import { hpToKw } from '../../../shared/engineering/units'
 
+// The sizing formula and its defaults (BSFC 0.50 lb/hp·h, 80 % duty, 0.72 g/cm³) are common practice
+// every check value is hand-worked in the comment beside it.
 const TOLERANCE = 0.05
 
 function within(actual: number, expected: number, tolerance = TOLERANCE): void {
@@ -22,16 +21,17 @@ function within(actual: number, expected: number, tolerance = TOLERANCE): void {
 }
 
 describe('injector sizing (common practice formula)', () => {
+  // 300 · 0.50 / (6 · 0.80) = 150 / 4.8 = 31.25 lb/h
   it('300 hp, BSFC 0.50, 6 injectors, duty 0.80 needs 31.25 lb/h per injector', () => {
     within(injectorFlowNeededLbH({ powerHp: 300, bsfc: 0.5, injectors: 6, maxDuty: 0.8 }), 31.25)
   })
 
-  it('defaults to BSFC 0.5 and 80 % duty', () => {
-    expect(DEFAULT_BSFC_LB_PER_HP_H).toBe(0.5)
-    expect(DEFAULT_MAX_DUTY).toBe(0.8)
+  it('defaults to BSFC 0.5 and 80 % duty (common practice): 300 hp on 6 injectors is again 31.25 lb/h', () => {
     within(injectorFlowNeededLbH({ powerHp: 300, injectors: 6 }), 31.25)
   })
 
+  // 440 cc/min · 0.72 g/cm³ · 60 min/h = 19,008 g/h / 453.59237 g/lb = 41.905 lb/h;
+  // 41.905 · 6 · 0.8 / 0.5 = 402.3 hp
   it('six 440 cc/min injectors (41.905 lb/h) at duty 0.8, BSFC 0.5 support 402.3 hp', () => {
     const flowLbH = ccPerMinToLbPerHour(440)
     within(flowLbH, 41.905, 0.001)
@@ -65,12 +65,13 @@ describe('injector sizing (common practice formula)', () => {
 })
 
 describe('mass flow to volume flow (common practice)', () => {
-  it('the familiar × 10.5 factor is 10.4998 at 0.720 g/cm³', () => {
-    expect(GASOLINE_DENSITY_G_PER_CC).toBe(0.72)
-    // Compared to the printed digits, tighter than the section tolerance so the factor itself is pinned.
+  // The trade's shortcut "lb/h × 10.5 = cc/min" (common practice) is 453.59237 / (60 · 0.72) = 10.49982
+  // by hand, so the default density is the one behind it; the tolerance is tighter than the section's.
+  it('the default density reproduces the trade\'s × 10.5 shortcut: 1 lb/h is 10.4998 cc/min', () => {
     within(lbPerHourToCcPerMin(1), 10.4998, 0.00005)
   })
 
+  // 31.25 · 453.59237 / (60 · 0.72) = 14,174.76 / 43.2 = 328.12;  / (60 · 0.745) = 14,174.76 / 44.7 = 317.11
   it.each([
     [31.25, 0.72, 328.12],
     [31.25, 0.745, 317.11],
@@ -95,6 +96,7 @@ describe('mass flow to volume flow (common practice)', () => {
     )
   })
 
+  // 0.5 · 453.59237 g / 0.7456999 kW = 226.796 / 0.7457 = 304.14 g/kWh
   it('BSFC 0.50 lb/hp·h is 304.14 g/kWh', () => {
     within(bsfcToGPerKwh(0.5), 304.14, 0.005)
     // mathjs as reference for the same conversion
@@ -102,8 +104,9 @@ describe('mass flow to volume flow (common practice)', () => {
   })
 })
 
-// Orifice law, published in any fluid-mechanics text; test terms per SAE J1832 [published]
+// Orifice law Q ∝ √ΔP [published in any fluid-mechanics text]; test terms per SAE J1832 [published]
 describe('flowAtPressure (orifice law [published])', () => {
+  // 440 · √(4/3) = 440 · 1.154701 = 508.07 cc/min
   it('440 cc/min rated at 3.0 bar flows 508.07 cc/min at 4.0 bar', () => {
     within(flowAtPressure(440, 3.0, 4.0), 508.07)
   })
@@ -145,7 +148,8 @@ describe('injectorHeadroom (common practice formula with the orifice law)', () =
     })
     within(result.neededCcMin, 328.12)
     within(result.availableCcMin, 508.07)
-    within(result.headroomPct, (508.07 / 328.12 - 1) * 100)
+    // 508.07 / 328.12 = 1.5484: 54.84 % to spare
+    within(result.headroomPct, 54.84)
   })
 
   it('is negative exactly when the injectors flow less than the target needs', () => {
@@ -163,10 +167,11 @@ describe('injectorHeadroom (common practice formula with the orifice law)', () =
     )
   })
 
+  // 200 kW / 0.7456999 = 268.204 hp; · 0.5 / (4 · 0.8) = 41.907 lb/h;
+  // · 453.59237 / (60 · 0.72) = 440.02 cc/min, / (60 · 0.745) = 425.25 cc/min
   it('passes a denser fuel through: fewer cc/min are needed for the same mass', () => {
     const base = { targetPowerKw: 200, injectors: 4, flowCcMin: 550, ratedPressureBar: 3, railPressureBar: 3 }
-    const light = injectorHeadroom(base)
-    const dense = injectorHeadroom({ ...base, densityGPerCc: 0.745 })
-    within(dense.neededCcMin, (light.neededCcMin * 0.72) / 0.745, 1e-9)
+    within(injectorHeadroom(base).neededCcMin, 440.02)
+    within(injectorHeadroom({ ...base, densityGPerCc: 0.745 }).neededCcMin, 425.25)
   })
 })

@@ -21,7 +21,9 @@ import {
   psiToBar,
   W_PER_HP,
   lbfToN,
+  microinchToUm,
   nToLbf,
+  umToMicroinch,
 } from '../../../shared/engineering/units'
 
 const EXACT = 1e-12
@@ -48,22 +50,25 @@ describe('conversion constants against mathjs as reference', () => {
   })
 })
 
-// NIST SP 811 (2008), Appendix B.8 [published]: exact definitions and the rounded trade factors.
-describe('conversion constants as defined', () => {
+// Each factor rebuilt by hand from the defining figures, not from the constants it checks:
+// 1 in = 25.4 mm and 1 lb = 0.45359237 kg exactly (international yard and pound, 1959), standard
+// gravity 9.80665 m/s² (CGPM 1901), 1 ft = 0.3048 m, 1 hp = 550 ft·lbf/s; the rounded trade factors
+// match NIST SP 811 (2008), Appendix B.8 [published] to the printed digits.
+const STANDARD_GRAVITY = 9.80665
+const LBF_N = 0.45359237 * STANDARD_GRAVITY // 4.448 221 615 260 5 N
+describe('conversion constants rebuilt from their definitions', () => {
   it.each([
-    ['MM_PER_IN', MM_PER_IN, 25.4],
-    ['CC_PER_IN3', CC_PER_IN3, 16.387064],
-    ['KG_PER_LB', KG_PER_LB, 0.45359237],
-    ['N_PER_LBF', N_PER_LBF, 4.4482216152605],
-    ['W_PER_HP', W_PER_HP, 745.6999],
-    ['NM_PER_LBFFT', NM_PER_LBFFT, 1.355818],
-    ['KPA_PER_PSI', KPA_PER_PSI, 6.894757],
-    ['KPA_PER_BAR', KPA_PER_BAR, 100],
-  ])('%s is %f', (_name, constant, value) => {
-    expect(constant).toBe(value)
+    ['CC_PER_IN3 = 2.54³', CC_PER_IN3, 2.54 ** 3, EXACT],
+    ['N_PER_LBF = 0.45359237 kg · 9.80665 m/s²', N_PER_LBF, LBF_N, EXACT],
+    ['NM_PER_LBFFT = 1 lbf · 0.3048 m = 1.355 818 (NIST B.8)', NM_PER_LBFFT, LBF_N * 0.3048, ROUNDED],
+    ['W_PER_HP = 550 ft·lbf/s = 745.699 9 W (NIST B.8)', W_PER_HP, 550 * 0.3048 * LBF_N, ROUNDED],
+    ['KPA_PER_PSI = 1 lbf / (0.0254 m)² = 6.894 757 kPa (NIST B.8)', KPA_PER_PSI, LBF_N / 0.0254 ** 2 / 1000, ROUNDED],
+    ['KPA_PER_BAR = 10⁵ Pa', KPA_PER_BAR, 1e5 / 1000, EXACT],
+  ])('%s', (_name, constant, definition, tolerance) => {
+    expectRelativelyClose(constant, definition, tolerance)
   })
 
-  it('a US gallon of 231 in³ is 3.785411784 L, tying CC_PER_IN3 to the exact inch', () => {
+  it('a US gallon of 231 in³ is 3.785411784 L (NIST B.8), tying CC_PER_IN3 to the exact inch', () => {
     expect(231 * CC_PER_IN3).toBeCloseTo(3785.411784, 9)
     expect(MM_PER_IN ** 3 / 1000).toBeCloseTo(CC_PER_IN3, 12)
   })
@@ -81,6 +86,8 @@ describe('conversion functions against mathjs as reference', () => {
     ['nmToLbfFt', nmToLbfFt, 'N m', 'lbf ft', ROUNDED],
     ['psiToBar', psiToBar, 'psi', 'bar', ROUNDED],
     ['barToPsi', barToPsi, 'bar', 'psi', ROUNDED],
+    ['microinchToUm', (x: number) => microinchToUm(x * 1e6), 'inch', 'micrometer', EXACT],
+    ['umToMicroinch', (x: number) => umToMicroinch(x) / 1e6, 'micrometer', 'inch', EXACT],
     ['lbfToN', lbfToN, 'lbf', 'N', EXACT],
     ['nToLbf', nToLbf, 'N', 'lbf', EXACT],
   ]

@@ -16,10 +16,10 @@ function replaceAt(vin: string, index: number, char: string): string {
 
 describe(`vinCheckDigit and validateVin (${CHECK_DIGIT_RULE})`, () => {
   it.each([
-    ['1G4AH59H45G118341', '4', "the regulation's own sample, sum 411"],
-    ['11111111111111111', '1', 'all ones'],
-    ['1ZZAA11AXS1000000', 'X', 'sum 175, remainder 10 written X'],
-    ['1J9RP1A36A1644345', '6', 'sum 314'],
+    ['1G4AH59H45G118341', '4', "the regulation's own worked sample, sum 411 [published]"],
+    ['11111111111111111', '1', 'all ones: weights without position 9 add to 89, 89 mod 11 = 1 (hand-worked)'],
+    ['1ZZAA11AXS1000000', 'X', 'sum 175 = 15 · 11 + 10, remainder 10 written X (hand-worked)'],
+    ['1J9RP1A36A1644345', '6', "NHTSA's guide for new manufacturers, worked example, sum 314 [published]"],
   ])('%s has check digit %s (%s) and validates', (vin, digit) => {
     expect(vinCheckDigit(vin)).toBe(digit)
     expect(validateVin(vin)).toEqual({ valid: true, wellFormed: true, checkDigitOk: true, problems: [] })
