@@ -32,7 +32,7 @@ export async function prepareDatabase(config: AppConfig): Promise<Prepared> {
   // Rules first: a broken rule file stops start-up before anything is written.
   const rules = new RuleBook(loadRules(path.join(projectRoot, 'rules')))
   const dbPath = config.dbPath === ':memory:' ? ':memory:' : path.resolve(projectRoot, config.dbPath)
-  const dataSource = await openDatabase(dbPath)
+  const dataSource = await openDatabase(config.databaseUrl ? { type: 'postgres', url: config.databaseUrl } : { type: 'sqlite', path: dbPath })
   const services = createServices(dataSource, config, rules)
   await services.modifications.syncShipped(rules.loaded.modifications)
   const seeded = config.demo ? await seedDemo(dataSource, services, path.join(projectRoot, 'data', 'demo')) : false

@@ -44,12 +44,12 @@ export class ImportBatchEntity {
   @Column({ type: 'text', default: 'committed' })
   status!: ImportBatchStatus
 
-  @Column({ type: 'datetime', nullable: true })
+  @Column({ type: Date, nullable: true })
   revertedAt!: Date | null
 
   @Column({ type: 'text', nullable: true })
   revertedByName!: string | null
 
-  @CreateDateColumn({ type: 'datetime' })
+  @CreateDateColumn()
   createdAt!: Date
 }

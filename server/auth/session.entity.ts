@@ -14,6 +14,6 @@ export class SessionEntity implements ISession {
   @Column({ type: 'text' })
   json = ''
 
-  @DeleteDateColumn({ type: 'datetime', nullable: true })
+  @DeleteDateColumn({ nullable: true })
   destroyedAt?: Date
 }

@@ -1,3 +1,4 @@
+import { FLOAT_COLUMN } from '../db/column-types'
 import {
   Column,
   CreateDateColumn,
@@ -31,10 +32,10 @@ export class BuildSheetEntity {
   @Column({ type: 'simple-json' })
   slots!: Record<string, string>
 
-  @Column({ type: 'real', nullable: true })
+  @Column({ type: FLOAT_COLUMN, nullable: true })
   targetPowerKw!: number | null
 
-  @Column({ type: 'real', nullable: true })
+  @Column({ type: FLOAT_COLUMN, nullable: true })
   fuelOctane!: number | null
 
   @Column({ type: 'integer', nullable: true })
@@ -46,9 +47,9 @@ export class BuildSheetEntity {
   @Column({ type: 'text', default: '' })
   notes!: string
 
-  @CreateDateColumn({ type: 'datetime' })
+  @CreateDateColumn()
   createdAt!: Date
 
-  @UpdateDateColumn({ type: 'datetime' })
+  @UpdateDateColumn()
   updatedAt!: Date
 }

@@ -48,9 +48,9 @@ export class ModificationEntity {
   @Column({ type: 'integer', nullable: true })
   batchId!: number | null
 
-  @CreateDateColumn({ type: 'datetime' })
+  @CreateDateColumn()
   createdAt!: Date
 
-  @UpdateDateColumn({ type: 'datetime' })
+  @UpdateDateColumn()
   updatedAt!: Date
 }

@@ -50,9 +50,9 @@ export class PartEntity {
   @Column({ type: 'integer', nullable: true })
   batchId!: number | null
 
-  @CreateDateColumn({ type: 'datetime' })
+  @CreateDateColumn()
   createdAt!: Date
 
-  @UpdateDateColumn({ type: 'datetime' })
+  @UpdateDateColumn()
   updatedAt!: Date
 }

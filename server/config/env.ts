@@ -9,6 +9,10 @@ const envSchema = z.object({
   PORT: z.coerce.number().int().min(0).max(65535).default(3000),
   HOST: z.string().default('0.0.0.0'),
   FITWRIGHT_DB_PATH: z.string().min(1).default('data/fitwright.sqlite'),
+  FITWRIGHT_DATABASE_URL: z
+    .string()
+    .regex(/^postgres(ql)?:\/\//, 'Use a postgres:// address, or leave it unset for the embedded SQLite file.')
+    .optional(),
   FITWRIGHT_DEMO: flag.default(true),
   FITWRIGHT_SESSION_SECRET: z.string().min(16, 'Use at least 16 characters.').optional(),
   FITWRIGHT_ADMIN_EMAIL: z.email().optional(),
@@ -23,6 +27,8 @@ export type AppConfig = {
   port: number
   host: string
   dbPath: string
+  /** A PostgreSQL database shared by several servers; unset: the SQLite file at dbPath. */
+  databaseUrl?: string
   demo: boolean
   sessionSecret?: string
   importMaxBytes: number
@@ -46,6 +52,7 @@ export function loadConfig(env: NodeJS.ProcessEnv = process.env): AppConfig {
     port: value.PORT,
     host: value.HOST,
     dbPath: value.FITWRIGHT_DB_PATH,
+    databaseUrl: value.FITWRIGHT_DATABASE_URL,
     demo: value.FITWRIGHT_DEMO,
     sessionSecret: value.FITWRIGHT_SESSION_SECRET,
     importMaxBytes: value.FITWRIGHT_IMPORT_MAX_BYTES,

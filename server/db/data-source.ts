@@ -1,28 +1,40 @@
 import { DataSource } from 'typeorm'
 import { entities } from './entities'
-import { migrations } from './migrations'
+import { migrations as sqliteMigrations, postgresMigrations } from './migrations'
+
+/** Where the catalogue lives: the embedded SQLite file, or a PostgreSQL database shared by several servers. */
+export type DatabaseTarget = { type: 'sqlite'; path: string } | { type: 'postgres'; url: string }
 
 /**
- * SQLite through better-sqlite3. The schema comes from migrations only; WAL lets
- * readers go on while an import writes.
+ * The schema comes from migrations only (one list per driver, from the same
+ * entities). SQLite runs in WAL, so readers go on while an import writes.
  */
-export function createDataSource(databasePath: string): DataSource {
+export function createDataSource(target: DatabaseTarget): DataSource {
+  if (target.type === 'postgres') {
+    return new DataSource({
+      type: 'postgres',
+      url: target.url,
+      entities,
+      migrations: postgresMigrations,
+      synchronize: false,
+      extra: { max: 10 },
+    })
+  }
   return new DataSource({
     type: 'better-sqlite3',
-    database: databasePath,
+    database: target.path,
     entities,
-    migrations,
+    migrations: sqliteMigrations,
     synchronize: false,
-    enableWAL: databasePath !== ':memory:',
+    enableWAL: target.path !== ':memory:',
     prepareDatabase: (db: { pragma: (sql: string) => unknown }) => {
       db.pragma('synchronous = NORMAL')
-      db.pragma('busy_timeout = 5000')
     },
   })
 }
 
-export async function openDatabase(databasePath: string): Promise<DataSource> {
-  const dataSource = createDataSource(databasePath)
+export async function openDatabase(target: DatabaseTarget | string): Promise<DataSource> {
+  const dataSource = createDataSource(typeof target === 'string' ? { type: 'sqlite', path: target } : target)
   await dataSource.initialize()
   await dataSource.runMigrations({ transaction: 'each' })
   return dataSource

@@ -1,7 +1,10 @@
 /**
  * Writes a migration with the SQL that brings the migrated schema up to the
  * entities (what `typeorm migration:generate` does), without a CLI config.
- * Usage: npx tsx server/db/generate-migration.ts <PascalName>
+ * Usage: npx tsx server/db/generate-migration.ts <PascalName> [--postgres]
+ * With --postgres it diffs against FITWRIGHT_DATABASE_URL (a scratch database:
+ * its migrations are run first) and writes to server/migrations/postgres/.
+ * Write both for every entity change.
  */
 import 'reflect-metadata'
 import { writeFileSync } from 'node:fs'
@@ -12,7 +15,13 @@ if (!name || !/^[A-Z][A-Za-z0-9]+$/.test(name)) {
   console.error('Give the migration a PascalCase name.')
   process.exit(1)
 }
-const dataSource = await openDatabase(':memory:')
+const postgres = process.argv.includes('--postgres')
+const url = process.env.FITWRIGHT_DATABASE_URL
+if (postgres && !url) {
+  console.error('Set FITWRIGHT_DATABASE_URL to a scratch PostgreSQL database.')
+  process.exit(1)
+}
+const dataSource = await openDatabase(postgres && url ? { type: 'postgres', url } : { type: 'sqlite', path: ':memory:' })
 const sql = await dataSource.driver.createSchemaBuilder().log()
 if (sql.upQueries.length === 0) {
   console.log('Schema is up to date; nothing to write.')
@@ -26,7 +35,7 @@ const down = sql.downQueries
   .map((q) => `    await queryRunner.query(${quote(q.query)})`)
   .join('\n')
 const className = `${name}${timestamp}`
-const file = `server/migrations/${timestamp}-${name}.ts`
+const file = `server/migrations/${postgres ? 'postgres/' : ''}${timestamp}-${name}.ts`
 writeFileSync(
   file,
   `import type { MigrationInterface, QueryRunner } from 'typeorm'
@@ -44,5 +53,5 @@ ${down}
 }
 `,
 )
-console.log(`Wrote ${file}; add ${className} to server/db/migrations.ts.`)
+console.log(`Wrote ${file}; add ${className} to ${postgres ? 'postgresMigrations' : 'migrations'} in server/db/migrations.ts.`)
 await dataSource.destroy()

@@ -1,6 +1,8 @@
 import type BetterSqlite3 from 'better-sqlite3'
 import type { DataSource, EntityManager } from 'typeorm'
+import type pg from 'pg'
 import type { Database } from './database'
+import { PostgresDatabase } from './postgres-database'
 import { SqliteDatabase } from './sqlite-database'
 
 function isDatabase(value: unknown): value is BetterSqlite3.Database {
@@ -25,15 +27,27 @@ export function sqliteConnection(source: DataSource | EntityManager): BetterSqli
   return connection
 }
 
-const ports = new WeakMap<DataSource, SqliteDatabase>()
+const ports = new WeakMap<DataSource, Database>()
 
 /** The data port of an initialised data source (one per data source, so every caller shares its turn-taking). */
-export function databaseOf(dataSource: DataSource): Database & Pick<SqliteDatabase, 'transactionSync'> {
+export function databaseOf(dataSource: DataSource): Database {
   let port = ports.get(dataSource)
   if (!port) {
-    port = new SqliteDatabase(sqliteConnection(dataSource))
+    if (dataSource.options.type === 'postgres') {
+      const pool = (dataSource.driver as unknown as { master?: pg.Pool }).master
+      if (!pool) throw new Error('The PostgreSQL data source is not initialised.')
+      port = new PostgresDatabase(pool)
+    } else {
+      port = new SqliteDatabase(sqliteConnection(dataSource))
+    }
     ports.set(dataSource, port)
   }
+  return port
+}
+
+function sqlitePort(dataSource: DataSource): SqliteDatabase {
+  const port = databaseOf(dataSource)
+  if (!(port instanceof SqliteDatabase)) throw new Error('This bulk write still needs the SQLite driver.')
   return port
 }
 
@@ -43,5 +57,5 @@ export function databaseOf(dataSource: DataSource): Database & Pick<SqliteDataba
  * nothing else can run on the shared connection while it holds it.
  */
 export async function inTransaction<T>(dataSource: DataSource, work: (db: BetterSqlite3.Database) => T): Promise<T> {
-  return databaseOf(dataSource).transactionSync(work)
+  return sqlitePort(dataSource).transactionSync(work)
 }

@@ -37,7 +37,9 @@ export class SqliteDatabase implements Database {
   readonly dialect = 'sqlite' as const
   private readonly statements = new Map<string, BetterSqlite3.Statement>()
   private readonly context = new AsyncLocalStorage<SqliteDatabase>()
-  private open: Promise<void> | null = null
+  /** The end of the line of transactions open or waiting; a statement from outside waits for the ones ahead of it. */
+  private queue: Promise<void> = Promise.resolve()
+  private waiting = 0
 
   constructor(readonly handle: BetterSqlite3.Database) {
     handle.pragma('busy_timeout = 0')
@@ -53,10 +55,10 @@ export class SqliteDatabase implements Database {
     return statement
   }
 
-  /** Waits for a transaction opened by someone else; statements inside one run at once. */
+  /** Waits for the transactions ahead (opened by someone else); statements inside one run at once. */
   private async turn(): Promise<void> {
-    if (this.context.getStore() === this) return
-    while (this.open) await this.open
+    if (this.waiting === 0 || this.context.getStore() === this) return
+    await this.queue
   }
 
   private async retrying<T>(work: () => T): Promise<T> {
@@ -94,9 +96,12 @@ export class SqliteDatabase implements Database {
 
   async transaction<T>(work: (tx: Database) => Promise<T>): Promise<T> {
     if (this.context.getStore() === this) return work(this)
-    await this.turn()
+    // Take a place in line synchronously, so nothing that starts after this call can slip in ahead.
+    const ahead = this.queue
     let release!: () => void
-    this.open = new Promise<void>((resolve) => (release = resolve))
+    this.queue = new Promise<void>((resolve) => (release = resolve))
+    this.waiting++
+    await ahead
     try {
       await this.retrying(() => this.handle.exec('BEGIN IMMEDIATE'))
       return await this.context.run(this, async () => {
@@ -110,7 +115,7 @@ export class SqliteDatabase implements Database {
         }
       })
     } finally {
-      this.open = null
+      this.waiting--
       release()
     }
   }

@@ -38,6 +38,6 @@ export class IdentityEntity {
   @Column({ type: 'integer', nullable: true })
   batchId!: number | null
 
-  @CreateDateColumn({ type: 'datetime' })
+  @CreateDateColumn()
   createdAt!: Date
 }

@@ -63,9 +63,9 @@ export class LinkEntity {
   @Column({ type: 'text', default: 'approved' })
   status!: ReviewStatus
 
-  @CreateDateColumn({ type: 'datetime' })
+  @CreateDateColumn()
   createdAt!: Date
 
-  @UpdateDateColumn({ type: 'datetime' })
+  @UpdateDateColumn()
   updatedAt!: Date
 }

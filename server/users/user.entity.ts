@@ -18,6 +18,6 @@ export class UserEntity {
   @Column({ type: 'text' })
   passwordHash!: string
 
-  @CreateDateColumn({ type: 'datetime' })
+  @CreateDateColumn()
   createdAt!: Date
 }
