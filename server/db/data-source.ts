@@ -17,7 +17,8 @@ export function createDataSource(target: DatabaseTarget): DataSource {
       entities,
       migrations: postgresMigrations,
       synchronize: false,
-      extra: { max: 10 },
+      // UTC sessions, so column defaults (now()) and the Dates the server writes agree.
+      extra: { max: 10, options: '-c timezone=UTC' },
     })
   }
   return new DataSource({

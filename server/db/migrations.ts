@@ -1,3 +1,4 @@
+import { CatalogueChangeFeed1796197600000 } from '../migrations/postgres/1796197600000-CatalogueChangeFeed'
 import { Foundation1796197547678 as PostgresFoundation1796197547678 } from '../migrations/postgres/1796197547678-Foundation'
 import { CsvImport1796154117731 } from '../migrations/1796154117731-CsvImport'
 import { FitmentGraph1796151639561 } from '../migrations/1796151639561-FitmentGraph'
@@ -7,4 +8,4 @@ import { Foundation1796150879975 } from '../migrations/1796150879975-Foundation'
 export const migrations = [Foundation1796150879975, FitmentGraph1796151639561, CsvImport1796154117731]
 
 /** PostgreSQL's, generated from the same entities (`npx tsx server/db/generate-migration.ts Name --postgres`). */
-export const postgresMigrations = [PostgresFoundation1796197547678]
+export const postgresMigrations = [PostgresFoundation1796197547678, CatalogueChangeFeed1796197600000]

@@ -5,11 +5,13 @@ import type { Database, Row, SqlValue } from './database'
 /*
  * Counts and ids come back as numbers, as from SQLite: int8 (COUNT, bigint
  * columns) and numeric would otherwise be strings. Timestamps without a zone
- * are UTC, as the server writes them, not the machine's local time.
+ * are UTC, as the server writes them (sessions run with timezone UTC, see
+ * data-source.ts), not the machine's local time.
  */
 pg.types.setTypeParser(pg.types.builtins.INT8, (value) => Number(value))
 pg.types.setTypeParser(pg.types.builtins.NUMERIC, (value) => Number(value))
 pg.types.setTypeParser(pg.types.builtins.TIMESTAMP, (value) => new Date(`${value.replace(' ', 'T')}Z`))
+pg.defaults.parseInputDatesAsUTC = true
 
 /** `?` placeholders numbered for PostgreSQL; a `?` inside a quoted string or identifier is left alone. */
 export function numberPlaceholders(sql: string): string {

@@ -1,0 +1,68 @@
+import pg from 'pg'
+
+/** Row ids a committed change touched, as the graph index takes them. */
+export type TouchedIds = { parts?: number[]; links?: number[]; identities?: number[] }
+
+type ChangeRow = { id: number; touched: TouchedIds }
+
+const CHANNEL = 'fitwright_catalogue'
+/** A missed notification (a dropped connection) is caught up by polling this often. */
+const POLL_MS = 5_000
+
+function merge(rows: ChangeRow[]): TouchedIds {
+  const merged = { parts: new Set<number>(), links: new Set<number>(), identities: new Set<number>() }
+  for (const { touched } of rows) {
+    for (const key of ['parts', 'links', 'identities'] as const) for (const id of touched[key] ?? []) merged[key].add(id)
+  }
+  return { parts: [...merged.parts], links: [...merged.links], identities: [...merged.identities] }
+}
+
+/**
+ * Follows the catalogue_change feed that PostgreSQL triggers fill (see the
+ * CatalogueChangeFeed migration): on each notification, and every few
+ * seconds in case one was missed, reads the changes after the last one seen
+ * and hands their ids to `apply`, in order and one batch at a time.
+ */
+export async function listenForCatalogueChanges(
+  url: string,
+  apply: (touched: TouchedIds) => Promise<void>,
+  onError: (error: unknown) => void = (error) => console.error('Catalogue change feed:', error),
+): Promise<{ close: () => Promise<void> }> {
+  const client = new pg.Client({ connectionString: url })
+  await client.connect()
+  const start = await client.query<{ last: number | null }>('SELECT MAX("id") AS "last" FROM catalogue_change')
+  let lastSeen = Number(start.rows[0]?.last ?? 0)
+  let running: Promise<void> = Promise.resolve()
+  let closed = false
+
+  const catchUp = () => {
+    running = running.then(async () => {
+      if (closed) return
+      try {
+        const { rows } = await client.query<ChangeRow>('SELECT "id", "touched" FROM catalogue_change WHERE "id" > $1 ORDER BY "id" LIMIT 1000', [lastSeen])
+        if (rows.length === 0) return
+        lastSeen = Number(rows[rows.length - 1]!.id)
+        await apply(merge(rows))
+        if (rows.length === 1000) catchUp()
+      } catch (error) {
+        onError(error)
+      }
+    })
+    return running
+  }
+
+  client.on('notification', () => void catchUp())
+  client.on('error', onError)
+  await client.query(`LISTEN ${CHANNEL}`)
+  const timer = setInterval(() => void catchUp(), POLL_MS)
+  timer.unref()
+
+  return {
+    async close() {
+      closed = true
+      clearInterval(timer)
+      await running
+      await client.end()
+    },
+  }
+}
