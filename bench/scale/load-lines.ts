@@ -1,0 +1,24 @@
+import type { LoadTimings, ImportTiming } from './load'
+import { figureLine, type Line } from './report'
+
+const perSecond = (rate: number) => `${Math.round(rate).toLocaleString('en')} rows/s`
+
+function rateLine(answer: string, timing: ImportTiming, raw: number | undefined): Line {
+  if (timing.failures.length) return figureLine(answer, `failed: ${timing.failures.join('; ')}`, '', '', raw ? '≥ 0.5× raw' : '', false)
+  const rate = timing.rows / (timing.ms / 1000)
+  if (raw === undefined) return figureLine(answer, perSecond(rate), '', '', '')
+  return figureLine(answer, perSecond(rate), `raw ${perSecond(raw)}`, (rate / raw).toFixed(2), '≥ 0.5× raw', rate / raw >= 0.5)
+}
+
+/** Import rates of the load, beside a raw prepared insert of the same rows into an empty copy of the schema. */
+export function importLines(load: LoadTimings, raw: { links: number; identities: number }): Line[] {
+  return [
+    rateLine('import, parts (load)', load.parts, undefined),
+    rateLine('import, links (load)', load.links, raw.links),
+    rateLine('import, identity rows (load)', load.identities, raw.identities),
+  ]
+}
+
+export function memoryLine(afterMb: number, beforeMb: number): Line {
+  return figureLine('resident memory, graph built', `${afterMb.toLocaleString('en')} MB`, `${beforeMb.toLocaleString('en')} MB before`, '', '≤ 500 MB', afterMb <= 500)
+}
