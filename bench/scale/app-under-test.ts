@@ -25,6 +25,9 @@ export async function startAppUnderTest(dir: string, env: Record<string, string>
   const { dataSource, rules } = await prepareDatabase(config)
   const app = await createApp({ config, dataSource, rules, version: 'bench' })
   const server = app.listen(0, '127.0.0.1')
+  // The bench's synchronous baselines hold this shared event loop for seconds; with Node's 5 s
+  // idle-socket timeout the server would close a kept-alive socket just as the next request reuses it.
+  server.keepAliveTimeout = 10 * 60_000
   await new Promise<void>((resolve, reject) => server.once('listening', resolve).once('error', reject))
   const { port } = server.address() as AddressInfo
   return {

@@ -58,24 +58,25 @@ export class BareQueries {
     return this.statements.linksBothWays.all(partId, partId) as Row[]
   }
 
-  /** Two steps out by index, stopping at the same caps as the app's neighbourhood. */
+  /** Two steps out by index, taking links in order until the app's caps on parts or links are reached. */
   neighbourhood(centre: number): { nodes: Row[]; edges: number } {
     const nodes = new Set([centre])
+    const full = () => edges >= MAX_NEIGHBOURHOOD_EDGES || nodes.size >= MAX_NEIGHBOURHOOD_NODES
     let frontier = [centre]
     let edges = 0
-    for (let depth = 1; depth <= 2 && edges < MAX_NEIGHBOURHOOD_EDGES; depth++) {
+    for (let depth = 1; depth <= 2 && !full(); depth++) {
       const next: number[] = []
       for (const node of frontier) {
         for (const link of this.statements.linkEnds.iterate(node, node, MAX_NEIGHBOURHOOD_EDGES - edges) as Iterable<LinkEnd>) {
           const other = link.partAId === node ? link.partBId : link.partAId
-          if (!nodes.has(other) && nodes.size >= MAX_NEIGHBOURHOOD_NODES) continue
           edges++
           if (!nodes.has(other)) {
             nodes.add(other)
             next.push(other)
           }
+          if (full()) break
         }
-        if (edges >= MAX_NEIGHBOURHOOD_EDGES) break
+        if (full()) break
       }
       frontier = next
     }

@@ -12,7 +12,11 @@ export type Pace = { requests: number; warmup: number; budgetMs: number }
 /** Enough requests for a p99 when the answer is quick; at least this many when it is slow. */
 const FEWEST = 5
 
-const reason = (error: unknown) => (error instanceof Error ? `${error.name === 'TimeoutError' ? 'timed out: ' : ''}${error.message}` : String(error))
+const reason = (error: unknown): string => {
+  if (!(error instanceof Error)) return String(error)
+  const cause = error.cause instanceof Error ? ` (${error.cause.message})` : ''
+  return `${error.name === 'TimeoutError' ? 'timed out: ' : ''}${error.message}${cause}`
+}
 
 /**
  * Warm, sequential requests: `call(i)` may rotate through its inputs. Stops
