@@ -40,6 +40,10 @@ export class BareQueries {
   /** Keys are upper-case letters and digits, so this bound closes every prefix range. */
   private static range = (key: string) => [key, `${key}\u007f`]
 
+  partId(partNumber: string): number {
+    return (this.statements.partByNumber.get(partNumber) as { id: number }).id
+  }
+
   searchNumberPrefix(key: string): Row[] {
     return this.statements.byKeyPrefix.all(...BareQueries.range(key)) as Row[]
   }
@@ -85,7 +89,7 @@ export class BareQueries {
 
   /** A build's parts by number and the link of every pair of them by the pair index. */
   buildPairs(partNumbers: string[]): number {
-    const ids = partNumbers.map((number) => (this.statements.partByNumber.get(number) as { id: number }).id)
+    const ids = partNumbers.map((number) => this.partId(number))
     let found = 0
     for (let i = 0; i < ids.length; i++) {
       for (let j = i + 1; j < ids.length; j++) {

@@ -1,5 +1,5 @@
 import type Database from 'better-sqlite3'
-import { SLOT_IDS } from '../../shared/build-template'
+import { isSlotId } from '../../shared/build-template'
 import { farthestFrom, type TypedGraph } from './typed-graph'
 
 export type PickedPart = { id: number; number: string }
@@ -34,7 +34,7 @@ export function pickParts(db: Database.Database, graph: TypedGraph): Picks {
     .prepare("SELECT family, kind, MIN(partNumber) AS number FROM part WHERE partNumber LIKE 'GX-%' AND partNumber GLOB '*[0-9]' GROUP BY family, kind")
     .all() as { family: string; kind: string; number: string }[]
   const byFamily = new Map<string, Record<string, string>>()
-  for (const row of families) if (SLOT_IDS.includes(row.kind as never)) byFamily.set(row.family, { ...byFamily.get(row.family), [row.kind]: row.number })
+  for (const row of families) if (isSlotId(row.kind)) byFamily.set(row.family, { ...byFamily.get(row.family), [row.kind]: row.number })
   const build = [...byFamily.values()].sort((a, b) => Object.keys(b).length - Object.keys(a).length)[0] ?? {}
   const marks = db.prepare("SELECT value FROM part_mark WHERE type = 'casting' AND value GLOB '[A-Z][0-9]*' LIMIT 20").pluck().all() as string[]
   return {

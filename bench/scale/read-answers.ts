@@ -17,7 +17,7 @@ function answers(counter: Client, bare: BareQueries, graph: TypedGraph, picks: P
   const search = { p95: 10, within: 5 }
   const build = picks.build
   const partial = Object.fromEntries(Object.entries(build).filter(([slot]) => !EMPTY_SLOTS.includes(slot)))
-  const filledIds = Object.values(partial).map((number) => (bare.db.prepare('SELECT id FROM part WHERE partNumber = ?').pluck().get(number) as number))
+  const filledIds = Object.values(partial).map((number) => bare.partId(number))
   return [
     { answer: 'search, part-number prefix', goal: search, call: (i) => counter.get(`/api/parts?q=${encodeURIComponent(at(picks.numberPrefixes, i))}`), bare: (i) => bare.searchNumberPrefix(normalisePartCode(at(picks.numberPrefixes, i))) },
     { answer: 'search, casting-mark prefix', goal: search, call: (i) => counter.get(`/api/parts?q=${encodeURIComponent(at(picks.markPrefixes, i))}`), bare: (i) => bare.searchMarkPrefix(normalisePartCode(at(picks.markPrefixes, i))) },
