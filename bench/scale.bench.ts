@@ -4,7 +4,7 @@ import path from 'node:path'
 import Database from 'better-sqlite3'
 import { startAppUnderTest } from './scale/app-under-test'
 import { BareQueries } from './scale/bare-queries'
-import { inventCatalogue } from './scale/catalogue'
+import { inventCatalogue, type Catalogue } from './scale/catalogue'
 import { measureConcurrentFits } from './scale/concurrency'
 import { identityRows, linkRows, writeCatalogueFiles } from './scale/csv-files'
 import { measureEdits } from './scale/edits'
@@ -17,7 +17,7 @@ import { pickParts } from './scale/picks'
 import { measureReads } from './scale/read-answers'
 import { latencyLine, printTable, type Line } from './scale/report'
 import { rawInsertRates } from './scale/raw-import'
-import { measure } from './scale/stats'
+import { failureReason, measure } from './scale/stats'
 import { loadTypedGraph } from './scale/typed-graph'
 import type { Benchmark } from './types'
 
@@ -32,6 +32,16 @@ async function firstAnswers(counter: Client, typical: string, far: string): Prom
   const fits = await measure(() => counter.get(`/api/parts/${encodeURIComponent(typical)}/fits`), once)
   const route = await measure(() => counter.get(`/api/graph/path?from=${encodeURIComponent(typical)}&to=${encodeURIComponent(far)}`), once)
   return { lines: [latencyLine('first what fits after the load', fits, null, {}), latencyLine('first path after the load', route, null, {})], rssBefore, rssAfter: megabytes() }
+}
+
+/** The raw insert rates of the load's links and identity rows; a failure is reported, not thrown. */
+function rawRates(dbPath: string, copyPath: string, catalogue: Catalogue): { links: number; identities: number } | string {
+  try {
+    const [links, identities] = rawInsertRates(dbPath, copyPath, [linkRows(catalogue.parts, catalogue.links), identityRows(catalogue)])
+    return { links: links!, identities: identities! }
+  } catch (error) {
+    return failureReason(error)
+  }
 }
 
 export const scaleBenchmark: Benchmark = {
@@ -69,8 +79,7 @@ export const scaleBenchmark: Benchmark = {
         lines.push(...(await measureEdits(editor, counter, bare, picks.typical)))
         lines.push(await measureSmallImports(importer, files.small))
         lines.push(...(await measureHealthDuringCommit(importer, counter, files.commit, options.commitRows, options.pace)))
-        const [linkRate, identityRate] = rawInsertRates(app.dbPath, path.join(dir, 'raw.sqlite'), [linkRows(catalogue.parts, catalogue.links), identityRows(catalogue)])
-        lines.push(...importLines(load, { links: linkRate!, identities: identityRate! }), memoryLine(first.rssAfter, first.rssBefore))
+        lines.push(...importLines(load, rawRates(app.dbPath, path.join(dir, 'raw.sqlite'), catalogue)), memoryLine(first.rssAfter, first.rssBefore))
         console.log(`\n${catalogue.parts.length.toLocaleString('en')} parts, ${catalogue.links.length.toLocaleString('en')} links, ${catalogue.identities.length.toLocaleString('en')} identities; up to ${options.pace.requests} requests per answer or ${options.pace.budgetMs / 1000} s:`)
         printTable(lines)
       } finally {
