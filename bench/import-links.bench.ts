@@ -7,6 +7,7 @@ import { loadConfig } from '../server/config/env'
 import { sqliteConnection } from '../server/db/sqlite-connection'
 import { FitGraphIndex } from '../server/fitment/fit-graph'
 import { ImportService, type ImportRun } from '../server/imports/import.service'
+import { rawInsert, type LinkRow } from './raw-insert'
 import type { Benchmark } from './types'
 
 const LINK_ROWS = 100_000
@@ -14,11 +15,10 @@ const PART_COUNT = 1_000
 const ROUNDS = 3
 const MODIFICATION = 'oil-restrictor-fit'
 
-type Row = [string, string, string, string, string, string]
 
 /** Distinct unordered pairs spread over the parts, a tenth with a modification. */
-function linkRows(): Row[] {
-  const rows: Row[] = []
+function linkRows(): LinkRow[] {
+  const rows: LinkRow[] = []
   const number = (i: number) => `BN-${String(i).padStart(5, '0')}`
   for (let i = 0; i < PART_COUNT && rows.length < LINK_ROWS; i++) {
     for (let j = i + 1; j < PART_COUNT && rows.length < LINK_ROWS; j += 4) {
@@ -43,24 +43,6 @@ async function freshDatabase(dir: string, name: string) {
     }
   })()
   return dataSource
-}
-
-/** The floor: the same rows straight into the link table with prepared statements in one transaction. */
-function rawInsert(db: ReturnType<typeof sqliteConnection>, rows: Row[]): number {
-  const ids = new Map((db.prepare('SELECT partNumber, id FROM part').raw().all() as [string, number][]))
-  const modificationId = (db.prepare('SELECT id FROM modification WHERE name = ?').get(MODIFICATION) as { id: number }).id
-  const insertLink = db.prepare("INSERT INTO link (partAId, partBId, relation, note, source, status) VALUES (?, ?, ?, ?, ?, 'approved')")
-  const insertMod = db.prepare('INSERT INTO link_modification (linkId, modificationId) VALUES (?, ?)')
-  const started = performance.now()
-  db.transaction(() => {
-    for (const [from, to, relation, mods, note, source] of rows) {
-      const a = ids.get(from)!
-      const b = ids.get(to)!
-      const id = insertLink.run(Math.min(a, b), Math.max(a, b), relation, note, source).lastInsertRowid
-      if (mods) insertMod.run(id, modificationId)
-    }
-  })()
-  return performance.now() - started
 }
 
 const median = (values: number[]) => [...values].sort((a, b) => a - b)[Math.floor(values.length / 2)]!

@@ -2,5 +2,6 @@
 export type Benchmark = {
   name: string
   description: string
-  run: () => Promise<void>
+  /** Gets the command line after `npm run bench --`, options included (`--links 1000000`). */
+  run: (args: string[]) => Promise<void>
 }
