@@ -1,9 +1,9 @@
 import { computed, ref } from 'vue'
 import { useRouter } from 'vue-router'
-import { useToast } from 'primevue/usetoast'
 import { ApiError } from '@/api/http'
 import { useBuildSheetsStore } from '@/stores/buildSheets'
 import { usePlannerStore } from '@/stores/planner'
+import { useNotify } from './useNotify'
 
 export type SheetDialog = 'new' | 'rename' | null
 
@@ -12,7 +12,7 @@ export function usePlannerSheet() {
   const planner = usePlannerStore()
   const sheets = useBuildSheetsStore()
   const router = useRouter()
-  const toast = useToast()
+  const notify = useNotify()
   const dialog = ref<SheetDialog>(null)
   const saving = ref(false)
   const fieldError = ref('')
@@ -24,7 +24,7 @@ export function usePlannerSheet() {
       fieldError.value = error.fieldMessage('name')!
       return
     }
-    toast.add({ severity: 'error', summary, detail: error instanceof Error ? error.message : String(error), life: 8000 })
+    notify.failure(summary, error)
   }
 
   function openDialog(kind: Exclude<SheetDialog, null>) {
@@ -39,7 +39,7 @@ export function usePlannerSheet() {
     saving.value = true
     try {
       planner.openSheet(await sheets.update(sheet.id, planner.sheetUpdate()), true)
-      toast.add({ severity: 'success', summary: `Saved “${sheet.name}”`, life: 3000 })
+      notify.success(`Saved “${sheet.name}”`)
     } catch (error) {
       fail('The build sheet was not saved', error)
     } finally {
@@ -53,12 +53,12 @@ export function usePlannerSheet() {
     try {
       if (dialog.value === 'rename' && planner.sheet) {
         planner.openSheet(await sheets.update(planner.sheet.id, { name: value.name, notes: value.notes }), true)
-        toast.add({ severity: 'success', summary: `Renamed to “${value.name}”`, life: 3000 })
+        notify.success(`Renamed to “${value.name}”`)
       } else {
         const saved = await sheets.create(planner.sheetInput(value.name, value.notes))
         planner.openSheet(saved, true)
         await router.replace({ name: 'planner-sheet', params: { id: saved.id }, query: planner.query })
-        toast.add({ severity: 'success', summary: `Saved “${saved.name}”`, detail: 'Find it again under Build sheets.', life: 4000 })
+        notify.success(`Saved “${saved.name}”`, 'Find it again under Build sheets.')
       }
       dialog.value = null
     } catch (error) {

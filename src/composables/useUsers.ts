@@ -1,9 +1,9 @@
 import { onMounted, reactive, ref } from 'vue'
-import { useToast } from 'primevue/usetoast'
 import { ROLE_LABELS, ROLES, userCreateSchema, type Role, type User } from '@shared/schemas/auth'
 import { ApiError } from '@/api/http'
 import { usersApi } from '@/api/users'
 import { fieldMessages, issuesAsFieldErrors, placeFieldMessages } from '@/lib/field-errors'
+import { useNotify } from './useNotify'
 import { useRemote } from './useRemote'
 
 export type UserDraft = { email: string; name: string; role: Role; password: string }
@@ -13,16 +13,12 @@ const DRAFT_FIELDS = ['email', 'name', 'role', 'password'] as const
 
 const ROLE_OPTIONS = ROLES.map((role) => ({ value: role, label: ROLE_LABELS[role] }))
 
-function messageOf(error: unknown): string {
-  return error instanceof ApiError ? error.message : 'Something went wrong. Try again.'
-}
-
 /**
  * The users screen: the list, adding a user and changing a role. Every failure
  * is said: a field's message beside the field, anything else in the toast.
  */
 export function useUsers() {
-  const toast = useToast()
+  const notify = useNotify()
   const list = useRemote<User[]>()
   const draft = reactive<UserDraft>({ email: '', name: '', role: 'counter', password: '' })
   const fieldErrors = ref<Record<string, string>>({})
@@ -30,10 +26,6 @@ export function useUsers() {
 
   const load = () => list.run((signal) => usersApi.list(signal))
   onMounted(load)
-
-  function fail(summary: string, error: unknown) {
-    toast.add({ severity: 'error', summary, detail: messageOf(error), life: 6000 })
-  }
 
   /** Adds the user in the draft; on success the draft is cleared (the role stays for the next one). */
   async function create(): Promise<User | null> {
@@ -47,13 +39,13 @@ export function useUsers() {
     try {
       const user = await usersApi.create(parsed.data)
       Object.assign(draft, { email: '', name: '', password: '' })
-      toast.add({ severity: 'success', summary: `Added ${user.name}`, life: 3000 })
+      notify.success(`Added ${user.name}`)
       void load()
       return user
     } catch (error) {
       const { messages, unplaced } = placeFieldMessages(error instanceof ApiError ? error.details : [], DRAFT_FIELDS)
       fieldErrors.value = messages
-      if (unplaced || Object.keys(messages).length === 0) fail('User not added', error)
+      if (unplaced || Object.keys(messages).length === 0) notify.failure('User not added', error)
       return null
     } finally {
       isSaving.value = false
@@ -63,9 +55,9 @@ export function useUsers() {
   async function changeRole(user: User, role: Role) {
     try {
       await usersApi.update(user.id, { role })
-      toast.add({ severity: 'success', summary: `${user.name} is now ${ROLE_LABELS[role]}`, life: 3000 })
+      notify.success(`${user.name} is now ${ROLE_LABELS[role]}`)
     } catch (error) {
-      fail('Role not changed', error)
+      notify.failure('Role not changed', error)
     }
     // Either way the list shows what the server holds now.
     await load()
