@@ -15,9 +15,9 @@ describe('useRecentParts', () => {
   it('keeps the last opened parts newest first, without repeats, across a reload', async () => {
     const first = await loadModule()
     const { remember } = first.useRecentParts()
-    remember({ partNumber: 'TM-HD-2000', name: 'Head', kind: 'cylinder-head' })
+    remember({ partNumber: 'TM-HD-2000', name: 'Head', kind: 'head' })
     remember({ partNumber: 'TM-BL-1800', name: 'Block', kind: 'block' })
-    remember({ partNumber: 'TM-HD-2000', name: 'Head', kind: 'cylinder-head' })
+    remember({ partNumber: 'TM-HD-2000', name: 'Head', kind: 'head' })
     await nextTick()
 
     const reloaded = await loadModule()
@@ -31,9 +31,9 @@ describe('useRecentParts', () => {
   })
 
   it('drops stored entries without a part number and keeps at most eight', async () => {
-    const stored = [{ name: 'no number' }, ...Array.from({ length: 10 }, (_, i) => ({ partNumber: `TM-HD-20${i}0`, name: 'Head', kind: 'cylinder-head' }))]
-    localStorage.setItem(STORAGE_KEY, JSON.stringify(stored))
+    const heads = Array.from({ length: 10 }, (_, i) => ({ partNumber: `TM-HD-20${i}0`, name: 'Head', kind: 'head' }))
+    localStorage.setItem(STORAGE_KEY, JSON.stringify([{ name: 'no number' }, ...heads]))
     const { useRecentParts } = await loadModule()
-    expect(useRecentParts().recent.value.map((part) => part.partNumber)).toEqual(stored.slice(1, 9).map((part) => part.partNumber))
+    expect(useRecentParts().recent.value.map((part) => part.partNumber)).toEqual(heads.slice(0, 8).map((part) => part.partNumber))
   })
 })
