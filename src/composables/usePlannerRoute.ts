@@ -38,7 +38,8 @@ export function usePlannerRoute() {
   async function fromRoute() {
     if (route.name === 'planner-sheet') {
       const id = Number(route.params.id)
-      if (planner.sheet?.id !== id) await openSheet(id)
+      // Opening a sheet by its plain address (the list's Open) shows it as saved now, even if it was open before.
+      if (planner.sheet?.id !== id || isEmptyBuild(route.query)) await openSheet(id)
     } else if (route.name === 'planner') {
       const last = planner.lastAddress
       // Back on the planner from another screen: the build in progress stays, and so does its sheet.

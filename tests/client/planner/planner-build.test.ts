@@ -171,3 +171,20 @@ describe('the planner address beyond the build', () => {
     expect(router.currentRoute.value.fullPath).toBe('/planner?block=ZX-BL-1')
   })
 })
+
+describe('opening a sheet that was open before', () => {
+  it('shows it as saved when opened again by its plain address (the list\'s Open)', async () => {
+    const saved = {
+      id: 7, name: 'Bay 3, renamed', slots: { block: 'ZX-BL-1' }, targetPowerKw: null, fuelOctane: null, chassisModelYear: null, vin: null,
+      notes: '', owner: { id: 1, name: 'A. Tech' }, createdAt: '2026-01-01T00:00:00.000Z', updatedAt: '2026-01-02T00:00:00.000Z',
+    }
+    vi.stubGlobal('fetch', async () => new Response(JSON.stringify(saved), { status: 200, headers: { 'Content-Type': 'application/json' } }))
+    const { router, planner } = await mountPlanner('/planner/7', { route: true })
+    await flushPromises()
+    await router.push('/parts')
+    await router.push('/planner/7')
+    await flushPromises()
+    expect(router.currentRoute.value.fullPath).toBe('/planner/7?block=ZX-BL-1')
+    expect(planner.sheet?.name).toBe('Bay 3, renamed')
+  })
+})
