@@ -1,4 +1,5 @@
 import { onMounted, reactive, ref } from 'vue'
+import { useConfirm } from 'primevue/useconfirm'
 import { ROLE_LABELS, ROLES, userCreateSchema, type Role, type User } from '@shared/schemas/auth'
 import { ApiError } from '@/api/http'
 import { usersApi } from '@/api/users'
@@ -19,6 +20,9 @@ const ROLE_OPTIONS = ROLES.map((role) => ({ value: role, label: ROLE_LABELS[role
  */
 export function useUsers() {
   const notify = useNotify()
+  const confirm = useConfirm()
+  /** Roles chosen in a select but not stored yet (asking, saving); anything else shows what the server holds. */
+  const pendingRoles = ref<Partial<Record<number, Role>>>({})
   const list = useRemote<User[]>()
   const draft = reactive<UserDraft>({ email: '', name: '', role: 'counter', password: '' })
   const fieldErrors = ref<Record<string, string>>({})
@@ -52,6 +56,13 @@ export function useUsers() {
     }
   }
 
+  const roleShown = (user: User): Role => pendingRoles.value[user.id] ?? user.role
+
+  function settle(user: User) {
+    const { [user.id]: _settled, ...rest } = pendingRoles.value
+    pendingRoles.value = rest
+  }
+
   async function changeRole(user: User, role: Role) {
     try {
       await usersApi.update(user.id, { role })
@@ -59,8 +70,24 @@ export function useUsers() {
     } catch (error) {
       notify.failure('Role not changed', error)
     }
-    // Either way the list shows what the server holds now.
+    // Either way the list shows what the server holds now, and the select with it.
     await load()
+    settle(user)
+  }
+
+  /** A role decides what someone may see and change, so a change is confirmed first. */
+  function askRoleChange(user: User, role: Role) {
+    if (role === user.role) return settle(user)
+    pendingRoles.value = { ...pendingRoles.value, [user.id]: role }
+    confirm.require({
+      header: `Make ${user.name} ${ROLE_LABELS[role]}?`,
+      message: `${user.name} is ${ROLE_LABELS[user.role]} now. The new role applies from their next request.`,
+      acceptProps: { label: `Make ${ROLE_LABELS[role]}` },
+      rejectProps: { label: `Keep ${ROLE_LABELS[user.role]}`, severity: 'secondary', outlined: true },
+      accept: () => void changeRole(user, role),
+      reject: () => settle(user),
+      onHide: () => settle(user),
+    })
   }
 
   return {
@@ -73,6 +100,7 @@ export function useUsers() {
     fieldErrors,
     isSaving,
     create,
-    changeRole,
+    roleShown,
+    askRoleChange,
   }
 }
