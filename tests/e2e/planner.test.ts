@@ -201,6 +201,29 @@ describe.skipIf(!run)('technician: plan a build, get the verdict and the parts l
     await page.getByRole('button', { name: 'Use light theme' }).click()
   })
 
+  it('finds sheets by name on a 768 px tablet, with finger-sized Rename and Delete kept apart', async () => {
+    await page.setViewportSize({ width: 768, height: 1024 })
+    await page.goto(`${server.url}/builds`)
+    const row = page.getByRole('row').filter({ hasText: 'Bench swap for bay 3, customer copy' })
+    await row.waitFor()
+    const rename = await row.getByRole('button', { name: /^Rename / }).boundingBox()
+    const remove = await row.getByRole('button', { name: /^Delete / }).boundingBox()
+    for (const box of [rename!, remove!]) {
+      expect(box.width).toBeGreaterThanOrEqual(44)
+      expect(box.height).toBeGreaterThanOrEqual(44)
+    }
+    expect(remove!.x - (rename!.x + rename!.width)).toBeGreaterThanOrEqual(16)
+    const overflow = await page.evaluate(() => document.documentElement.scrollWidth - document.documentElement.clientWidth)
+    expect(overflow).toBeLessThanOrEqual(0)
+    await saveScreenshot(page, 'build-sheets-768')
+    await page.getByLabel('Search').fill('TK18 head')
+    await expect.poll(() => page.getByRole('status').filter({ hasText: / of \d+ sheets/ }).textContent(), within).toMatch(/^[1-9]\d* of \d+ sheets$/)
+    expect(await page.getByRole('row').filter({ hasText: 'Bench swap for bay 3' }).count()).toBe(0)
+    expect(await page.getByRole('row').filter({ hasText: 'TK18 head on a TK20V block' }).count()).toBeGreaterThan(0)
+    await saveScreenshot(page, 'build-sheets-search-768')
+    await page.setViewportSize({ width: 1280, height: 900 })
+  })
+
   it('logged no console errors', () => {
     expect(consoleErrors.filter((text) => !text.includes('401'))).toEqual([])
   })
