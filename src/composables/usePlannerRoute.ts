@@ -35,11 +35,13 @@ export function usePlannerRoute() {
     }
   }
 
-  async function fromRoute() {
+  async function fromRoute(before?: unknown[]) {
     if (route.name === 'planner-sheet') {
       const id = Number(route.params.id)
-      // Opening a sheet by its plain address (the list's Open) shows it as saved now, even if it was open before.
-      if (planner.sheet?.id !== id || isEmptyBuild(route.query)) await openSheet(id)
+      // Arriving by the sheet's plain address from elsewhere (the list's Open) shows it as saved now,
+      // even if it was open before; emptying the build on the sheet itself is an edit, not a reopening.
+      const cameFromElsewhere = before?.[0] !== 'planner-sheet' || Number(before[1]) !== id
+      if (planner.sheet?.id !== id || (cameFromElsewhere && isEmptyBuild(route.query))) await openSheet(id)
     } else if (route.name === 'planner') {
       const last = planner.lastAddress
       // Back on the planner from another screen: the build in progress stays, and so does its sheet.
@@ -53,7 +55,7 @@ export function usePlannerRoute() {
     planner.lastAddress = { sheetId: planner.sheet?.id ?? null, query: plannerToQuery(plannerFromQuery(route.query)) }
   }
 
-  watch(() => [route.name, route.params.id, route.query], fromRoute, { immediate: true })
+  watch(() => [route.name, route.params.id, route.query], (_now, before) => fromRoute(before), { immediate: true })
 
   return { sheetError, isOpeningSheet }
 }

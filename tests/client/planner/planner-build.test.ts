@@ -188,3 +188,19 @@ describe('opening a sheet that was open before', () => {
     expect(planner.sheet?.name).toBe('Bay 3, renamed')
   })
 })
+
+describe('emptying the build of an open sheet', () => {
+  it('leaves it empty (an edit) instead of filling it from the sheet again', async () => {
+    const saved = {
+      id: 7, name: 'Bay 3', slots: { block: 'ZX-BL-1' }, targetPowerKw: null, fuelOctane: null, chassisModelYear: null, vin: null,
+      notes: '', owner: { id: 1, name: 'A. Tech' }, createdAt: '2026-01-01T00:00:00.000Z', updatedAt: '2026-01-02T00:00:00.000Z',
+    }
+    vi.stubGlobal('fetch', async () => new Response(JSON.stringify(saved), { status: 200, headers: { 'Content-Type': 'application/json' } }))
+    const { router, build } = await mountPlanner('/planner/7', { route: true })
+    await flushPromises()
+    await build().setSlot('block', null)
+    await flushPromises()
+    expect(router.currentRoute.value.fullPath).toBe('/planner/7')
+    expect(build().isDirty.value).toBe(true)
+  })
+})
