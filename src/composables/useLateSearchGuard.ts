@@ -24,5 +24,11 @@ export function useLateSearchGuard(refKey: string, shownText: () => string) {
     list.value?.hide()
   }
 
-  return { isLate, onShow }
+  /** Closes the list now and, when a search is still on its way, the list it would open. */
+  function close(searchPending: boolean) {
+    hideNextShow = searchPending
+    list.value?.hide()
+  }
+
+  return { isLate, onShow, close }
 }

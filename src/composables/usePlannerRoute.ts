@@ -1,14 +1,15 @@
 import { ref, watch } from 'vue'
 import { useRoute, useRouter } from 'vue-router'
 import { ApiError } from '@/api/http'
-import { isEmptyBuild, sameBuild } from '@/lib/planner-query'
+import { isEmptyBuild, plannerFromQuery, plannerToQuery } from '@/lib/planner-query'
 import { useBuildSheetsStore } from '@/stores/buildSheets'
-import { usePlannerStore } from '@/stores/planner'
+import { sheetState, usePlannerStore } from '@/stores/planner'
 
 /**
- * Keeps the build in progress and the address in step, both ways:
- * `/planner?block=…&head=…&power=…` for a build, `/planner/:id` for a saved
- * sheet (its slots fill the address when it opens; edits stay in the address).
+ * What the address means beyond the build itself: `/planner/:id` opens a saved
+ * sheet (its build fills an empty address once); `/planner` with an empty
+ * address, reached from another screen, goes back to the last build. The build
+ * is never copied into a store, so there is nothing to keep in step.
  */
 export function usePlannerRoute() {
   const route = useRoute()
@@ -18,46 +19,43 @@ export function usePlannerRoute() {
   const sheetError = ref<ApiError | null>(null)
   const isOpeningSheet = ref(false)
 
-  async function fromRoute() {
-    const id = route.name === 'planner-sheet' ? Number(route.params.id) : null
-    if (id === null) {
+  async function openSheet(id: number) {
+    sheetError.value = null
+    isOpeningSheet.value = true
+    try {
+      const saved = await sheets.get(id)
+      if (route.name !== 'planner-sheet' || Number(route.params.id) !== id) return
+      planner.openSheet(saved)
+      // A shared link to an edited sheet keeps its edits; a plain link shows the sheet as saved.
+      if (isEmptyBuild(route.query)) await router.replace({ query: plannerToQuery(sheetState(saved)) })
+    } catch (error) {
+      sheetError.value = error instanceof ApiError ? error : new ApiError(0, 'client', 'The build sheet could not be opened.')
+    } finally {
+      isOpeningSheet.value = false
+    }
+  }
+
+  async function fromRoute(before?: unknown[]) {
+    if (route.name === 'planner-sheet') {
+      const id = Number(route.params.id)
+      // Arriving by the sheet's plain address from elsewhere (the list's Open) shows it as saved now,
+      // even if it was open before; emptying the build on the sheet itself is an edit, not a reopening.
+      const cameFromElsewhere = before?.[0] !== 'planner-sheet' || Number(before[1]) !== id
+      if (planner.sheet?.id !== id || (cameFromElsewhere && isEmptyBuild(route.query))) await openSheet(id)
+    } else if (route.name === 'planner') {
+      const last = planner.lastAddress
       // Back on the planner from another screen: the build in progress stays, and so does its sheet.
-      if (isEmptyBuild(route.query) && Object.keys(planner.query).length > 0) {
-        if (planner.sheet) void router.replace({ name: 'planner-sheet', params: { id: planner.sheet.id }, query: planner.query })
-        else void router.replace({ query: planner.query })
+      if (isEmptyBuild(route.query) && last && Object.keys(last.query).length > 0) {
+        if (last.sheetId !== null) await router.replace({ name: 'planner-sheet', params: { id: last.sheetId }, query: last.query })
+        else await router.replace({ query: last.query })
         return
       }
       planner.forgetSheet()
-      if (!sameBuild(route.query, planner.query)) planner.applyQuery(route.query)
-      return
-    }
-    if (planner.sheet?.id !== id) {
-      sheetError.value = null
-      isOpeningSheet.value = true
-      try {
-        const saved = await sheets.get(id)
-        planner.openSheet(saved, !isEmptyBuild(route.query))
-      } catch (error) {
-        sheetError.value = error instanceof ApiError ? error : new ApiError(0, 'client', 'The build sheet could not be opened.')
-        return
-      } finally {
-        isOpeningSheet.value = false
-      }
-    }
-    if (!isEmptyBuild(route.query) && !sameBuild(route.query, planner.query)) planner.applyQuery(route.query)
+    } else return
+    planner.lastAddress = { sheetId: planner.sheet?.id ?? null, query: plannerToQuery(plannerFromQuery(route.query)) }
   }
 
-  watch(() => [route.name, route.params.id, route.query], fromRoute, { immediate: true })
-
-  watch(
-    () => planner.query,
-    (query) => {
-      if (route.name !== 'planner' && route.name !== 'planner-sheet') return
-      // Leaving a sheet (start over): the address of the old sheet must not take the emptied build.
-      if (route.name === 'planner-sheet' && planner.sheet?.id !== Number(route.params.id)) return
-      if (!sameBuild(route.query, query)) void router.replace({ query })
-    },
-  )
+  watch(() => [route.name, route.params.id, route.query], (_now, before) => fromRoute(before), { immediate: true })
 
   return { sheetError, isOpeningSheet }
 }

@@ -1,20 +1,21 @@
 import { computed, ref } from 'vue'
 import { useRouter } from 'vue-router'
-import { useToast } from 'primevue/usetoast'
 import { ApiError } from '@/api/http'
 import { useBuildSheetsStore } from '@/stores/buildSheets'
 import { usePlannerStore } from '@/stores/planner'
+import { useBusyAction } from './useBusyAction'
+import { useNotify } from './useNotify'
+import type { usePlannerBuild } from './usePlannerBuild'
 
 export type SheetDialog = 'new' | 'rename' | null
 
 /** Saving, saving as, renaming and starting over: the planner's build-sheet actions and their dialog. */
-export function usePlannerSheet() {
+export function usePlannerSheet(build: ReturnType<typeof usePlannerBuild>) {
   const planner = usePlannerStore()
   const sheets = useBuildSheetsStore()
   const router = useRouter()
-  const toast = useToast()
+  const notify = useNotify()
   const dialog = ref<SheetDialog>(null)
-  const saving = ref(false)
   const fieldError = ref('')
 
   const dialogTitle = computed(() => (dialog.value === 'rename' ? 'Name and notes of the build sheet' : 'Save as a new build sheet'))
@@ -24,7 +25,7 @@ export function usePlannerSheet() {
       fieldError.value = error.fieldMessage('name')!
       return
     }
-    toast.add({ severity: 'error', summary, detail: error instanceof Error ? error.message : String(error), life: 8000 })
+    notify.failure(summary, error)
   }
 
   function openDialog(kind: Exclude<SheetDialog, null>) {
@@ -33,46 +34,45 @@ export function usePlannerSheet() {
   }
 
   /** Saves the open sheet in place; a build without a sheet asks for a name first. */
-  async function save() {
+  async function saveInPlace() {
     const sheet = planner.sheet
     if (!sheet) return openDialog('new')
-    saving.value = true
     try {
-      planner.openSheet(await sheets.update(sheet.id, planner.sheetUpdate()), true)
-      toast.add({ severity: 'success', summary: `Saved “${sheet.name}”`, life: 3000 })
+      planner.openSheet(await sheets.update(sheet.id, planner.sheetUpdate(build.state.value)))
+      notify.success(`Saved “${sheet.name}”`)
     } catch (error) {
       fail('The build sheet was not saved', error)
-    } finally {
-      saving.value = false
     }
   }
 
-  async function submit(value: { name: string; notes: string }) {
-    saving.value = true
+  async function saveFromDialog(value: { name: string; notes: string }) {
     fieldError.value = ''
     try {
       if (dialog.value === 'rename' && planner.sheet) {
-        planner.openSheet(await sheets.update(planner.sheet.id, { name: value.name, notes: value.notes }), true)
-        toast.add({ severity: 'success', summary: `Renamed to “${value.name}”`, life: 3000 })
+        planner.openSheet(await sheets.update(planner.sheet.id, { name: value.name, notes: value.notes }))
+        notify.success(`Renamed to “${value.name}”`)
       } else {
-        const saved = await sheets.create(planner.sheetInput(value.name, value.notes))
-        planner.openSheet(saved, true)
-        await router.replace({ name: 'planner-sheet', params: { id: saved.id }, query: planner.query })
-        toast.add({ severity: 'success', summary: `Saved “${saved.name}”`, detail: 'Find it again under Build sheets.', life: 4000 })
+        const saved = await sheets.create(planner.sheetInput(build.state.value, value.name, value.notes))
+        planner.openSheet(saved)
+        // The same build under the sheet's address: no new history entry for it.
+        await router.replace({ name: 'planner-sheet', params: { id: saved.id }, query: build.query.value })
+        notify.success(`Saved “${saved.name}”`, 'Find it again under Build sheets.')
       }
       dialog.value = null
     } catch (error) {
       fail('The build sheet was not saved', error)
-    } finally {
-      saving.value = false
     }
   }
 
+  // One save at a time, whichever button or dialog asked for it.
+  const saveAction = useBusyAction(async (run: () => Promise<void>) => run())
+  const save = () => saveAction.run(saveInPlace)
+  const submit = (value: { name: string; notes: string }) => saveAction.run(() => saveFromDialog(value))
+
   function startOver() {
-    planner.clear()
-    planner.forgetSheet()
+    planner.forget()
     void router.push({ name: 'planner' })
   }
 
-  return { dialog, dialogTitle, saving, fieldError, openDialog, save, submit, startOver }
+  return { dialog, dialogTitle, saving: saveAction.isRunning, fieldError, openDialog, save, submit, startOver }
 }

@@ -7,6 +7,8 @@ export type Remote<T> = {
   error: Ref<ApiError | null>
   /** Runs a load; a newer run aborts the older one so answers never arrive out of order. */
   run: (load: (signal: AbortSignal) => Promise<T>) => Promise<T | null>
+  /** Drops a load in flight and the last answer: there is nothing to show. */
+  reset: () => void
 }
 
 /** Loading, data and error for one remote resource of a view. */
@@ -36,5 +38,13 @@ export function useRemote<T>(initial: T | null = null): Remote<T> {
     }
   }
 
-  return { data, isLoading, error, run }
+  function reset() {
+    controller?.abort()
+    controller = null
+    data.value = initial
+    error.value = null
+    isLoading.value = false
+  }
+
+  return { data, isLoading, error, run, reset }
 }

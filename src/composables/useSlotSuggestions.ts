@@ -36,6 +36,8 @@ export function useSlotSuggestions(slot: SlotId, build: () => PlannerState) {
   const groups = shallowRef<SlotOptionGroup[]>([])
   const note = ref('')
   const failed = ref('')
+  /** The search the choices on show answer (null before the first answer). */
+  const answeredQuery = ref<string | null>(null)
   let controller: AbortController | null = null
 
   async function candidates() {
@@ -60,6 +62,7 @@ export function useSlotSuggestions(slot: SlotId, build: () => PlannerState) {
       if (controller !== current) return
       note.value = fit.note
       groups.value = slotOptionGroups(slot, query, fit.candidates, found.items)
+      answeredQuery.value = query
     } catch (error) {
       if (current.signal.aborted) return
       failed.value = error instanceof Error ? error.message : 'Suggestions could not be loaded.'
@@ -73,5 +76,5 @@ export function useSlotSuggestions(slot: SlotId, build: () => PlannerState) {
     groups.value = [...groups.value]
   }
 
-  return { groups, note, failed, search, settle }
+  return { groups, note, failed, answeredQuery, search, settle }
 }

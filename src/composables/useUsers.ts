@@ -1,9 +1,10 @@
 import { onMounted, reactive, ref } from 'vue'
-import { useToast } from 'primevue/usetoast'
+import { useConfirm } from 'primevue/useconfirm'
 import { ROLE_LABELS, ROLES, userCreateSchema, type Role, type User } from '@shared/schemas/auth'
 import { ApiError } from '@/api/http'
 import { usersApi } from '@/api/users'
 import { fieldMessages, issuesAsFieldErrors, placeFieldMessages } from '@/lib/field-errors'
+import { useNotify } from './useNotify'
 import { useRemote } from './useRemote'
 
 export type UserDraft = { email: string; name: string; role: Role; password: string }
@@ -13,16 +14,15 @@ const DRAFT_FIELDS = ['email', 'name', 'role', 'password'] as const
 
 const ROLE_OPTIONS = ROLES.map((role) => ({ value: role, label: ROLE_LABELS[role] }))
 
-function messageOf(error: unknown): string {
-  return error instanceof ApiError ? error.message : 'Something went wrong. Try again.'
-}
-
 /**
  * The users screen: the list, adding a user and changing a role. Every failure
  * is said: a field's message beside the field, anything else in the toast.
  */
 export function useUsers() {
-  const toast = useToast()
+  const notify = useNotify()
+  const confirm = useConfirm()
+  /** Roles chosen in a select but not stored yet (asking, saving); anything else shows what the server holds. */
+  const pendingRoles = ref<Partial<Record<number, Role>>>({})
   const list = useRemote<User[]>()
   const draft = reactive<UserDraft>({ email: '', name: '', role: 'counter', password: '' })
   const fieldErrors = ref<Record<string, string>>({})
@@ -30,10 +30,6 @@ export function useUsers() {
 
   const load = () => list.run((signal) => usersApi.list(signal))
   onMounted(load)
-
-  function fail(summary: string, error: unknown) {
-    toast.add({ severity: 'error', summary, detail: messageOf(error), life: 6000 })
-  }
 
   /** Adds the user in the draft; on success the draft is cleared (the role stays for the next one). */
   async function create(): Promise<User | null> {
@@ -47,28 +43,51 @@ export function useUsers() {
     try {
       const user = await usersApi.create(parsed.data)
       Object.assign(draft, { email: '', name: '', password: '' })
-      toast.add({ severity: 'success', summary: `Added ${user.name}`, life: 3000 })
+      notify.success(`Added ${user.name}`)
       void load()
       return user
     } catch (error) {
       const { messages, unplaced } = placeFieldMessages(error instanceof ApiError ? error.details : [], DRAFT_FIELDS)
       fieldErrors.value = messages
-      if (unplaced || Object.keys(messages).length === 0) fail('User not added', error)
+      if (unplaced || Object.keys(messages).length === 0) notify.failure('User not added', error)
       return null
     } finally {
       isSaving.value = false
     }
   }
 
+  const roleShown = (user: User): Role => pendingRoles.value[user.id] ?? user.role
+
+  function settle(user: User) {
+    const { [user.id]: _settled, ...rest } = pendingRoles.value
+    pendingRoles.value = rest
+  }
+
   async function changeRole(user: User, role: Role) {
     try {
       await usersApi.update(user.id, { role })
-      toast.add({ severity: 'success', summary: `${user.name} is now ${ROLE_LABELS[role]}`, life: 3000 })
+      notify.success(`${user.name} is now ${ROLE_LABELS[role]}`)
     } catch (error) {
-      fail('Role not changed', error)
+      notify.failure('Role not changed', error)
     }
-    // Either way the list shows what the server holds now.
+    // Either way the list shows what the server holds now, and the select with it.
     await load()
+    settle(user)
+  }
+
+  /** A role decides what someone may see and change, so a change is confirmed first. */
+  function askRoleChange(user: User, role: Role) {
+    if (role === user.role) return settle(user)
+    pendingRoles.value = { ...pendingRoles.value, [user.id]: role }
+    confirm.require({
+      header: `Make ${user.name} ${ROLE_LABELS[role]}?`,
+      message: `${user.name} is ${ROLE_LABELS[user.role]} now. The new role applies from their next request.`,
+      acceptProps: { label: `Make ${ROLE_LABELS[role]}` },
+      rejectProps: { label: `Keep ${ROLE_LABELS[user.role]}`, severity: 'secondary', outlined: true },
+      accept: () => void changeRole(user, role),
+      reject: () => settle(user),
+      onHide: () => settle(user),
+    })
   }
 
   return {
@@ -81,6 +100,7 @@ export function useUsers() {
     fieldErrors,
     isSaving,
     create,
-    changeRole,
+    roleShown,
+    askRoleChange,
   }
 }

@@ -1,9 +1,9 @@
 import type { BuildFigures } from '@shared/schemas/build'
+import { formatDecimal } from './format'
 
 export type FigureRow = { key: string; label: string; value: string; unit: string; note?: string }
 
-const format = (value: number, digits: number) =>
-  value.toLocaleString('en-GB', { minimumFractionDigits: digits, maximumFractionDigits: digits })
+const format = formatDecimal
 
 /**
  * The computed figures a technician checks, each with its unit. Figures the

@@ -65,3 +65,25 @@ export function evaluateBody(state: PlannerState): EvaluateRequest & { slots: Re
 export function filledSlotCount(slots: PlannerSlots): number {
   return Object.values(slots).filter(Boolean).length
 }
+
+/** The build with one slot set (trimmed) or, for an empty value, cleared. */
+export function withSlots(state: PlannerState, changes: Partial<Record<SlotId, string | null>>): PlannerState {
+  const slots = { ...state.slots }
+  for (const [slot, value] of Object.entries(changes) as [SlotId, string | null][]) {
+    if (value?.trim()) slots[slot] = value.trim()
+    else delete slots[slot]
+  }
+  return { slots, context: state.context }
+}
+
+/** The build with context fields changed; a field set to undefined or '' is dropped. */
+export function withContext(state: PlannerState, change: Partial<BuildContext>): PlannerState {
+  const context: BuildContext = { ...state.context, ...change }
+  for (const key of Object.keys(context) as (keyof BuildContext)[]) if (context[key] === undefined || context[key] === '') delete context[key]
+  return { slots: state.slots, context }
+}
+
+/** One key per build, whatever order or spelling the address had (for "has this build been checked?"). */
+export function buildKey(state: PlannerState): string {
+  return JSON.stringify(plannerToQuery(state))
+}

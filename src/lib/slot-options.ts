@@ -45,3 +45,17 @@ export function slotOptionGroups(slot: SlotId, query: string, candidates: readon
     { label: candidates.length ? `Other ${kind} parts: not suggested, checked once chosen` : `All matching ${kind} parts`, items: others },
   ].filter((group) => group.items.length > 0)
 }
+
+/**
+ * What Enter takes when the text in a picker was typed (or arrived whole from a
+ * scanner or autofill) rather than chosen: the option with exactly that number,
+ * else the text itself when the list on show answers an older search. Null
+ * leaves Enter to the list (the highlighted option), as for a partial number.
+ */
+export function typedChoice(typed: string, groups: readonly SlotOptionGroup[], answeredQuery: string | null): string | null {
+  const key = normalisePartCode(typed)
+  if (!key) return null
+  const exact = groups.flatMap((group) => group.items).find((option) => normalisePartCode(option.part.partNumber) === key)
+  if (exact) return exact.part.partNumber
+  return answeredQuery === null || normalisePartCode(answeredQuery) !== key ? typed.trim() : null
+}

@@ -1,109 +1,102 @@
 import { defineStore } from 'pinia'
 import { computed, ref } from 'vue'
-import type { LocationQuery } from 'vue-router'
 import { isSlotId, type SlotId } from '@shared/build-template'
 import type { BuildContext, BuildSheet, BuildSheetInput, BuildSheetUpdate, Evaluation, FillResult } from '@shared/schemas/build'
 import { buildsApi } from '@/api/builds'
 import { useRemote } from '@/composables/useRemote'
-import { evaluateBody, filledSlotCount, plannerFromQuery, plannerToQuery, sameBuild, type PlannerSlots, type PlannerState } from '@/lib/planner-query'
+import { buildKey, evaluateBody, filledSlotCount, type PlannerSlots, type PlannerState } from '@/lib/planner-query'
 
-/** The build in progress: its slots, its context, the saved sheet it came from and its live verdict. */
+/** Where the planner last was, so coming back from another screen reopens that build. */
+export type PlannerAddress = { sheetId: number | null; query: Record<string, string> }
+
+/** The build in a saved sheet, as the planner's address holds it. */
+export function sheetState(saved: BuildSheet): PlannerState {
+  const slots: PlannerSlots = {}
+  for (const [slot, partNumber] of Object.entries(saved.slots)) if (isSlotId(slot)) slots[slot] = partNumber
+  const context: BuildContext = {}
+  if (saved.targetPowerKw !== null) context.targetPowerKw = saved.targetPowerKw
+  if (saved.fuelOctane !== null) context.fuelOctane = saved.fuelOctane
+  if (saved.chassisModelYear !== null) context.chassisModelYear = saved.chassisModelYear
+  if (saved.vin) context.vin = saved.vin
+  return { slots, context }
+}
+
+/**
+ * What the planner keeps beside the build: the saved sheet it came from, the
+ * verdict of the last build checked and the last address. The build itself is
+ * the address (see usePlannerBuild); every action here is given it.
+ */
 export const usePlannerStore = defineStore('planner', () => {
-  const slots = ref<PlannerSlots>({})
-  const context = ref<BuildContext>({})
   /** The saved sheet being edited, if any. */
   const sheet = ref<BuildSheet | null>(null)
+  const lastAddress = ref<PlannerAddress | null>(null)
   const evaluation = useRemote<Evaluation>()
-
-  const state = computed<PlannerState>(() => ({ slots: slots.value, context: context.value }))
-  const query = computed(() => plannerToQuery(state.value))
-  const filledCount = computed(() => filledSlotCount(slots.value))
+  /** The build the verdict belongs to (or is being asked for). */
+  const evaluatedKey = ref<string | null>(null)
 
   /** Field messages from the last evaluation (unknown part, wrong kind, bad context value), by slot or field. */
   const fieldErrors = computed<Record<string, string>>(() =>
     Object.fromEntries((evaluation.error.value?.details ?? []).map((detail) => [detail.path.replace(/^slots\./, ''), detail.message])),
   )
 
-  const isDirty = computed(() => (sheet.value ? !sameBuild(plannerToQuery(fromSheet(sheet.value)), query.value) : filledCount.value > 0))
-
-  function fromSheet(saved: BuildSheet): PlannerState {
-    const sheetSlots: PlannerSlots = {}
-    for (const [slot, partNumber] of Object.entries(saved.slots)) if (isSlotId(slot)) sheetSlots[slot] = partNumber
-    const sheetContext: BuildContext = {}
-    if (saved.targetPowerKw !== null) sheetContext.targetPowerKw = saved.targetPowerKw
-    if (saved.fuelOctane !== null) sheetContext.fuelOctane = saved.fuelOctane
-    if (saved.chassisModelYear !== null) sheetContext.chassisModelYear = saved.chassisModelYear
-    if (saved.vin) sheetContext.vin = saved.vin
-    return { slots: sheetSlots, context: sheetContext }
-  }
-
-  function apply(next: PlannerState) {
-    slots.value = { ...next.slots }
-    context.value = { ...next.context }
-  }
-
-  function applyQuery(routeQuery: LocationQuery) {
-    apply(plannerFromQuery(routeQuery))
-  }
-
-  /** Opens a saved sheet; with `keepEdits` the slots in the address stay (a shared link to an edited sheet). */
-  function openSheet(saved: BuildSheet, keepEdits = false) {
+  function openSheet(saved: BuildSheet) {
     sheet.value = saved
-    if (!keepEdits) apply(fromSheet(saved))
   }
 
   function forgetSheet() {
     sheet.value = null
   }
 
-  function setSlot(slot: SlotId, partNumber: string | null) {
-    const next = { ...slots.value }
-    if (partNumber?.trim()) next[slot] = partNumber.trim()
-    else delete next[slot]
-    slots.value = next
+  /** Start over: nothing to come back to. */
+  function forget() {
+    sheet.value = null
+    lastAddress.value = null
   }
 
-  function setContext(change: Partial<BuildContext>) {
-    const next: BuildContext = { ...context.value, ...change }
-    for (const key of Object.keys(next) as (keyof BuildContext)[]) if (next[key] === undefined || next[key] === '') delete next[key]
-    context.value = next
-  }
-
-  function clear() {
-    apply({ slots: {}, context: {} })
-  }
-
-  async function evaluate() {
-    if (filledCount.value === 0) {
-      evaluation.data.value = null
-      evaluation.error.value = null
-      return
+  /**
+   * Checks the build once. Returns the current numbers for slots typed as a mark or a
+   * superseded number, for the caller to put in the address (the same build, so not checked again).
+   */
+  async function evaluate(state: PlannerState): Promise<Partial<Record<SlotId, string>>> {
+    const key = buildKey(state)
+    if (key === evaluatedKey.value) return {}
+    evaluatedKey.value = key
+    if (filledSlotCount(state.slots) === 0) {
+      evaluation.reset()
+      return {}
     }
-    const result = await evaluation.run((signal) => buildsApi.evaluate(evaluateBody(state.value), signal))
-    if (!result) return
-    // A mark or superseded number typed into a slot becomes the part's current number.
+    const result = await evaluation.run((signal) => buildsApi.evaluate(evaluateBody(state), signal))
+    if (!result) {
+      // A failed check may be asked again for the same build (a retry, a server back up).
+      if (evaluation.error.value && evaluatedKey.value === key) evaluatedKey.value = null
+      return {}
+    }
+    const current: Partial<Record<SlotId, string>> = {}
     for (const [slot, part] of Object.entries(result.parts)) {
-      if (isSlotId(slot) && slots.value[slot] && slots.value[slot] !== part.partNumber) setSlot(slot, part.partNumber)
+      if (isSlotId(slot) && state.slots[slot] && state.slots[slot] !== part.partNumber) current[slot] = part.partNumber
     }
+    return current
   }
 
-  /** Asks the server to fill the empty slots (see POST /api/builds/fill) and takes its choices. */
-  async function fillGaps(): Promise<Pick<FillResult, 'filled' | 'unfilled'>> {
-    const result = await buildsApi.fill(evaluateBody(state.value))
-    for (const { slot, partNumber } of result.filled) if (isSlotId(slot)) setSlot(slot, partNumber)
-    return result
+  /** Marks a build as already checked (the same build under current part numbers). */
+  function markEvaluated(state: PlannerState) {
+    evaluatedKey.value = buildKey(state)
   }
 
-  function sheetInput(name: string, notes = ''): BuildSheetInput {
-    const body = evaluateBody(state.value)
-    return { ...body, name, notes }
+  /** Asks the server to fill the empty slots (see POST /api/builds/fill); the caller puts its choices in the address. */
+  function fillGaps(state: PlannerState): Promise<FillResult> {
+    return buildsApi.fill(evaluateBody(state))
+  }
+
+  function sheetInput(state: PlannerState, name: string, notes = ''): BuildSheetInput {
+    return { ...evaluateBody(state), name, notes }
   }
 
   /** A full update: slots and every context field (null clears what was removed). */
-  function sheetUpdate(): BuildSheetUpdate {
-    const c = context.value
+  function sheetUpdate(state: PlannerState): BuildSheetUpdate {
+    const c = state.context
     return {
-      slots: evaluateBody(state.value).slots,
+      slots: evaluateBody(state).slots,
       targetPowerKw: c.targetPowerKw ?? null,
       fuelOctane: c.fuelOctane ?? null,
       chassisModelYear: c.chassisModelYear ?? null,
@@ -112,24 +105,17 @@ export const usePlannerStore = defineStore('planner', () => {
   }
 
   return {
-    slots,
-    context,
     sheet,
+    lastAddress,
     result: evaluation.data,
     isEvaluating: evaluation.isLoading,
     evaluationError: evaluation.error,
-    state,
-    query,
-    filledCount,
     fieldErrors,
-    isDirty,
-    applyQuery,
     openSheet,
     forgetSheet,
-    setSlot,
-    setContext,
-    clear,
+    forget,
     evaluate,
+    markEvaluated,
     fillGaps,
     sheetInput,
     sheetUpdate,

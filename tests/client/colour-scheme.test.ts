@@ -36,4 +36,13 @@ describe('useColourScheme', () => {
     expect(setItem.mock.calls).toEqual([[STORAGE_KEY, 'dark']])
     setItem.mockRestore()
   })
+
+  it('follows the device setting until someone chooses', async () => {
+    const dark = (query: string) => ({ matches: query.includes('dark'), media: query, addEventListener() {}, removeEventListener() {} })
+    vi.stubGlobal('matchMedia', dark)
+    const { useColourScheme } = await loadModule()
+    expect(useColourScheme().scheme.value).toBe('dark')
+    expect(document.documentElement.classList.contains(DARK_MODE_CLASS)).toBe(true)
+    vi.unstubAllGlobals()
+  })
 })

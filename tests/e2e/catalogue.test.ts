@@ -49,6 +49,19 @@ describe.skipIf(!run)('catalogue in the browser', () => {
     expect(await nav.getByRole('link', { name: 'Users' }).count()).toBe(0)
   })
 
+  it('keeps each part number on one line on a 768 px tablet and writes the count with separators', async () => {
+    await page.setViewportSize({ width: 768, height: 1024 })
+    await page.goto(`${server.url}/parts`)
+    const numbers = page.getByRole('table').locator('tbody a.part-number')
+    await numbers.first().waitFor()
+    const lineCounts = await numbers.evaluateAll((links) => links.map((link) => link.getClientRects().length))
+    expect(lineCounts.every((count) => count === 1)).toBe(true)
+    // The browser's locale here is en-US: CLDR groups thousands with a comma.
+    expect(await page.locator('.page-header p').textContent()).toMatch(/^\d{1,3}(,\d{3})* parts match$/)
+    await saveScreenshot(page, 'catalogue-768')
+    await page.setViewportSize({ width: 1280, height: 860 })
+  })
+
   it('logged no console errors', () => {
     expect(consoleErrors.filter((text) => !text.includes('401'))).toEqual([])
   })

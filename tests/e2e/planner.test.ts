@@ -59,20 +59,56 @@ describe.skipIf(!run)('technician: plan a build, get the verdict and the parts l
     expect(await page.getByRole('region', { name: /Mating pairs/ }).textContent()).toContain('Head on block')
   })
 
+  it('undoes a slot change with the browser Back button and redoes it with Forward', async () => {
+    const head = page.getByRole('combobox', { name: 'Cylinder head', exact: true })
+    await page.goBack()
+    await page.waitForURL((url) => url.searchParams.get('block') === 'TM-BL-1800' && !url.searchParams.has('head'))
+    await expect.poll(() => head.inputValue(), within).toBe('')
+    await page.goForward()
+    await page.waitForURL(/head=TM-HD-2000/)
+    await expect.poll(() => head.inputValue(), within).toBe('TM-HD-2000')
+    await expect.poll(() => verdictText(page), within).toBe('The parts chosen so far fit with modifications')
+  })
+
   it('takes the build context and fills the gaps with parts that fit', async () => {
     await page.getByLabel('Target power').fill('110')
     await page.getByLabel('Fuel octane').fill('91')
     await page.getByLabel('Car model year').fill('1994')
     await page.getByLabel('Car model year').press('Tab')
     await page.waitForURL(/power=110.*octane=91.*year=1994/)
-    await page.getByRole('button', { name: 'Fill the gaps' }).click()
+    // A double click runs it once: one toast, one set of choices.
+    await page.getByRole('button', { name: 'Fill the gaps' }).dblclick()
     await expect.poll(() => page.locator('.p-toast').textContent(), within).toContain('Filled 16 slots')
+    await page.waitForTimeout(500)
+    expect(await page.locator('.p-toast-message').count()).toBe(1)
+    // The toast sits below the top bar, clear of its controls.
+    const bar = await page.locator('header.app-bar').boundingBox()
+    const toast = await page.locator('.p-toast-message').boundingBox()
+    expect(toast!.y).toBeGreaterThanOrEqual(bar!.y + bar!.height)
+    await page.screenshot({ path: `${SCREENSHOT_DIR}/planner-fill-toast.png` })
     expect(await page.locator('.p-toast').textContent()).toContain('Every slot now has a part.')
     await expect.poll(() => page.getByRole('combobox', { name: 'Head gasket', exact: true }).inputValue(), within).toMatch(/^TM-HG-/)
     await expect.poll(() => page.locator('.planner-verdict').getAttribute('aria-busy'), within).toBe('false')
     // The demo's classic swap: the TK18 block needs an oil feed restrictor under the TK20V head.
     await expect.poll(() => verdictText(page), within).toBe('The build fits with modifications')
     expect(await page.getByRole('region', { name: /Modifications checklist/ }).textContent()).toContain('Fit an oil feed restrictor')
+  })
+
+  it('opens exactly the number a scanner types into a slot on Enter, and Back puts the old part back', async () => {
+    const gasket = page.getByRole('combobox', { name: 'Head gasket', exact: true })
+    const before = await gasket.inputValue()
+    expect(before).not.toBe('TM-HG-2016')
+    await gasket.focus()
+    // A scanner or autofill: the whole number in one input event, Enter at once.
+    await gasket.fill('TM-HG-2016')
+    await gasket.press('Enter')
+    await page.waitForURL(/head-gasket=TM-HG-2016/)
+    await expect.poll(() => gasket.inputValue(), within).toBe('TM-HG-2016')
+    await page.goBack()
+    await page.waitForURL(new RegExp(`head-gasket=${before}`))
+    await expect.poll(() => gasket.inputValue(), within).toBe(before)
+    await expect.poll(() => page.locator('.planner-verdict').getAttribute('aria-busy'), within).toBe('false')
+    await expect.poll(() => verdictText(page), within).toBe('The build fits with modifications')
   })
 
   it('shows the full parts list with quantities, the figures with units and the cautions in plain sight', async () => {
@@ -163,6 +199,29 @@ describe.skipIf(!run)('technician: plan a build, get the verdict and the parts l
     expect(overflow).toBeLessThanOrEqual(0)
     await saveScreenshot(page, 'planner-dark-768')
     await page.getByRole('button', { name: 'Use light theme' }).click()
+  })
+
+  it('finds sheets by name on a 768 px tablet, with finger-sized Rename and Delete kept apart', async () => {
+    await page.setViewportSize({ width: 768, height: 1024 })
+    await page.goto(`${server.url}/builds`)
+    const row = page.getByRole('row').filter({ hasText: 'Bench swap for bay 3, customer copy' })
+    await row.waitFor()
+    const rename = await row.getByRole('button', { name: /^Rename / }).boundingBox()
+    const remove = await row.getByRole('button', { name: /^Delete / }).boundingBox()
+    for (const box of [rename!, remove!]) {
+      expect(box.width).toBeGreaterThanOrEqual(44)
+      expect(box.height).toBeGreaterThanOrEqual(44)
+    }
+    expect(remove!.x - (rename!.x + rename!.width)).toBeGreaterThanOrEqual(16)
+    const overflow = await page.evaluate(() => document.documentElement.scrollWidth - document.documentElement.clientWidth)
+    expect(overflow).toBeLessThanOrEqual(0)
+    await saveScreenshot(page, 'build-sheets-768')
+    await page.getByLabel('Search').fill('TK18 head')
+    await expect.poll(() => page.getByRole('status').filter({ hasText: / of \d+ sheets/ }).textContent(), within).toMatch(/^[1-9]\d* of \d+ sheets$/)
+    expect(await page.getByRole('row').filter({ hasText: 'Bench swap for bay 3' }).count()).toBe(0)
+    expect(await page.getByRole('row').filter({ hasText: 'TK18 head on a TK20V block' }).count()).toBeGreaterThan(0)
+    await saveScreenshot(page, 'build-sheets-search-768')
+    await page.setViewportSize({ width: 1280, height: 900 })
   })
 
   it('logged no console errors', () => {

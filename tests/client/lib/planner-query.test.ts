@@ -1,5 +1,5 @@
 import { describe, expect, it } from 'vitest'
-import { evaluateBody, isEmptyBuild, plannerFromQuery, plannerToQuery, sameBuild } from '@/lib/planner-query'
+import { buildKey, evaluateBody, isEmptyBuild, plannerFromQuery, plannerToQuery, sameBuild, withContext, withSlots } from '@/lib/planner-query'
 
 describe('planner address', () => {
   it('reads slots and context from the query and writes the same query back', () => {
@@ -42,5 +42,24 @@ describe('planner address', () => {
       slots: { block: 'ZX-BL-1' },
       fuelOctane: 95,
     })
+  })
+})
+
+describe('changing a build', () => {
+  it('sets a slot trimmed, replaces it, and clears it for an empty value, leaving the others', () => {
+    const start = { slots: { block: 'ZX-BL-1', head: 'ZX-HD-2' }, context: { targetPowerKw: 90 } }
+    expect(withSlots(start, { head: ' ZX-HD-3 ', 'head-gasket': 'ZX-HG-1' }).slots).toEqual({ block: 'ZX-BL-1', head: 'ZX-HD-3', 'head-gasket': 'ZX-HG-1' })
+    expect(withSlots(start, { head: null, block: '  ' }).slots).toEqual({})
+    expect(start.slots).toEqual({ block: 'ZX-BL-1', head: 'ZX-HD-2' })
+  })
+
+  it('drops a context value that is cleared and keeps the rest', () => {
+    const start = { slots: {}, context: { targetPowerKw: 90, fuelOctane: 91 } }
+    expect(withContext(start, { targetPowerKw: undefined }).context).toEqual({ fuelOctane: 91 })
+    expect(withContext(start, { vin: '' }).context).toEqual({ targetPowerKw: 90, fuelOctane: 91 })
+  })
+
+  it('gives one key to the same build whatever order its address was written in', () => {
+    expect(buildKey(plannerFromQuery({ head: 'ZX-HD-2', block: 'ZX-BL-1' }))).toBe(buildKey(plannerFromQuery({ block: 'ZX-BL-1', head: 'ZX-HD-2' })))
   })
 })

@@ -1,5 +1,5 @@
 import { describe, expect, it } from 'vitest'
-import { slotOptionGroups } from '@/lib/slot-options'
+import { slotOptionGroups, typedChoice } from '@/lib/slot-options'
 import { slotStatuses } from '@/lib/slot-status'
 import { makeCandidate, makePair, makePart } from '../../helpers/client-factories'
 
@@ -43,5 +43,29 @@ describe('slot status', () => {
     expect(statuses.head).toEqual({ verdict: 'does-not-fit', text: 'Distributor on head' })
     expect(statuses.block).toEqual({ verdict: 'fits-with-modification', text: 'Head on block' })
     expect(statuses['head-gasket']).toEqual({ verdict: 'fits', text: 'Fits its 1 mating part' })
+  })
+})
+
+describe('Enter on typed text in a slot picker', () => {
+  const head = (partNumber: string) => makePart(partNumber, 'head')
+  // The list shown at focus (an empty search) puts a fitting head first.
+  const atFocus = slotOptionGroups('head', '', [makeCandidate(head('TM-HD-2000'))], [head('TM-HD-1800'), head('TM-HD-2000')])
+
+  it('takes the typed number when the list on show answers an older search (the whole value arrived at once)', () => {
+    expect(typedChoice('TM-HD-1800', slotOptionGroups('head', '', [makeCandidate(head('TM-HD-2000'))], []), '')).toBe('TM-HD-1800')
+  })
+
+  it('takes the option with exactly the typed number, whatever the spelling, even when it is not first', () => {
+    expect(typedChoice('tm hd 1800', atFocus, '')).toBe('TM-HD-1800')
+    expect(typedChoice('TM-HD-1800', atFocus, 'TM-HD-1800')).toBe('TM-HD-1800')
+  })
+
+  it('leaves Enter to the list when it answers what was typed and nothing matches exactly (a partial number)', () => {
+    expect(typedChoice('TM-HD', atFocus, 'TM-HD')).toBeNull()
+  })
+
+  it('takes a mark as typed before any answer came, for the server to resolve', () => {
+    expect(typedChoice(' 2HX ', [], null)).toBe('2HX')
+    expect(typedChoice('   ', atFocus, '')).toBeNull()
   })
 })

@@ -1,8 +1,10 @@
 import { createPinia, setActivePinia } from 'pinia'
-import { beforeEach, describe, expect, it, vi } from 'vitest'
+import { afterEach, beforeEach, describe, expect, it, vi } from 'vitest'
 import type { BuildSheet } from '@shared/schemas/build'
 import { ApiError } from '@/api/http'
-import { usePlannerStore } from '@/stores/planner'
+import { plannerToQuery } from '@/lib/planner-query'
+import { sheetState, usePlannerStore } from '@/stores/planner'
+import { makeEvaluation, makePart } from '../../helpers/client-factories'
 
 function sheet(overrides: Partial<BuildSheet> = {}): BuildSheet {
   return {
@@ -21,63 +23,35 @@ function sheet(overrides: Partial<BuildSheet> = {}): BuildSheet {
   }
 }
 
+/** The network edge: every evaluation answers `answer`; the bodies sent are kept. */
+function stubEvaluate(answer = makeEvaluation()) {
+  const bodies: unknown[] = []
+  vi.stubGlobal('fetch', async (_url: string, init: RequestInit) => {
+    bodies.push(JSON.parse(String(init.body)))
+    return new Response(JSON.stringify(answer), { status: 200, headers: { 'Content-Type': 'application/json' } })
+  })
+  return bodies
+}
+
 describe('planner store', () => {
   beforeEach(() => setActivePinia(createPinia()))
+  afterEach(() => vi.unstubAllGlobals())
 
-  it('takes a build from the address and gives the same address back', () => {
-    const planner = usePlannerStore()
-    planner.applyQuery({ head: 'ZX-HD-2', block: 'ZY-BL-1', power: '120', octane: '95' })
-    expect(planner.filledCount).toBe(2)
-    expect(planner.query).toEqual({ block: 'ZY-BL-1', head: 'ZX-HD-2', power: '120', octane: '95' })
-  })
-
-  it('changes the address when a slot is set, replaced or cleared', () => {
-    const planner = usePlannerStore()
-    planner.setSlot('head', ' ZX-HD-2 ')
-    planner.setSlot('block', 'ZY-BL-1')
-    planner.setSlot('head', null)
-    expect(planner.query).toEqual({ block: 'ZY-BL-1' })
-  })
-
-  it('drops a context value that is cleared', () => {
-    const planner = usePlannerStore()
-    planner.setContext({ targetPowerKw: 90, fuelOctane: 91 })
-    planner.setContext({ targetPowerKw: undefined })
-    expect(planner.context).toEqual({ fuelOctane: 91 })
-  })
-
-  it('opens a saved sheet with its slots and context and reports changes against it', () => {
-    const planner = usePlannerStore()
-    planner.openSheet(sheet())
-    expect(planner.query).toEqual({ block: 'ZY-BL-1', head: 'ZX-HD-2', power: '110' })
-    expect(planner.isDirty).toBe(false)
-    planner.setSlot('head-gasket', 'ZX-HG-1')
-    expect(planner.isDirty).toBe(true)
-    planner.setSlot('head-gasket', null)
-    expect(planner.isDirty).toBe(false)
-  })
-
-  it('keeps the edits in the address when a shared link opens a sheet', () => {
-    const planner = usePlannerStore()
-    planner.applyQuery({ block: 'ZY-BL-9' })
-    planner.openSheet(sheet(), true)
-    expect(planner.sheet?.id).toBe(7)
-    expect(planner.slots).toEqual({ block: 'ZY-BL-9' })
-    expect(planner.isDirty).toBe(true)
+  it('gives a saved sheet\'s build as the address holds it, leaving out empty context', () => {
+    expect(plannerToQuery(sheetState(sheet()))).toEqual({ block: 'ZY-BL-1', head: 'ZX-HD-2', power: '110' })
   })
 
   it('saves every context field, clearing with null what the build no longer has', () => {
     const planner = usePlannerStore()
-    planner.openSheet(sheet({ fuelOctane: 91 }))
-    planner.setContext({ fuelOctane: undefined })
-    expect(planner.sheetUpdate()).toEqual({
+    const state = { slots: { block: 'ZY-BL-1', head: 'ZX-HD-2' }, context: { targetPowerKw: 110 } }
+    expect(planner.sheetUpdate(state)).toEqual({
       slots: { block: 'ZY-BL-1', head: 'ZX-HD-2' },
       targetPowerKw: 110,
       fuelOctane: null,
       chassisModelYear: null,
       vin: null,
     })
-    expect(planner.sheetInput('Copy', 'n')).toEqual({ slots: { block: 'ZY-BL-1', head: 'ZX-HD-2' }, targetPowerKw: 110, name: 'Copy', notes: 'n' })
+    expect(planner.sheetInput(state, 'Copy', 'n')).toEqual({ slots: { block: 'ZY-BL-1', head: 'ZX-HD-2' }, targetPowerKw: 110, name: 'Copy', notes: 'n' })
   })
 
   it('puts the server\'s field messages next to the slot or field they name', () => {
@@ -93,12 +67,29 @@ describe('planner store', () => {
   })
 
   it('asks the server nothing and shows no verdict while no slot is filled', async () => {
-    const fetchSpy = vi.spyOn(globalThis, 'fetch')
+    const bodies = stubEvaluate()
     const planner = usePlannerStore()
-    planner.setContext({ targetPowerKw: 100 })
-    await planner.evaluate()
-    expect(fetchSpy).not.toHaveBeenCalled()
+    await planner.evaluate({ slots: {}, context: { targetPowerKw: 100 } })
+    expect(bodies).toEqual([])
     expect(planner.result).toBeNull()
-    fetchSpy.mockRestore()
+  })
+
+  it('checks a build once, however often it is asked, and again when the build changes', async () => {
+    const bodies = stubEvaluate()
+    const planner = usePlannerStore()
+    await planner.evaluate({ slots: { block: 'ZY-BL-1' }, context: {} })
+    await planner.evaluate({ slots: { block: 'ZY-BL-1' }, context: {} })
+    await planner.evaluate({ slots: { block: 'ZY-BL-1', head: 'ZX-HD-2' }, context: {} })
+    expect(bodies).toEqual([{ slots: { block: 'ZY-BL-1' } }, { slots: { block: 'ZY-BL-1', head: 'ZX-HD-2' } }])
+  })
+
+  it('gives the current number of a slot typed as a mark, and does not check that same build again', async () => {
+    const bodies = stubEvaluate(makeEvaluation({ parts: { head: makePart('ZX-HD-2', 'head') } }))
+    const planner = usePlannerStore()
+    const current = await planner.evaluate({ slots: { head: '2HX' }, context: {} })
+    expect(current).toEqual({ head: 'ZX-HD-2' })
+    planner.markEvaluated({ slots: { head: 'ZX-HD-2' }, context: {} })
+    await planner.evaluate({ slots: { head: 'ZX-HD-2' }, context: {} })
+    expect(bodies).toHaveLength(1)
   })
 })

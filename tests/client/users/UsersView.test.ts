@@ -1,5 +1,8 @@
 import { flushPromises, mount } from '@vue/test-utils'
 import PrimeVue from 'primevue/config'
+import ConfirmDialog from 'primevue/confirmdialog'
+import ConfirmationService from 'primevue/confirmationservice'
+import Select from 'primevue/select'
 import Toast from 'primevue/toast'
 import ToastService from 'primevue/toastservice'
 import { afterEach, describe, expect, it, vi } from 'vitest'
@@ -30,7 +33,7 @@ function errorAnswer(status: number, code: string, message: string, details?: { 
 /** The view as the layout shows it: with the app's one Toast beside it. */
 async function mountView() {
   const Host = defineComponent({ render: () => [h(Toast), h(UsersView)] })
-  const wrapper = mount(Host, { global: { plugins: [PrimeVue, ToastService], stubs: { DataTable: true, Column: true } }, attachTo: document.body })
+  const wrapper = mount(Host, { global: { plugins: [PrimeVue, ToastService, ConfirmationService], stubs: { DataTable: true, Column: true } }, attachTo: document.body })
   await flushPromises()
   return wrapper
 }
@@ -110,6 +113,91 @@ describe('UsersView, adding a user', () => {
     expect(document.body.textContent).toContain('Added New Tech')
     expect((wrapper.get('#new-user-email').element as HTMLInputElement).value).toBe('')
     expect(calls.filter((call) => call.method === 'GET')).toHaveLength(2)
+    wrapper.unmount()
+  })
+})
+
+describe('UsersView, changing a role', () => {
+  const tech = { id: 2, email: 'tech@fitwright.test', name: 'Tech Person', role: 'tech' }
+
+  /** GET answers the stored list; PATCH answers `onUpdate` and, when it succeeds, changes the stored role. */
+  function stubUsers(onUpdate: () => Response) {
+    let stored = [admin, tech]
+    const patches: unknown[] = []
+    vi.stubGlobal('fetch', async (url: string, init: RequestInit) => {
+      if (init.method === 'PATCH') {
+        const body = JSON.parse(String(init.body)) as { role: string }
+        patches.push(body)
+        const answer = onUpdate()
+        if (answer.ok) stored = stored.map((user) => (url.endsWith(`/${user.id}`) ? { ...user, role: body.role } : user))
+        return answer
+      }
+      return new Response(JSON.stringify(stored), { status: 200, headers: { 'Content-Type': 'application/json' } })
+    })
+    return patches
+  }
+
+  async function mountWithDialogs() {
+    const Host = defineComponent({ render: () => [h(Toast), h(ConfirmDialog), h(UsersView)] })
+    const wrapper = mount(Host, { global: { plugins: [PrimeVue, ToastService, ConfirmationService] }, attachTo: document.body })
+    await flushPromises()
+    return wrapper
+  }
+
+  const roleSelect = (wrapper: Awaited<ReturnType<typeof mountWithDialogs>>, name: string) =>
+    wrapper.findAllComponents(Select).find((select) => select.attributes('aria-label') === `Role of ${name}` || select.props('ariaLabel') === `Role of ${name}`)!
+
+  async function chooseRole(wrapper: Awaited<ReturnType<typeof mountWithDialogs>>, name: string, role: string) {
+    roleSelect(wrapper, name).vm.$emit('update:modelValue', role)
+    await flushPromises()
+  }
+
+  const dialogButton = (label: string) =>
+    [...document.body.querySelectorAll<HTMLButtonElement>('[role="alertdialog"] button')].find((button) => button.textContent?.trim() === label)
+
+  it('asks before changing a role and changes nothing when kept', async () => {
+    const patches = stubUsers(() => new Response('{}', { status: 200 }))
+    const wrapper = await mountWithDialogs()
+
+    await chooseRole(wrapper, 'Tech Person', 'editor')
+    expect(document.body.querySelector('[role="alertdialog"]')?.textContent).toContain('Make Tech Person Catalogue editor?')
+    dialogButton('Keep Technician')!.click()
+    await flushPromises()
+
+    expect(patches).toEqual([])
+    expect(roleSelect(wrapper, 'Tech Person').props('modelValue')).toBe('tech')
+    wrapper.unmount()
+  })
+
+  it('shows a refused change and puts the select back to the stored role', async () => {
+    const patches = stubUsers(() => errorAnswer(409, 'conflict', 'You cannot take the administrator role from yourself.'))
+    const wrapper = await mountWithDialogs()
+
+    await chooseRole(wrapper, 'Admin Person', 'counter')
+    // While asked and saved, the select shows the role chosen.
+    expect(roleSelect(wrapper, 'Admin Person').text()).toContain('Parts counter')
+    dialogButton('Make Parts counter')!.click()
+    await flushPromises()
+
+    expect(patches).toEqual([{ role: 'counter' }])
+    expect(document.body.textContent).toContain('Role not changed')
+    expect(document.body.textContent).toContain('You cannot take the administrator role from yourself.')
+    expect(roleSelect(wrapper, 'Admin Person').props('modelValue')).toBe('admin')
+    expect(roleSelect(wrapper, 'Admin Person').text()).toContain('Administrator')
+    wrapper.unmount()
+  })
+
+  it('changes the role once confirmed and says so', async () => {
+    const user = { ...tech, role: 'editor' }
+    stubUsers(() => new Response(JSON.stringify(user), { status: 200, headers: { 'Content-Type': 'application/json' } }))
+    const wrapper = await mountWithDialogs()
+
+    await chooseRole(wrapper, 'Tech Person', 'editor')
+    dialogButton('Make Catalogue editor')!.click()
+    await flushPromises()
+
+    expect(document.body.textContent).toContain('Tech Person is now Catalogue editor')
+    expect(roleSelect(wrapper, 'Tech Person').props('modelValue')).toBe('editor')
     wrapper.unmount()
   })
 })
