@@ -28,6 +28,7 @@ export class FitGraphIndex {
   private work: Promise<unknown> = Promise.resolve()
   /** Changes applied while a background reload runs, to apply again to the new graph. */
   private replay: CatalogueChanges[] | null = null
+  private reloading: Promise<void> | null = null
 
   constructor(dataSource: DataSource) {
     this.repository = new LinkRepository(databaseOf(dataSource))
@@ -67,13 +68,15 @@ export class FitGraphIndex {
   /**
    * For a write that cannot say what it touched: reloads in the background, a
    * page at a time, while the current graph keeps answering; changes applied
-   * meanwhile are applied again to the new graph before it takes over.
+   * meanwhile are applied again to the new graph before it takes over. The
+   * promise settles when it has (await it where the next answer must show the write).
    */
-  invalidate(): void {
-    if (!this.graph || this.replay) return
+  invalidate(): Promise<void> {
+    if (!this.graph) return Promise.resolve()
+    if (this.reloading) return this.reloading
     const replay: CatalogueChanges[] = []
     this.replay = replay
-    void this.readAll()
+    this.reloading = this.readAll()
       .then(async (fresh) => {
         for (const changes of replay) await this.applyTo(fresh, changes)
         this.graph = fresh
@@ -81,13 +84,15 @@ export class FitGraphIndex {
       .catch((error: unknown) => console.error('Reloading the fit graph failed; the previous graph keeps answering.', error))
       .finally(() => {
         this.replay = null
+        this.reloading = null
       })
+    return this.reloading
   }
 
   /** Waits for writes already handed in (and a background reload) to land: for tests and shutdown. */
   async settled(): Promise<void> {
     await this.work
-    while (this.replay) await nextTurn()
+    await this.reloading
   }
 
   private async readAll(): Promise<FitGraph> {
