@@ -3,6 +3,7 @@ import type { FieldError } from '../../shared/schemas/errors'
 import { AppError } from '../errors/app-error'
 import type { ImportRecordType } from './import-change.entity'
 import { SQL_NOW, type PreviousRows } from './change-log'
+import { rewritePartWords } from '../catalogue/part-word-writer'
 
 type ChangeRow = { recordType: ImportRecordType; recordId: number; action: 'updated' | 'deleted'; previousValues: string }
 type Blocker = { batchId: number | null; fileName: string | null; what: string }
@@ -111,5 +112,6 @@ export function revertBatch(db: Database.Database, batchId: number, userName: st
   for (const change of changes) if (change.action === 'updated') restore(change.type, change.recordId, 'updated', change.rows)
   for (const table of ['link', 'part_identity', 'part', 'modification']) db.prepare(`DELETE FROM ${table} WHERE batchId = ?`).run(batchId)
   for (const change of changes) if (change.action === 'deleted') restore(change.type, change.recordId, 'deleted', change.rows)
+  rewritePartWords(db, changes.filter((change) => change.type === 'part').map((change) => change.recordId))
   db.prepare(`UPDATE import_batch SET status = 'reverted', revertedAt = ${SQL_NOW}, revertedByName = ? WHERE id = ?`).run(userName, batchId)
 }

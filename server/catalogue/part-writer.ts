@@ -1,6 +1,7 @@
 import type Database from 'better-sqlite3'
 import type { PartInput } from '../../shared/schemas/part-input'
 import { normalisePartCode } from '../../shared/schemas/part'
+import { rewritePartWords } from './part-word-writer'
 
 export function partColumns(part: PartInput) {
   return {
@@ -33,5 +34,6 @@ export function insertPartRows(db: Database.Database, parts: PartInput[]): Map<s
     ids.set(part.partNumber, id)
     for (const mark of markRows(id, part)) insertMark.run(mark)
   }
+  rewritePartWords(db, ids.values())
   return ids
 }

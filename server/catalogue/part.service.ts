@@ -4,57 +4,32 @@ import { normalisePartCode } from '../../shared/schemas/part'
 import { databaseOf } from '../db/sqlite-connection'
 import { AppError } from '../errors/app-error'
 import { PartRepository, toPart, type PartRecord } from './part.repository'
-
-function escapeLike(value: string): string {
-  return value.replace(/[\\%_]/g, (c) => `\\${c}`)
-}
+import { PartSearchRepository } from './part-search.repository'
+import { wordsOf } from './part-words'
 
 export class PartService {
   private readonly repository: PartRepository
+  private readonly search: PartSearchRepository
 
-  constructor(private readonly dataSource: DataSource) {
-    this.repository = new PartRepository(databaseOf(dataSource))
+  constructor(dataSource: DataSource) {
+    const db = databaseOf(dataSource)
+    this.repository = new PartRepository(db)
+    this.search = new PartSearchRepository(db)
   }
 
   /**
-   * Search by part number, casting or stamped mark, superseded number, name or
-   * family. Exact and prefix matches on a number or mark rank first, because at
-   * the counter the customer usually holds the part.
+   * Search by part number, casting or stamped mark, superseded number, or
+   * words of the name or family. An exact number or mark ranks first, then a
+   * number or mark the text starts, then parts whose words the text's words
+   * start, because at the counter the customer usually holds the part.
    */
   async list(query: PartListQuery): Promise<PartList> {
-    const where: string[] = []
-    const params: unknown[] = []
-    if (query.kind) {
-      where.push('p.kind = ?')
-      params.push(query.kind)
-    }
     const text = query.q.trim()
-    const key = normalisePartCode(text)
-    let rank = '0'
-    const rankParams: unknown[] = []
-    if (text) {
-      const like = `%${escapeLike(text)}%`
-      const keyLike = `%${escapeLike(key)}%`
-      const matches = [`p.name LIKE ? ESCAPE '\\'`, `p.family LIKE ? ESCAPE '\\'`]
-      params.push(like, like)
-      if (key) {
-        matches.push(`p.partKey LIKE ? ESCAPE '\\'`, `p.id IN (SELECT partId FROM part_mark WHERE valueKey LIKE ? ESCAPE '\\')`)
-        params.push(keyLike, keyLike)
-        rank = `CASE WHEN p.partKey = ? OR p.id IN (SELECT partId FROM part_mark WHERE valueKey = ?) THEN 0
-                     WHEN p.partKey LIKE ? ESCAPE '\\' THEN 1 ELSE 2 END`
-        rankParams.push(key, key, `${escapeLike(key)}%`)
-      }
-      where.push(`(${matches.join(' OR ')})`)
-    }
-    const whereSql = where.length ? `WHERE ${where.join(' AND ')}` : ''
-    const [{ total }] = (await this.dataSource.query(`SELECT COUNT(*) AS total FROM part p ${whereSql}`, params)) as [
-      { total: number },
-    ]
-    const rows = (await this.dataSource.query(
-      `SELECT p.id AS id, ${rank} AS rank FROM part p ${whereSql} ORDER BY rank, p.partNumber LIMIT ? OFFSET ?`,
-      [...rankParams, ...params, query.pageSize, (query.page - 1) * query.pageSize],
-    )) as { id: number }[]
-    return { items: await this.byIds(rows.map((row) => row.id)), total }
+    const page = { limit: query.pageSize, offset: (query.page - 1) * query.pageSize }
+    const found = text
+      ? await this.search.search({ key: normalisePartCode(text), words: wordsOf(text), kind: query.kind, ...page })
+      : await this.search.browse(query.kind, page.limit, page.offset)
+    return { items: await this.byIds(found.ids), total: found.total }
   }
 
   /** Parts by id, with their marks, in the order of the ids given. */

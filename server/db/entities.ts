@@ -7,6 +7,7 @@ import { LinkEntity } from '../fitment/link.entity'
 import { ModificationEntity } from '../catalogue/modification.entity'
 import { PartMarkEntity } from '../catalogue/part-mark.entity'
 import { PartEntity } from '../catalogue/part.entity'
+import { PartWordEntity } from '../catalogue/part-word.entity'
 import { SessionEntity } from '../auth/session.entity'
 import { UserEntity } from '../users/user.entity'
 
@@ -16,6 +17,7 @@ export const entities = [
   AppSettingEntity,
   PartEntity,
   PartMarkEntity,
+  PartWordEntity,
   ModificationEntity,
   LinkEntity,
   IdentityEntity,

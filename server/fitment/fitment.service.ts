@@ -1,24 +1,19 @@
-import { BUILD_SLOTS, isSlotId } from '../../shared/build-template'
-import {
-  RELATIONS,
-  type ExplanationStep,
-  type FitResult,
-  type FitsResponse,
-  type Relation,
-} from '../../shared/schemas/fitment'
-import type { PartKind } from '../../shared/schemas/part-kinds'
-import { chainSteps } from './explain'
+import { isSlotId } from '../../shared/build-template'
+import { RELATIONS, type FitGroupPage, type FitResult, type FitsQuery, type FitsResponse } from '../../shared/schemas/fitment'
+import type { Part } from '../../shared/schemas/part'
+import { chainSteps, loadChainDetails, planChain, type Chain } from './explain'
 import type { FitGraph, FitGraphIndex } from './fit-graph'
+import { compareGroups, pageByNumber, type GroupKey } from './fit-pages'
 import type { Found } from './found'
 import type { InferredFits } from './inferred-fits'
-import { reviewedFits } from './graph-search'
+import { reviewedFits, type ReviewedFit } from './graph-search'
 import type { ModificationService } from '../catalogue/modification.service'
 import type { PartService } from '../catalogue/part.service'
 
-const KIND_ORDER = new Map<string, number>(BUILD_SLOTS.map((slot, index) => [slot.id, index]))
-const REVIEW_ORDER = { approved: 0, proposed: 1, inferred: 2 }
+export type { FitsQuery }
 
-export type FitsQuery = { relation?: Relation; kind?: PartKind; inferred: boolean; inferredLimit: number }
+type ReviewedGroup = GroupKey & { fits: ReviewedFit[] }
+type PageGroup = GroupKey & { total: number; found: Found[] }
 
 export class FitmentService {
   constructor(
@@ -31,75 +26,117 @@ export class FitmentService {
   /**
    * What else fits a part: its reviewed links (approved, and proposed ones
    * marked as such), the same through every identical part, then fits the
-   * rules infer from attributes among parts of mating kinds.
+   * rules infer from attributes among parts of mating kinds. Every (kind,
+   * relation) group is counted in full and answered one page at a time, so a
+   * part with thousands of links answers as fast as one with ten; whole parts,
+   * link details and modifications are read for the page only.
    */
   async fitsFor(code: string, query: FitsQuery): Promise<FitsResponse> {
     const entity = await this.parts.requireEntity(code)
     const graph = await this.graphIndex.snapshot()
     const members = graph.classOf(entity.id)
-    const reviewed = this.reviewedFits(graph, entity.id)
-    const inferred = query.inferred && isSlotId(entity.kind)
-      ? await this.inferred.find(entity.kind, entity.attributes, entity.yearTo, new Set([...members, ...reviewed.keys()]), {
-          relation: query.relation,
-          kind: query.kind,
-          offset: 0,
-          limit: query.inferredLimit,
-        })
-      : { found: [], groups: [] }
-    const all = [...reviewed.values(), ...inferred.found].filter(
-      (found) =>
-        (!query.relation || found.relation === query.relation) &&
-        (!query.kind || graph.part(found.partId).kind === query.kind),
-    )
-    all.sort((a, b) => this.compare(graph, a, b))
-    const ids = [entity.id, ...members.filter((id) => id !== entity.id), ...all.map((found) => found.partId)]
-    const partList = await this.parts.byIds(ids)
+    const reviewed = reviewedFits(graph, entity.id)
+    const offset = (query.page - 1) * query.pageSize
+    const groups: PageGroup[] = []
+    const chains = new Map<Found, Chain>()
+    for (const group of groupReviewed(graph, reviewed, query)) {
+      const byTarget = new Map(group.fits.map((fit) => [fit.target, fit]))
+      const page = pageByNumber([...byTarget.keys()], (id) => graph.partNumberOf(id), offset, query.pageSize)
+      const pageChains = page.map((target) => {
+        const fit = byTarget.get(target)!
+        return planChain(graph, entity.id, fit.member, graph.linkAt(fit.slot), fit.other, target)
+      })
+      const found = pageChains.map((chain, index) => {
+        const item = reviewedFound(page[index]!, chain)
+        chains.set(item, chain)
+        return item
+      })
+      groups.push({ kind: group.kind, relation: group.relation, source: group.source, total: group.fits.length, found })
+    }
+    if (query.inferred && isSlotId(entity.kind)) {
+      const answer = await this.inferred.find(entity.kind, entity.attributes, entity.yearTo, new Set([...members, ...reviewed.keys()]), {
+        relation: query.relation,
+        kind: query.kind,
+        offset,
+        limit: query.pageSize,
+      })
+      for (const { kind, relation, total } of answer.groups) {
+        const found = answer.found.filter((item) => item.relation === relation && graph.kindOf(item.partId) === kind)
+        groups.push({ kind, relation, source: 'inferred', total, found })
+      }
+    }
+    groups.sort(compareGroups)
+
+    const details = await loadChainDetails(graph, [...chains.values()])
+    for (const [found, chain] of chains) {
+      found.modificationNames = details.links.get(chain.link.id)?.modifications ?? []
+      found.explanation = chainSteps(graph, chain, details)
+    }
+    const identical = members.filter((id) => id !== entity.id)
+    const shown = groups.flatMap((group) => group.found)
+    const partList = await this.parts.byIds([entity.id, ...identical, ...shown.map((found) => found.partId)])
     const byNumber = new Map(partList.map((part) => [part.partNumber, part]))
-    const mods = await this.modifications.byNames(all.flatMap((found) => found.modificationNames))
-    const results: FitResult[] = all.map((found) => ({
-      part: byNumber.get(graph.part(found.partId).partNumber)!,
-      relation: found.relation,
-      decidedBy: found.decidedBy,
-      review: found.review,
-      ruleIds: found.ruleIds,
-      modifications: found.modificationNames.map((name) => mods.get(name)!),
-      explanation: found.explanation,
-    }))
+    const partOf = (id: number): Part | undefined => byNumber.get(graph.partNumberOf(id))
+    const mods = await this.modifications.byNames(shown.flatMap((found) => found.modificationNames))
+    const toResult = (found: Found): FitResult[] => {
+      const part = partOf(found.partId)
+      // A part removed between the count and this read is left out rather than shown half.
+      if (!part) return []
+      return [
+        {
+          part,
+          relation: found.relation,
+          decidedBy: found.decidedBy,
+          review: found.review,
+          ruleIds: found.ruleIds,
+          modifications: found.modificationNames.flatMap((name) => mods.get(name) ?? []),
+          explanation: found.explanation,
+        },
+      ]
+    }
     return {
       part: byNumber.get(entity.partNumber)!,
-      identical: members.filter((id) => id !== entity.id).map((id) => byNumber.get(graph.part(id).partNumber)!),
-      results,
-      truncated: inferred.groups
-        .filter((group) => group.total > query.inferredLimit)
-        .map((group) => ({ ...group, shown: query.inferredLimit })),
+      identical: identical.flatMap((id) => partOf(id) ?? []),
+      page: query.page,
+      pageSize: query.pageSize,
+      groups: groups.map(
+        (group): FitGroupPage => ({
+          kind: group.kind,
+          relation: group.relation,
+          source: group.source,
+          total: group.total,
+          offset,
+          results: group.found.flatMap(toResult),
+        }),
+      ),
     }
   }
+}
 
-  private compare(graph: FitGraph, a: Found, b: Found): number {
-    const partA = graph.part(a.partId)
-    const partB = graph.part(b.partId)
-    return (
-      Number(a.review === 'inferred') - Number(b.review === 'inferred') ||
-      (KIND_ORDER.get(partA.kind) ?? 99) - (KIND_ORDER.get(partB.kind) ?? 99) ||
-      RELATIONS.indexOf(a.relation) - RELATIONS.indexOf(b.relation) ||
-      REVIEW_ORDER[a.review] - REVIEW_ORDER[b.review] ||
-      partA.partNumber.localeCompare(partB.partNumber)
-    )
+/** Reviewed fits by kind and relation, under the query's filters. */
+function groupReviewed(graph: FitGraph, reviewed: Map<number, ReviewedFit>, query: Pick<FitsQuery, 'kind' | 'relation'>): ReviewedGroup[] {
+  const groups = new Map<string, ReviewedGroup>()
+  for (const fit of reviewed.values()) {
+    const kind = graph.kindOf(fit.target)
+    const relation = RELATIONS[graph.links.relation[fit.slot]!]!
+    if ((query.kind && kind !== query.kind) || (query.relation && relation !== query.relation)) continue
+    const key = `${kind}|${relation}`
+    let group = groups.get(key)
+    if (!group) groups.set(key, (group = { kind, relation, source: 'reviewed', fits: [] }))
+    group.fits.push(fit)
   }
+  return [...groups.values()]
+}
 
-  private reviewedFits(graph: FitGraph, partId: number): Map<number, Found> {
-    const found = new Map<number, Found>()
-    for (const { target, link, member, other } of reviewedFits(graph, partId).values()) {
-      found.set(target, {
-        partId: target,
-        relation: link.relation,
-        decidedBy: 'link',
-        review: link.status === 'approved' ? 'approved' : 'proposed',
-        ruleIds: [],
-        modificationNames: link.modifications,
-        explanation: chainSteps(graph, partId, member, link, other, target),
-      })
-    }
-    return found
+/** A reviewed answer; its modifications and explanation follow once the page's link details are read. */
+function reviewedFound(target: number, chain: Chain): Found {
+  return {
+    partId: target,
+    relation: chain.link.relation,
+    decidedBy: 'link',
+    review: chain.link.status === 'approved' ? 'approved' : 'proposed',
+    ruleIds: [],
+    modificationNames: [],
+    explanation: [],
   }
 }

@@ -6,37 +6,31 @@ import {
   type GraphPath,
   type Neighbourhood,
 } from '../../shared/schemas/graph'
-import type { FitGraph, GraphIdentity, GraphLink } from './fit-graph'
-import type { FitGraphIndex } from './fit-graph'
-import { shortestFitPath } from './graph-search'
+import type { FitGraph, FitGraphIndex, GraphIdentity, GraphLink } from './fit-graph'
+import { neighbourhoodOf, shortestFitPath } from './graph-search'
 import type { PartService } from '../catalogue/part.service'
 
-function linkEdge(graph: FitGraph, link: GraphLink): GraphEdge {
+function linkEdge(graph: FitGraph, link: GraphLink, detail: { note: string; modifications: string[] } | undefined): GraphEdge {
   return {
     id: `link-${link.id}`,
-    source: graph.part(link.a).partNumber,
-    target: graph.part(link.b).partNumber,
+    source: graph.partNumberOf(link.a),
+    target: graph.partNumberOf(link.b),
     type: 'link',
     relation: link.relation,
     review: link.status,
-    note: link.note || undefined,
-    modifications: link.modifications,
+    note: detail?.note || undefined,
+    modifications: detail?.modifications ?? [],
   }
 }
 
-function identityEdge(graph: FitGraph, identity: GraphIdentity): GraphEdge {
+function identityEdge(graph: FitGraph, identity: GraphIdentity, detail: { note: string } | undefined): GraphEdge {
   return {
     id: `identity-${identity.id}`,
-    source: graph.part(identity.a).partNumber,
-    target: graph.part(identity.b).partNumber,
+    source: graph.partNumberOf(identity.a),
+    target: graph.partNumberOf(identity.b),
     type: 'identity',
-    note: identity.note || undefined,
+    note: detail?.note || undefined,
   }
-}
-
-function node(graph: FitGraph, id: number, distance: number): GraphNode {
-  const part = graph.part(id)
-  return { id: part.partNumber, partNumber: part.partNumber, name: part.name, kind: part.kind, family: part.family, distance }
 }
 
 export class GraphService {
@@ -45,30 +39,61 @@ export class GraphService {
     private readonly graphIndex: FitGraphIndex,
   ) {}
 
+  /** The edges' notes and modifications, read only for the edges an answer returns. */
+  private async edges(graph: FitGraph, links: GraphLink[], identities: GraphIdentity[]): Promise<Map<string, GraphEdge>> {
+    const [linkDetails, identityDetails] = await Promise.all([
+      graph.details.links(links.map((link) => link.id)),
+      graph.details.identities(identities.map((identity) => identity.id)),
+    ])
+    const edges = new Map<string, GraphEdge>()
+    for (const identity of identities) edges.set(`identity-${identity.id}`, identityEdge(graph, identity, identityDetails.get(identity.id)))
+    for (const link of links) edges.set(`link-${link.id}`, linkEdge(graph, link, linkDetails.get(link.id)))
+    return edges
+  }
+
+  /** Name and family come from the catalogue rows, for the nodes shown only. */
+  private async nodes(graph: FitGraph, distances: [number, number][]): Promise<GraphNode[]> {
+    const found = await this.parts.byIds(distances.map(([id]) => id))
+    const byNumber = new Map(found.map((part) => [part.partNumber, part]))
+    return distances.map(([id, distance]) => {
+      const partNumber = graph.partNumberOf(id)
+      const part = byNumber.get(partNumber)
+      return { id: partNumber, partNumber, name: part?.name ?? partNumber, kind: graph.kindOf(id), family: part?.family ?? '', distance }
+    })
+  }
+
   /** Shortest chain of approved fit links between two parts (see shortestFitPath). */
   async path(fromCode: string, toCode: string): Promise<GraphPath> {
     const [from, to] = [await this.parts.requireId(fromCode, 'from'), await this.parts.requireId(toCode, 'to')]
     const graph = await this.graphIndex.snapshot()
-    const fromNumber = graph.part(from).partNumber
-    const toNumber = graph.part(to).partNumber
+    const fromNumber = graph.partNumberOf(from)
+    const toNumber = graph.partNumberOf(to)
     const steps = shortestFitPath(graph, from, to)
     if (!steps) {
       return {
         from: fromNumber,
         to: toNumber,
         found: false,
-        nodes: [node(graph, from, 0), node(graph, to, 0)],
+        nodes: await this.nodes(graph, [
+          [from, 0],
+          [to, 0],
+        ]),
         edges: [],
         message: `No chain of reviewed fit links joins ${fromNumber} and ${toNumber}.`,
       }
     }
-    const edges = steps.map((step) => (step.type === 'link' ? linkEdge(graph, step.link) : identityEdge(graph, step.identity)))
+    const byId = await this.edges(
+      graph,
+      steps.flatMap((step) => (step.type === 'link' ? [step.link] : [])),
+      steps.flatMap((step) => (step.type === 'identity' ? [step.identity] : [])),
+    )
+    const edges = steps.map((step) => byId.get(step.type === 'link' ? `link-${step.link.id}` : `identity-${step.identity.id}`)!)
     const links = steps.filter((step) => step.type === 'link').length
     return {
       from: fromNumber,
       to: toNumber,
       found: true,
-      nodes: [from, ...steps.map((step) => step.to)].map((id, index) => node(graph, id, index)),
+      nodes: await this.nodes(graph, [from, ...steps.map((step) => step.to)].map((id, index) => [id, index])),
       edges,
       message:
         from === to
@@ -81,51 +106,20 @@ export class GraphService {
   async neighbourhood(code: string, depth: number): Promise<Neighbourhood> {
     const entity = await this.parts.requireEntity(code)
     const graph = await this.graphIndex.snapshot()
-    const distance = new Map<number, number>([[entity.id, 0]])
-    let frontier = [entity.id]
-    let capped = false
-    for (let level = 1; level <= depth && !capped; level++) {
-      const next: number[] = []
-      for (const id of frontier) {
-        const neighbours = [
-          ...graph.identitiesOf(id).map((i) => (i.a === id ? i.b : i.a)),
-          ...graph.linksOf(id).filter((l) => l.status !== 'rejected').map((l) => (l.a === id ? l.b : l.a)),
-        ]
-        for (const neighbour of neighbours) {
-          if (distance.has(neighbour)) continue
-          if (distance.size >= MAX_NEIGHBOURHOOD_NODES) {
-            capped = true
-            break
-          }
-          distance.set(neighbour, level)
-          next.push(neighbour)
-        }
-        if (capped) break
-      }
-      frontier = next
-    }
-    const edges = new Map<string, GraphEdge>()
-    for (const id of distance.keys()) {
-      for (const identity of graph.identitiesOf(id)) {
-        if (distance.has(identity.a) && distance.has(identity.b)) edges.set(`identity-${identity.id}`, identityEdge(graph, identity))
-      }
-      for (const link of graph.linksOf(id)) {
-        if (link.status !== 'rejected' && distance.has(link.a) && distance.has(link.b)) edges.set(`link-${link.id}`, linkEdge(graph, link))
-      }
-    }
-    let edgeList = [...edges.values()]
-    if (edgeList.length > MAX_NEIGHBOURHOOD_EDGES) {
-      capped = true
-      edgeList = edgeList.slice(0, MAX_NEIGHBOURHOOD_EDGES)
-    }
+    const found = neighbourhoodOf(graph, entity.id, depth, MAX_NEIGHBOURHOOD_NODES, MAX_NEIGHBOURHOOD_EDGES)
+    const edges = await this.edges(
+      graph,
+      found.linkSlots.map((slot) => graph.linkAt(slot)),
+      found.identitySlots.map((slot) => graph.identityAt(slot)),
+    )
     return {
       centre: entity.partNumber,
       depth,
-      nodes: [...distance].map(([id, d]) => node(graph, id, d)),
-      edges: edgeList,
-      capped,
-      message: capped
-        ? `Showing the first ${distance.size} parts and ${edgeList.length} links; the neighbourhood is larger. Narrow it with depth 1 or open a neighbouring part.`
+      nodes: await this.nodes(graph, [...found.distance]),
+      edges: [...edges.values()],
+      capped: found.capped,
+      message: found.capped
+        ? `Showing the first ${found.distance.size} parts and ${edges.size} links; the neighbourhood is larger. Narrow it with depth 1 or open a neighbouring part.`
         : undefined,
     }
   }

@@ -1,7 +1,7 @@
 import type { PairJudgement } from '../../shared/schemas/build'
 import type { ExplanationStep, Verdict } from '../../shared/schemas/fitment'
 import type { FitGraph } from './fit-graph'
-import { chainSteps, RELATION_WORDS } from './explain'
+import { chainSteps, loadChainDetails, planChain, RELATION_WORDS } from './explain'
 import type { Facts, RuleBook } from '../reasoning/rule-book'
 import { summariseOutcomes, type RuleSummary } from '../reasoning/rule-summary'
 
@@ -17,11 +17,14 @@ export async function judgePair(
   input: { slots: [string, string]; label: string; partIds: [number, number]; facts: Facts },
 ): Promise<JudgedPair> {
   const [idA, idB] = input.partIds
-  const partNumbers: [string, string] = [graph.part(idA).partNumber, graph.part(idB).partNumber]
+  const partNumbers: [string, string] = [graph.partNumberOf(idA), graph.partNumberOf(idB)]
   const summary = summariseOutcomes(await rules.evaluatePair(input.slots[0], input.slots[1], input.facts))
   const found = graph.linkBetween(idA, idB)
   if (found) {
-    const explanation = chainSteps(graph, idA, found.viaA, found.link, found.viaB, idB)
+    const chain = planChain(graph, idA, found.viaA, found.link, found.viaB, idB)
+    const details = await loadChainDetails(graph, [chain])
+    const modifications = details.links.get(found.link.id)?.modifications ?? []
+    const explanation = chainSteps(graph, chain, details)
     if (summary.relation && summary.relation !== found.link.relation) {
       explanation.push({
         type: 'note',
@@ -35,10 +38,10 @@ export async function judgePair(
       relation: found.link.relation,
       decidedBy: 'link',
       ruleIds: summary.ruleIds,
-      modifications: found.link.modifications,
+      modifications,
       explanation,
       rules: summary,
-      linkModifications: found.link.modifications,
+      linkModifications: modifications,
     }
   }
   const relation: Verdict = summary.relation ?? 'unknown'

@@ -161,7 +161,7 @@ export class ImportService {
       return result(planned, batchId)
     })
     this.previews.drop(userId, input.type)
-    this.graphIndex.invalidate()
+    await this.graphIndex.invalidate()
     report('write', summary.rows, summary.rows)
     return committed
   }
@@ -174,7 +174,7 @@ export class ImportService {
   /** Restores the catalogue as it was before the batch, or says which later write stands in the way. */
   async revert(batchId: number, user: ImportUser): Promise<ImportBatch> {
     await inTransaction(this.dataSource, (db) => revertBatch(db, batchId, user.name))
-    this.graphIndex.invalidate()
+    await this.graphIndex.invalidate()
     return toImportBatch(await this.dataSource.getRepository(ImportBatchEntity).findOneByOrFail({ id: batchId }))
   }
 }

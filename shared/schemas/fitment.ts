@@ -83,26 +83,52 @@ export const fitResultSchema = z.object({
 })
 export type FitResult = z.infer<typeof fitResultSchema>
 
-/** Inferred answers per kind and relation unless asked otherwise. */
-export const INFERRED_LIMIT_DEFAULT = 50
+/** Answers shown per group (kind, relation, reviewed or inferred) unless asked otherwise. */
+export const FIT_PAGE_SIZE_DEFAULT = 20
+export const FIT_PAGE_SIZE_MAX = 200
+
+const wholeNumber = (what: string, min: number, max: number) =>
+  z.coerce
+    .number({ error: () => `${what} must be a number.` })
+    .int(`${what} must be a whole number.`)
+    .min(min, `${what} must be at least ${min}.`)
+    .max(max, `${what} must be at most ${max}.`)
 
 export const fitsQuerySchema = z.object({
   relation: relationSchema.optional(),
   kind: partKindSchema.optional(),
   inferred: z
-    .enum(['0', '1', 'true', 'false'])
+    .enum(['0', '1', 'true', 'false'], { error: () => 'Inferred must be 0 or 1.' })
     .optional()
     .transform((value) => value !== '0' && value !== 'false'),
-  /** Most inferred results per kind and relation; the answer says how many more there are. */
-  inferredLimit: z.coerce.number().int().min(1).max(500).default(INFERRED_LIMIT_DEFAULT),
+  /** The page of every group, from 1; each group says how many answers it holds in all. */
+  page: wholeNumber('Page', 1, 100_000).default(1),
+  pageSize: wholeNumber('Page size', 1, FIT_PAGE_SIZE_MAX).default(FIT_PAGE_SIZE_DEFAULT),
 })
+export type FitsQuery = z.output<typeof fitsQuerySchema>
 
+/** Reviewed links and the rules' inferences are counted and paged apart. */
+export const FIT_SOURCES = ['reviewed', 'inferred'] as const
+export type FitSource = (typeof FIT_SOURCES)[number]
+
+/** One kind and relation of answers, from reviewed links or from the rules: its total and one page of it in part-number order. */
+export const fitGroupSchema = z.object({
+  kind: partKindSchema,
+  relation: relationSchema,
+  source: z.enum(FIT_SOURCES),
+  total: z.number().int(),
+  /** How many answers of the group come before this page. */
+  offset: z.number().int(),
+  results: z.array(fitResultSchema),
+})
+export type FitGroupPage = z.infer<typeof fitGroupSchema>
 
 export const fitsResponseSchema = z.object({
   part: partSchema,
   identical: z.array(partSchema),
-  results: z.array(fitResultSchema),
-  /** Kinds and relations whose inferred results were cut to the limit. */
-  truncated: z.array(z.object({ kind: partKindSchema, relation: relationSchema, shown: z.number().int(), total: z.number().int() })),
+  page: z.number().int(),
+  pageSize: z.number().int(),
+  /** Kind in catalogue order, then relation (what works first), reviewed before inferred. */
+  groups: z.array(fitGroupSchema),
 })
 export type FitsResponse = z.infer<typeof fitsResponseSchema>

@@ -1,47 +1,73 @@
 import { computed, watch, type Ref } from 'vue'
 import { useRoute, useRouter } from 'vue-router'
-import { RELATIONS, type FitsResponse } from '@shared/schemas/fitment'
+import { FIT_PAGE_SIZE_DEFAULT, RELATIONS, type FitsResponse, type Relation } from '@shared/schemas/fitment'
+import type { PartKind } from '@shared/schemas/part-kinds'
 import { fitmentApi } from '@/api/fitment'
-import { filterFits, groupFits, kindsIn, relationCounts, type FitFilters } from '@/lib/fit-groups'
-import { queryKind, queryOneOf, queryText } from '@/lib/route-query'
+import { filterGroups, groupFits, kindsIn, relationCounts, withPage, type FitFilters } from '@/lib/fit-groups'
+import { queryInt, queryKind, queryOneOf, queryText } from '@/lib/route-query'
 import { useRemote } from './useRemote'
 
 /**
- * The part page: the part, its identical numbers and what fits it. The
- * filters live in the address (`?relation=fits&kind=block&inferred=0`) so a
- * counter can send exactly this view; filtering is done here so every filter
- * can show how many answers it holds.
+ * The part page: the part, its identical numbers and what fits it. The server
+ * answers every group's total and its first page; the filters and the page of
+ * one group live in the address (`?kind=block&relation=fits&page=2&inferred=0`)
+ * so a counter can send exactly this view. Filtering the overview is done here
+ * so every filter can show how many answers it holds.
  */
 export function usePartFits(partNumber: Ref<string>) {
   const route = useRoute()
   const router = useRouter()
   const remote = useRemote<FitsResponse>()
+  const paged = useRemote<FitsResponse>()
 
   const filters = computed<FitFilters>(() => ({
     relation: queryOneOf(route.query.relation, RELATIONS),
     kind: queryKind(route.query.kind),
     inferred: queryText(route.query.inferred) !== '0',
+    page: Math.max(1, queryInt(route.query.page) ?? 1),
   }))
+  /** A page beyond the first is of one group: kind and relation both chosen. */
+  const pagedGroup = computed(() => {
+    const { kind, relation, page, inferred } = filters.value
+    return kind && relation && page > 1 ? { kind, relation, page, inferred } : null
+  })
 
   function setFilters(change: Partial<FitFilters>) {
-    const next = { ...filters.value, ...change }
+    const next = { ...filters.value, page: 1, ...change }
     void router.replace({
       query: {
         ...(next.relation ? { relation: next.relation } : {}),
         ...(next.kind ? { kind: next.kind } : {}),
         ...(next.inferred ? {} : { inferred: '0' }),
+        ...(next.page > 1 ? { page: String(next.page) } : {}),
       },
     })
   }
 
-  const load = () => remote.run((signal) => fitmentApi.fits(partNumber.value, signal))
-  watch(partNumber, load, { immediate: true })
+  /** Opens a page of one group, keeping the inferred filter. */
+  function showPage(kind: PartKind, relation: Relation, page: number) {
+    setFilters({ kind, relation, page })
+  }
 
-  const results = computed(() => remote.data.value?.results ?? [])
-  const visible = computed(() => filterFits(results.value, filters.value))
+  const load = () => remote.run((signal) => fitmentApi.fits(partNumber.value, { inferred: filters.value.inferred }, signal))
+  watch([partNumber, () => filters.value.inferred], load, { immediate: true })
+  const loadPage = () => {
+    const group = pagedGroup.value
+    if (group) void paged.run((signal) => fitmentApi.fits(partNumber.value, group, signal))
+    else paged.data.value = null
+  }
+  watch([partNumber, pagedGroup], loadPage, { immediate: true })
+
+  const all = computed(() => withPage(remote.data.value?.groups ?? [], pagedGroup.value ? (paged.data.value?.groups ?? null) : null))
+  const visible = computed(() => filterGroups(all.value, filters.value))
   const groups = computed(() => groupFits(visible.value))
-  const counts = computed(() => relationCounts(results.value, filters.value))
-  const kinds = computed(() => kindsIn(results.value))
+  const counts = computed(() => relationCounts(all.value, filters.value))
+  const kinds = computed(() => kindsIn(all.value))
+  const pageSize = computed(() => remote.data.value?.pageSize ?? FIT_PAGE_SIZE_DEFAULT)
 
-  return { ...remote, reload: load, filters, setFilters, visible, groups, counts, kinds }
+  const reload = () => {
+    void load()
+    loadPage()
+  }
+  return { ...remote, reload, filters, setFilters, showPage, visible, groups, counts, kinds, pageSize, pageLoading: paged.isLoading, pageError: paged.error }
 }

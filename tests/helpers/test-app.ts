@@ -9,11 +9,14 @@ import { prepareDatabase } from '../../server/bootstrap'
 import { loadConfig, type AppConfig } from '../../server/config/env'
 import { DEMO_PASSWORD } from '../../server/demo/seed'
 import type { Role } from '../../shared/schemas/auth'
+import type { Services } from '../../server/services'
 
 export type TestApp = {
   app: Express
   dataSource: DataSource
   config: AppConfig
+  /** The app's services, for tests that write behind the API and report it as writers do. */
+  services: Services
   /** A supertest agent signed in as the demo user of that role. */
   signIn: (role: Role) => Promise<ReturnType<typeof request.agent>>
   close: () => Promise<void>
@@ -54,6 +57,7 @@ export async function createTestApp(options: { demo?: boolean; env?: Record<stri
     app,
     dataSource,
     config,
+    services,
     async signIn(role) {
       const agent = request.agent(app)
       const response = await agent.post('/api/auth/login').send({ email: `${role}@fitwright.test`, password: DEMO_PASSWORD })

@@ -71,19 +71,21 @@ describe('GET /api/graph/neighbourhood/:partNumber', () => {
   })
 
   it('caps a very large neighbourhood and says it did', async () => {
-    // A fresh app whose graph is first read after the hub is written.
+    // Written behind the API, then reported to the graph index as every writer does.
     const own = await createTestApp()
     const hubNumber = 'TEST-HUB'
-    await inTransaction(own.dataSource, (db) => {
+    const written = await inTransaction(own.dataSource, (db) => {
       const spokes = Array.from({ length: MAX_NEIGHBOURHOOD_NODES + 50 }, (_, i) => ({
         partNumber: `TEST-SPOKE-${i}`, kind: 'other' as const, name: 'Spoke', family: '', yearFrom: null, yearTo: null, notes: '', attributes: {}, marks: [],
       }))
       const ids = insertPartRows(db, [{ ...spokes[0]!, partNumber: hubNumber }, ...spokes])
       const hub = ids.get(hubNumber)!
-      for (const spoke of spokes) {
-        insertLinkRow(db, { partIds: [hub, ids.get(spoke.partNumber)!], relation: 'fits', modifications: [], note: '', source: 'editor', status: 'approved', batchId: null })
-      }
+      const links = spokes.map((spoke) =>
+        insertLinkRow(db, { partIds: [hub, ids.get(spoke.partNumber)!], relation: 'fits', modifications: [], note: '', source: 'editor', status: 'approved', batchId: null }),
+      )
+      return { parts: [...ids.values()], links }
     })
+    await own.services.graphIndex.applyChanges(written)
     const counter = await own.signIn('counter')
     const response = await counter.get(`/api/graph/neighbourhood/${hubNumber}?depth=2`)
     await own.close()

@@ -1,6 +1,7 @@
 import { afterEach, beforeEach, describe, expect, it } from 'vitest'
 import { catalogueSnapshot, databaseSnapshot, uploadCsv } from '../helpers/imports'
 import { createTestApp, type TestApp } from '../helpers/test-app'
+const fitResults = (body: { groups: { results: unknown[] }[] }) => body.groups.flatMap((group) => group.results)
 
 let t: TestApp
 let editor: Awaited<ReturnType<TestApp['signIn']>>
@@ -36,10 +37,10 @@ describe('POST /api/imports, links, commit', () => {
 
   it('shows a committed link in what fits at once (the fit graph is rebuilt)', async () => {
     const before = await editor.get('/api/parts/TM-HD-2000R/fits?inferred=0')
-    expect(before.body.results.map((r: { part: { partNumber: string } }) => r.part.partNumber)).not.toContain('TM-IM-1800')
+    expect((fitResults(before.body) as { part: { partNumber: string } }[]).map((r) => r.part.partNumber)).not.toContain('TM-IM-1800')
     await uploadCsv(editor, `${HEADER}\nTM-HD-2000R,TM-IM-1800,does-not-fit,,Ports do not line up.,\n`, { type: 'links', mode: 'commit' })
     const after = await editor.get('/api/parts/TM-HD-2000R/fits?inferred=0')
-    expect(after.body.results).toContainEqual(expect.objectContaining({ part: expect.objectContaining({ partNumber: 'TM-IM-1800' }), relation: 'does-not-fit' }))
+    expect(fitResults(after.body)).toContainEqual(expect.objectContaining({ part: expect.objectContaining({ partNumber: 'TM-IM-1800' }), relation: 'does-not-fit' }))
   })
 
   it('approves a proposed link the file names, and counts it as updated', async () => {

@@ -1,6 +1,7 @@
 import { afterAll, beforeAll, describe, expect, it } from 'vitest'
 import { expectBadRequest } from '../helpers/expect-error'
 import { createTestApp, type TestApp } from '../helpers/test-app'
+const fitResults = (body: { groups: { results: unknown[] }[] }) => body.groups.flatMap((group) => group.results)
 
 let t: TestApp
 let editor: Awaited<ReturnType<TestApp['signIn']>>
@@ -11,7 +12,7 @@ beforeAll(async () => {
 afterAll(() => t.close())
 
 const fitsOf = async (part: string) =>
-  (await editor.get(`/api/parts/${part}/fits?inferred=0`)).body.results as { part: { partNumber: string }; relation: string; review: string }[]
+  fitResults((await editor.get(`/api/parts/${part}/fits?inferred=0`)).body) as { part: { partNumber: string }; relation: string; review: string }[]
 
 describe('/api/links (editors review and edit the fitment graph)', () => {
   it('lists proposed links for review', async () => {

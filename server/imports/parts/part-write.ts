@@ -3,6 +3,7 @@ import type { PartInput } from '../../../shared/schemas/part-input'
 import { SQL_NOW, changeRecorder } from '../../audit/change-log'
 import type { PartsPlan } from './part-plan'
 import { markRows, partColumns } from '../../catalogue/part-writer'
+import { rewritePartWords } from '../../catalogue/part-word-writer'
 
 /** Writes a parts plan with prepared statements; the caller holds the transaction. */
 export function writeParts(db: Database.Database, plan: PartsPlan, batchId: number) {
@@ -19,7 +20,9 @@ export function writeParts(db: Database.Database, plan: PartsPlan, batchId: numb
     for (const mark of markRows(partId, part)) insertMark.run(partId, mark.type, mark.value, mark.valueKey)
   }
 
+  const written: number[] = []
   for (const { id, part, previous } of plan.updates) {
+    written.push(id)
     record('part', id, 'updated', previous.part.batchId, { part: [previous.part], part_mark: previous.marks })
     const c = partColumns(part)
     updatePart.run(c.kind, c.name, c.family, c.yearFrom, c.yearTo, c.notes, JSON.stringify(c.attributes), batchId, id)
@@ -29,6 +32,9 @@ export function writeParts(db: Database.Database, plan: PartsPlan, batchId: numb
   for (const part of plan.creates) {
     const c = partColumns(part)
     const result = insertPart.run(c.partNumber, c.partKey, c.kind, c.name, c.family, c.yearFrom, c.yearTo, c.notes, JSON.stringify(c.attributes), batchId)
-    writeMarks(Number(result.lastInsertRowid), part)
+    const id = Number(result.lastInsertRowid)
+    written.push(id)
+    writeMarks(id, part)
   }
+  rewritePartWords(db, written)
 }

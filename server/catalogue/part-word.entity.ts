@@ -1,0 +1,17 @@
+import { Column, Entity, Index, JoinColumn, ManyToOne, PrimaryColumn } from 'typeorm'
+import { PartEntity } from './part.entity'
+
+/** One word of a part's name or family, lower case: the index behind search by word prefix. */
+@Entity('part_word')
+export class PartWordEntity {
+  @PrimaryColumn({ type: 'integer' })
+  partId!: number
+
+  @ManyToOne(() => PartEntity, { onDelete: 'CASCADE' })
+  @JoinColumn({ name: 'partId' })
+  part!: PartEntity
+
+  @Index()
+  @PrimaryColumn({ type: 'text' })
+  word!: string
+}
