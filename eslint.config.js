@@ -17,13 +17,22 @@ export default tseslint.config(
   {
     languageOptions: { globals: { ...globals.node, ...globals.browser } },
     rules: {
-      '@typescript-eslint/no-unused-vars': ['error', { argsIgnorePattern: '^_', varsIgnorePattern: '^_', destructuredArrayIgnorePattern: '^_' }],
+      '@typescript-eslint/no-unused-vars': [
+        'error',
+        { argsIgnorePattern: '^_', varsIgnorePattern: '^_', destructuredArrayIgnorePattern: '^_' },
+      ],
       '@typescript-eslint/consistent-type-imports': ['error', { fixStyle: 'inline-type-imports' }],
       '@typescript-eslint/no-explicit-any': 'error',
       '@typescript-eslint/ban-ts-comment': 'error',
       'vue/multi-word-component-names': 'error',
       'no-console': 'off',
+      // `declare global { namespace Express }` is how Express types are augmented.
+      '@typescript-eslint/no-namespace': ['error', { allowDeclarations: true }],
     },
+  },
+  {
+    files: ['tests/**'],
+    rules: { 'vue/one-component-per-file': 'off' },
   },
   prettier,
 )

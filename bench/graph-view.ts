@@ -26,13 +26,20 @@ function cappedNeighbourhood(): Neighbourhood {
   const edges = Array.from({ length: MAX_NEIGHBOURHOOD_EDGES }, (_, i) => {
     const source = i < 39 ? 0 : 1 + (i % 39)
     const target = i < 39 ? i + 1 : 40 + ((i * 7) % (MAX_NEIGHBOURHOOD_NODES - 40))
-    return { id: `link-${i}`, source: id(source), target: id(target), type: 'link' as const, relation: RELATIONS[i % 3]!, review: 'approved' as const }
+    return {
+      id: `link-${i}`,
+      source: id(source),
+      target: id(target),
+      type: 'link' as const,
+      relation: RELATIONS[i % 3]!,
+      review: 'approved' as const,
+    }
   })
   return { centre: id(0), depth: 2, nodes, edges, capped: true, message: 'Showing the first 600 parts and 1400 links.' }
 }
 
 async function main() {
-  if (!chromiumPath()) throw new Error('No chromium: install Debian\'s chromium or set CHROMIUM_PATH.')
+  if (!chromiumPath()) throw new Error("No chromium: install Debian's chromium or set CHROMIUM_PATH.")
   await build({ logLevel: 'warn' })
   const server = await startServer()
   const browser = await launchBrowser()
@@ -40,7 +47,9 @@ async function main() {
     const page = await browser.newPage({ viewport: { width: 1280, height: 900 } })
     await signInAs(page, server.url, 'counter')
     const answer = JSON.stringify(cappedNeighbourhood())
-    await page.route('**/api/graph/neighbourhood/**', (route) => route.fulfill({ status: 200, contentType: 'application/json', body: answer }))
+    await page.route('**/api/graph/neighbourhood/**', (route) =>
+      route.fulfill({ status: 200, contentType: 'application/json', body: answer }),
+    )
     const runs: { settleMs: number; fps: number }[] = []
     for (let run = 0; run < 3; run++) {
       const started = Date.now()
@@ -50,7 +59,9 @@ async function main() {
       const box = (await page.locator('.graph-canvas').boundingBox())!
       // A string, not a function: tsx's name helpers do not exist inside the page.
       // Settled into a value or an error at once, so a failure cannot kill the run before the server is stopped.
-      const frames = page.evaluate<number>(`new Promise((resolve) => {
+      const frames = page
+        .evaluate<number>(
+          `new Promise((resolve) => {
         let count = 0
         const start = performance.now()
         const tick = () => {
@@ -59,21 +70,27 @@ async function main() {
           else resolve((count * 1000) / (performance.now() - start))
         }
         requestAnimationFrame(tick)
-      })`).then(
-        (fps) => ({ fps }),
-        (error: unknown) => ({ error }),
-      )
+      })`,
+        )
+        .then(
+          (fps) => ({ fps }),
+          (error: unknown) => ({ error }),
+        )
       await page.mouse.move(box.x + box.width / 2, box.y + box.height / 2)
       await page.mouse.down()
-      for (let step = 0; step < 40; step++) await page.mouse.move(box.x + box.width / 2 + Math.sin(step / 4) * 200, box.y + box.height / 2 + step * 3)
+      for (let step = 0; step < 40; step++)
+        await page.mouse.move(box.x + box.width / 2 + Math.sin(step / 4) * 200, box.y + box.height / 2 + step * 3)
       await page.mouse.up()
       for (let step = 0; step < 10; step++) await page.mouse.wheel(0, step < 5 ? -120 : 120)
       const counted = await frames
       if ('error' in counted) throw counted.error
       runs.push({ settleMs, fps: Math.round(counted.fps) })
     }
-    console.log(`Capped neighbourhood: ${MAX_NEIGHBOURHOOD_NODES} parts + ${MAX_NEIGHBOURHOOD_EDGES} links = ${MAX_NEIGHBOURHOOD_NODES + MAX_NEIGHBOURHOOD_EDGES} elements`)
-    for (const [i, r] of runs.entries()) console.log(`run ${i + 1}: laid out and drawn in ${r.settleMs} ms (page load included); ${r.fps} frames/s while dragging and zooming`)
+    console.log(
+      `Capped neighbourhood: ${MAX_NEIGHBOURHOOD_NODES} parts + ${MAX_NEIGHBOURHOOD_EDGES} links = ${MAX_NEIGHBOURHOOD_NODES + MAX_NEIGHBOURHOOD_EDGES} elements`,
+    )
+    for (const [i, r] of runs.entries())
+      console.log(`run ${i + 1}: laid out and drawn in ${r.settleMs} ms (page load included); ${r.fps} frames/s while dragging and zooming`)
   } finally {
     await browser.close()
     await server.stop()

@@ -15,7 +15,6 @@ const PART_COUNT = 1_000
 const ROUNDS = 3
 const MODIFICATION = 'oil-restrictor-fit'
 
-
 /** Distinct unordered pairs spread over the parts, a tenth with a modification. */
 function linkRows(): LinkRow[] {
   const rows: LinkRow[] = []
@@ -35,7 +34,9 @@ async function freshDatabase(dir: string, name: string) {
   const config = loadConfig({ NODE_ENV: 'test', FITWRIGHT_DEMO: '0', FITWRIGHT_DB_PATH: path.join(dir, `${name}.sqlite`) })
   const { dataSource } = await prepareDatabase(config)
   const db = sqliteConnection(dataSource)
-  const insert = db.prepare("INSERT INTO part (partNumber, partKey, kind, name, family, notes, attributes) VALUES (?, ?, 'other', ?, 'Bench', '', '{}')")
+  const insert = db.prepare(
+    "INSERT INTO part (partNumber, partKey, kind, name, family, notes, attributes) VALUES (?, ?, 'other', ?, 'Bench', '', '{}')",
+  )
   db.transaction(() => {
     for (let i = 0; i < PART_COUNT; i++) {
       const partNumber = `BN-${String(i).padStart(5, '0')}`
@@ -66,7 +67,12 @@ export const importLinksBenchmark: Benchmark = {
         const dataSource = await freshDatabase(dir, `import-${round}`)
         const imports = new ImportService(dataSource, { maxRows: 500_000 }, new FitGraphIndex(dataSource))
         const run: Omit<ImportRun, 'mode'> = {
-          filePath: file, fileName: 'links.csv', fileSize: statSync(file).size, type: 'links', validRowsOnly: false, user: { id: null, name: 'bench' },
+          filePath: file,
+          fileName: 'links.csv',
+          fileSize: statSync(file).size,
+          type: 'links',
+          validRowsOnly: false,
+          user: { id: null, name: 'bench' },
         }
         let started = performance.now()
         const preview = await imports.run({ ...run, mode: 'preview' })
@@ -76,7 +82,9 @@ export const importLinksBenchmark: Benchmark = {
         times.commit.push(performance.now() - started)
         const [{ links }] = (await dataSource.query('SELECT COUNT(*) AS links FROM link')) as [{ links: number }]
         if (preview.counts.created !== LINK_ROWS || commit.counts.created !== LINK_ROWS || links !== LINK_ROWS) {
-          throw new Error(`Round ${round} did not import every row: ${JSON.stringify({ preview: preview.counts, commit: commit.counts, links })}`)
+          throw new Error(
+            `Round ${round} did not import every row: ${JSON.stringify({ preview: preview.counts, commit: commit.counts, links })}`,
+          )
         }
         await dataSource.destroy()
 
@@ -94,11 +102,23 @@ export const importLinksBenchmark: Benchmark = {
       const ratio = rate(preview + commit) / rate(raw)
       console.log(`median of ${ROUNDS} rounds, same run, same rows, fresh database each time:`)
       console.log(`  raw prepared insert, one transaction : ${rate(raw).toLocaleString('en').padStart(9)} rows/s  (${raw.toFixed(0)} ms)`)
-      console.log(`  import preview                       : ${rate(preview).toLocaleString('en').padStart(9)} rows/s  (${preview.toFixed(0)} ms)`)
-      console.log(`  import commit after that preview     : ${rate(commit).toLocaleString('en').padStart(9)} rows/s  (${commit.toFixed(0)} ms; reuses the preview's checked rows)`)
-      console.log(`  import preview + commit              : ${rate(preview + commit).toLocaleString('en').padStart(9)} rows/s  (${(preview + commit).toFixed(0)} ms)`)
-      console.log(`  ratio (preview + commit) / raw       : ${ratio.toFixed(2)}  (goal: at least 0.33, ${ratio >= 1 / 3 ? 'met' : 'NOT met'})`)
-      console.log(`  import commit without a preview      : ${rate(cold).toLocaleString('en').padStart(9)} rows/s  (${cold.toFixed(0)} ms; reads and checks the file itself)`)
+      console.log(
+        `  import preview                       : ${rate(preview).toLocaleString('en').padStart(9)} rows/s  (${preview.toFixed(0)} ms)`,
+      )
+      console.log(
+        `  import commit after that preview     : ${rate(commit).toLocaleString('en').padStart(9)} rows/s  (${commit.toFixed(0)} ms; reuses the preview's checked rows)`,
+      )
+      console.log(
+        `  import preview + commit              : ${rate(preview + commit)
+          .toLocaleString('en')
+          .padStart(9)} rows/s  (${(preview + commit).toFixed(0)} ms)`,
+      )
+      console.log(
+        `  ratio (preview + commit) / raw       : ${ratio.toFixed(2)}  (goal: at least 0.33, ${ratio >= 1 / 3 ? 'met' : 'NOT met'})`,
+      )
+      console.log(
+        `  import commit without a preview      : ${rate(cold).toLocaleString('en').padStart(9)} rows/s  (${cold.toFixed(0)} ms; reads and checks the file itself)`,
+      )
       console.log(`  ratio commit without a preview / raw : ${(rate(cold) / rate(raw)).toFixed(2)}`)
     } finally {
       rmSync(dir, { recursive: true, force: true })

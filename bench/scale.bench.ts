@@ -26,12 +26,20 @@ const SMALL_IMPORTS = 3
 const megabytes = () => Math.round(process.memoryUsage().rss / 1024 / 1024)
 
 /** The first answers after the load pay for building the fit graph; resident memory is read right after. */
-async function firstAnswers(counter: Client, typical: string, far: string): Promise<{ lines: Line[]; rssBefore: number; rssAfter: number }> {
+async function firstAnswers(
+  counter: Client,
+  typical: string,
+  far: string,
+): Promise<{ lines: Line[]; rssBefore: number; rssAfter: number }> {
   const rssBefore = megabytes()
   const once = { requests: 1, warmup: 0, budgetMs: 0 }
   const fits = await measure(() => counter.get(`/api/parts/${encodeURIComponent(typical)}/fits`), once)
   const route = await measure(() => counter.get(`/api/graph/path?from=${encodeURIComponent(typical)}&to=${encodeURIComponent(far)}`), once)
-  return { lines: [latencyLine('first what fits after the load', fits, null, {}), latencyLine('first path after the load', route, null, {})], rssBefore, rssAfter: megabytes() }
+  return {
+    lines: [latencyLine('first what fits after the load', fits, null, {}), latencyLine('first path after the load', route, null, {})],
+    rssBefore,
+    rssAfter: megabytes(),
+  }
 }
 
 /** The raw insert rates of the load's links and identity rows; a failure is reported, not thrown. */
@@ -46,16 +54,30 @@ function rawRates(dbPath: string, copyPath: string, catalogue: Catalogue): { lin
 
 export const scaleBenchmark: Benchmark = {
   name: 'scale',
-  description: 'the goals table on an invented catalogue loaded through the import API, each answer beside a bare baseline (--links, --parts, --requests, --budget)',
+  description:
+    'the goals table on an invented catalogue loaded through the import API, each answer beside a bare baseline (--links, --parts, --requests, --budget)',
   async run(args) {
     const options = scaleOptions(args)
     const dir = mkdtempSync(path.join(tmpdir(), 'fitwright-scale-'))
     try {
       let started = performance.now()
-      const catalogue = inventCatalogue({ parts: options.parts, links: options.links, extraLinks: options.commitRows + SMALL_IMPORTS * 100 })
-      const files = writeCatalogueFiles(dir, catalogue, { chunk: IMPORT_CHUNK, commitRows: options.commitRows, smallImports: SMALL_IMPORTS })
-      console.log(`invented ${catalogue.parts.length.toLocaleString('en')} parts (${catalogue.families.length} families), ${catalogue.links.length.toLocaleString('en')} links and ${catalogue.identities.length.toLocaleString('en')} identities in ${Math.round(performance.now() - started)} ms`)
-      const app = await startAppUnderTest(dir, { FITWRIGHT_IMPORT_MAX_ROWS: '500000', FITWRIGHT_IMPORT_MAX_BYTES: String(512 * 1024 * 1024) })
+      const catalogue = inventCatalogue({
+        parts: options.parts,
+        links: options.links,
+        extraLinks: options.commitRows + SMALL_IMPORTS * 100,
+      })
+      const files = writeCatalogueFiles(dir, catalogue, {
+        chunk: IMPORT_CHUNK,
+        commitRows: options.commitRows,
+        smallImports: SMALL_IMPORTS,
+      })
+      console.log(
+        `invented ${catalogue.parts.length.toLocaleString('en')} parts (${catalogue.families.length} families), ${catalogue.links.length.toLocaleString('en')} links and ${catalogue.identities.length.toLocaleString('en')} identities in ${Math.round(performance.now() - started)} ms`,
+      )
+      const app = await startAppUnderTest(dir, {
+        FITWRIGHT_IMPORT_MAX_ROWS: '500000',
+        FITWRIGHT_IMPORT_MAX_BYTES: String(512 * 1024 * 1024),
+      })
       const db = new Database(app.dbPath, { readonly: true })
       let bare: BareQueries | undefined
       try {
@@ -70,7 +92,9 @@ export const scaleBenchmark: Benchmark = {
 
         const graph = loadTypedGraph(db)
         const picks = pickParts(db, graph)
-        console.log(`${picks.typical.length} typical parts with ${picks.typical[0]?.links}–${picks.typical.at(-1)?.links} links; hubs ${picks.hubs.map((h) => `${h.number} (${h.links} links)`).join(', ')}; paths of ${picks.paths.map((p) => p.steps).join(', ')} steps; build of ${Object.keys(picks.build).length} slots`)
+        console.log(
+          `${picks.typical.length} typical parts with ${picks.typical[0]?.links}–${picks.typical.at(-1)?.links} links; hubs ${picks.hubs.map((h) => `${h.number} (${h.links} links)`).join(', ')}; paths of ${picks.paths.map((p) => p.steps).join(', ')} steps; build of ${Object.keys(picks.build).length} slots`,
+        )
         const first = await firstAnswers(counter, picks.typical[0]!.number, picks.paths[0]!.to.number)
         bare = new BareQueries(db)
         console.log('measuring (sequential, warm):')
@@ -79,8 +103,13 @@ export const scaleBenchmark: Benchmark = {
         lines.push(...(await measureEdits(editor, counter, bare, picks.typical)))
         lines.push(await measureSmallImports(importer, files.small))
         lines.push(...(await measureHealthDuringCommit(importer, counter, files.commit, options.commitRows, options.pace)))
-        lines.push(...importLines(load, rawRates(app.dbPath, path.join(dir, 'raw.sqlite'), catalogue)), memoryLine(first.rssAfter, first.rssBefore))
-        console.log(`\n${catalogue.parts.length.toLocaleString('en')} parts, ${catalogue.links.length.toLocaleString('en')} links, ${catalogue.identities.length.toLocaleString('en')} identities; up to ${options.pace.requests} requests per answer or ${options.pace.budgetMs / 1000} s:`)
+        lines.push(
+          ...importLines(load, rawRates(app.dbPath, path.join(dir, 'raw.sqlite'), catalogue)),
+          memoryLine(first.rssAfter, first.rssBefore),
+        )
+        console.log(
+          `\n${catalogue.parts.length.toLocaleString('en')} parts, ${catalogue.links.length.toLocaleString('en')} links, ${catalogue.identities.length.toLocaleString('en')} identities; up to ${options.pace.requests} requests per answer or ${options.pace.budgetMs / 1000} s:`,
+        )
         printTable(lines)
       } finally {
         bare?.close()

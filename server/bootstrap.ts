@@ -21,7 +21,12 @@ export type Prepared = { dataSource: DataSource; rules: RuleBook; services: Serv
 
 /** Accounts that still sign in with the published demo password (start-up warns about them). */
 export async function demoAccountsLeft(dataSource: DataSource): Promise<string[]> {
-  return (await new UserService(dataSource).withPassword(DEMO_USERS.map((user) => user.email), DEMO_PASSWORD)).map((user) => user.email)
+  return (
+    await new UserService(dataSource).withPassword(
+      DEMO_USERS.map((user) => user.email),
+      DEMO_PASSWORD,
+    )
+  ).map((user) => user.email)
 }
 
 /**
@@ -32,7 +37,9 @@ export async function prepareDatabase(config: AppConfig): Promise<Prepared> {
   // Rules first: a broken rule file stops start-up before anything is written.
   const rules = new RuleBook(loadRules(path.join(projectRoot, 'rules')))
   const dbPath = config.dbPath === ':memory:' ? ':memory:' : path.resolve(projectRoot, config.dbPath)
-  const dataSource = await openDatabase(config.databaseUrl ? { type: 'postgres', url: config.databaseUrl } : { type: 'sqlite', path: dbPath })
+  const dataSource = await openDatabase(
+    config.databaseUrl ? { type: 'postgres', url: config.databaseUrl } : { type: 'sqlite', path: dbPath },
+  )
   const services = createServices(dataSource, config, rules)
   await services.modifications.syncShipped(rules.loaded.modifications)
   const seeded = config.demo ? await seedDemo(dataSource, services, path.join(projectRoot, 'data', 'demo')) : false

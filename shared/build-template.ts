@@ -86,7 +86,5 @@ export function mates(a: string, b: string): boolean {
 
 /** The slots a slot mates with, in template order. */
 export function matingSlots(slot: string): SlotId[] {
-  return MATING_PAIRS.flatMap((pair) =>
-    pair.slots[0] === slot ? [pair.slots[1]] : pair.slots[1] === slot ? [pair.slots[0]] : [],
-  )
+  return MATING_PAIRS.flatMap((pair) => (pair.slots[0] === slot ? [pair.slots[1]] : pair.slots[1] === slot ? [pair.slots[0]] : []))
 }

@@ -16,10 +16,13 @@ export class BareQueries {
 
   constructor(readonly db: Database.Database) {
     const partColumns = 'p.id, p.partNumber, p.kind, p.name, p.family'
-    const linkEnds = 'SELECT id, partAId, partBId FROM link WHERE partAId = ? UNION ALL SELECT id, partAId, partBId FROM link WHERE partBId = ?'
+    const linkEnds =
+      'SELECT id, partAId, partBId FROM link WHERE partAId = ? UNION ALL SELECT id, partAId, partBId FROM link WHERE partBId = ?'
     this.statements = {
       byKeyPrefix: db.prepare(`SELECT ${partColumns} FROM part p WHERE p.partKey >= ? AND p.partKey < ? ORDER BY p.partKey LIMIT 25`),
-      byMarkPrefix: db.prepare(`SELECT ${partColumns} FROM part_mark m JOIN part p ON p.id = m.partId WHERE m.valueKey >= ? AND m.valueKey < ? LIMIT 25`),
+      byMarkPrefix: db.prepare(
+        `SELECT ${partColumns} FROM part_mark m JOIN part p ON p.id = m.partId WHERE m.valueKey >= ? AND m.valueKey < ? LIMIT 25`,
+      ),
       byIds: db.prepare(`SELECT ${partColumns} FROM part p WHERE p.id IN (SELECT value FROM json_each(?))`),
       linksBothWays: db.prepare(
         `SELECT l.id, l.relation, l.status, ${partColumns} FROM link l JOIN part p ON p.id = l.partBId WHERE l.partAId = ?
@@ -103,7 +106,8 @@ export class BareQueries {
   completionReads(filled: number[], emptyKinds: string[]): number {
     let read = 0
     for (const kind of emptyKinds) {
-      for (const row of this.statements.kindCandidates.iterate(kind) as Iterable<{ attributes: string }>) read += Object.keys(JSON.parse(row.attributes) as object).length > 0 ? 1 : 0
+      for (const row of this.statements.kindCandidates.iterate(kind) as Iterable<{ attributes: string }>)
+        read += Object.keys(JSON.parse(row.attributes) as object).length > 0 ? 1 : 0
     }
     for (const id of filled) read += this.linksBothWays(id).length
     return read

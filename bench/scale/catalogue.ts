@@ -5,15 +5,38 @@ import { seededRandom, zipfSampler, type Random } from './random'
 
 /** Two-letter kind codes in part numbers, e.g. GX-HD-004711. */
 export const KIND_CODES: Record<PartKind, string> = {
-  block: 'BL', head: 'HD', 'head-gasket': 'HG', 'head-bolt': 'HB', distributor: 'DS', 'ignition-leads': 'IL', ecu: 'EC',
-  harness: 'WH', 'intake-manifold': 'IM', 'intake-gasket': 'IG', 'exhaust-manifold': 'EM', 'exhaust-gasket': 'EG',
-  'fuel-rail': 'FR', injector: 'IN', 'cam-gear': 'CG', 'timing-belt': 'TB', 'crank-pulley': 'CP', 'oil-restrictor': 'OR', other: 'XA',
+  block: 'BL',
+  head: 'HD',
+  'head-gasket': 'HG',
+  'head-bolt': 'HB',
+  distributor: 'DS',
+  'ignition-leads': 'IL',
+  ecu: 'EC',
+  harness: 'WH',
+  'intake-manifold': 'IM',
+  'intake-gasket': 'IG',
+  'exhaust-manifold': 'EM',
+  'exhaust-gasket': 'EG',
+  'fuel-rail': 'FR',
+  injector: 'IN',
+  'cam-gear': 'CG',
+  'timing-belt': 'TB',
+  'crank-pulley': 'CP',
+  'oil-restrictor': 'OR',
+  other: 'XA',
 }
 /** Parts shared by many engines: they take the top ranks of the link spread. */
 const HUB_KINDS = new Set<PartKind>(['timing-belt', 'head-gasket', 'intake-gasket', 'exhaust-gasket', 'oil-restrictor', 'head-bolt'])
 const CAST_KINDS = new Set<PartKind>(['block', 'head', 'distributor', 'intake-manifold', 'exhaust-manifold', 'cam-gear'])
 const VARIANTS = ['', '', '', ', early', ', late', ', uprated', ', economy', ', heavy-duty', ', export']
-export const MODIFICATIONS = ['hardened-washer-stack', 'distributor-internals-transfer', 'vvl-leads-insulate', 'oil-restrictor-fit', 'oil-restrictor-remove-duplicate', 'injector-resistor-pack'] as const
+export const MODIFICATIONS = [
+  'hardened-washer-stack',
+  'distributor-internals-transfer',
+  'vvl-leads-insulate',
+  'oil-restrictor-fit',
+  'oil-restrictor-remove-duplicate',
+  'injector-resistor-pack',
+] as const
 export const RELATION_CODES = ['fits', 'fits-with-modification', 'does-not-fit'] as const
 
 export type CataloguePart = {
@@ -63,13 +86,25 @@ function addAliases(parts: CataloguePart[], count: number, random: Random): [num
     taken.add(original)
     const part = parts[original]!
     const reman = identities.length % 2 === 0
-    parts.push({ ...part, number: `${part.number}${reman ? 'R' : 'S'}`, name: `${part.name}${reman ? ', remanufactured' : ', superseding number'}`, superseded: '', alias: true })
+    parts.push({
+      ...part,
+      number: `${part.number}${reman ? 'R' : 'S'}`,
+      name: `${part.name}${reman ? ', remanufactured' : ', superseding number'}`,
+      superseded: '',
+      alias: true,
+    })
     identities.push([original, parts.length - 1])
   }
   return identities
 }
 
-const emptyLinks = (size: number): LinkSet => ({ from: new Int32Array(size), to: new Int32Array(size), relation: new Uint8Array(size), modification: new Int8Array(size), length: 0 })
+const emptyLinks = (size: number): LinkSet => ({
+  from: new Int32Array(size),
+  to: new Int32Array(size),
+  relation: new Uint8Array(size),
+  modification: new Int8Array(size),
+  length: 0,
+})
 
 /**
  * Distinct pairs with a skewed spread: one end drawn by rank (hub kinds
@@ -79,7 +114,11 @@ function inventLinks(parts: CataloguePart[], sizes: [number, number], random: Ra
   const base = parts.filter((part) => !part.alias).length
   const byKind = new Map<PartKind, number[]>(PART_KINDS.map((kind) => [kind, []]))
   for (let i = 0; i < base; i++) byKind.get(parts[i]!.kind)!.push(i)
-  const order = Array.from({ length: base }, (_, i) => i).sort((a, b) => Number(HUB_KINDS.has(parts[b]!.kind)) - Number(HUB_KINDS.has(parts[a]!.kind)) || ((a * 2654435761) % 1000) - ((b * 2654435761) % 1000))
+  const order = Array.from({ length: base }, (_, i) => i).sort(
+    (a, b) =>
+      Number(HUB_KINDS.has(parts[b]!.kind)) - Number(HUB_KINDS.has(parts[a]!.kind)) ||
+      ((a * 2654435761) % 1000) - ((b * 2654435761) % 1000),
+  )
   const rank = zipfSampler(base, 0.8, random)
   const seen = new Set<number>()
   const otherEnd = (a: number): number => {
@@ -90,8 +129,8 @@ function inventLinks(parts: CataloguePart[], sizes: [number, number], random: Ra
   const sets = sizes.map(emptyLinks) as [LinkSet, LinkSet]
   for (const set of sets) {
     for (let i = 0; i < set.from.length; i++) {
-      let a = 0
-      let b = 0
+      let a: number
+      let b: number
       for (let attempt = 0; ; attempt++) {
         a = attempt < 30 ? order[rank()]! : random.int(base)
         b = attempt < 30 ? otherEnd(a) : random.int(base)

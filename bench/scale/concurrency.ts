@@ -16,7 +16,11 @@ export async function measureConcurrentFits(counters: Client[], bare: BareQuerie
   let issued = 0
   const started = performance.now()
   const worker = async (client: Client) => {
-    while (issued < Math.max(pace.requests, CLIENTS * 5) && !sample.failure && (issued < CLIENTS * 2 || performance.now() - started < pace.budgetMs)) {
+    while (
+      issued < Math.max(pace.requests, CLIENTS * 5) &&
+      !sample.failure &&
+      (issued < CLIENTS * 2 || performance.now() - started < pace.budgetMs)
+    ) {
       const part = parts[issued++ % parts.length]!
       const t = performance.now()
       try {
@@ -37,6 +41,13 @@ export async function measureConcurrentFits(counters: Client[], bare: BareQuerie
     latencyLine(`${label}, latency`, sample, baseline, { p99: 100 }),
     sample.failure
       ? figureLine(`${label}, throughput`, `failed: ${sample.failure}`, '', '', '≥ 300 req/s', false)
-      : figureLine(`${label}, throughput`, `${rate.toFixed(rate < 10 ? 2 : 0)} req/s`, `${Math.round(bareRate).toLocaleString('en')} req/s`, `${(rate / bareRate).toFixed(4)}`, '≥ 300 req/s', rate >= 300),
+      : figureLine(
+          `${label}, throughput`,
+          `${rate.toFixed(rate < 10 ? 2 : 0)} req/s`,
+          `${Math.round(bareRate).toLocaleString('en')} req/s`,
+          `${(rate / bareRate).toFixed(4)}`,
+          '≥ 300 req/s',
+          rate >= 300,
+        ),
   ]
 }

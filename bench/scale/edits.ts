@@ -6,7 +6,9 @@ import type { PickedPart } from './picks'
 import { figureLine, latencyLine, type Line } from './report'
 import { failureReason, type Sample } from './stats'
 
-const fitsAnswer = z.object({ results: z.array(z.object({ part: z.object({ partNumber: z.string() }), relation: z.string(), decidedBy: z.string() })) })
+const fitsAnswer = z.object({
+  results: z.array(z.object({ part: z.object({ partNumber: z.string() }), relation: z.string(), decidedBy: z.string() })),
+})
 const EDITS = 5
 
 type Edit = { linkId: number; part: string; other: string }
@@ -31,7 +33,10 @@ export async function measureEdits(editor: Client, counter: Client, bare: BareQu
   const stall: Sample = { times: [] }
   const next: Sample = { times: [] }
   let shown = 0
-  const edits = parts.slice(-EDITS).map((part) => linkToEdit(bare, part)).filter((edit): edit is Edit => edit !== undefined)
+  const edits = parts
+    .slice(-EDITS)
+    .map((part) => linkToEdit(bare, part))
+    .filter((edit): edit is Edit => edit !== undefined)
   for (const edit of edits) {
     const delay = monitorEventLoopDelay({ resolution: 1 })
     try {
@@ -44,7 +49,12 @@ export async function measureEdits(editor: Client, counter: Client, bare: BareQu
       const started = performance.now()
       const answer = fitsAnswer.parse(await counter.get(`/api/parts/${encodeURIComponent(edit.part)}/fits`))
       next.times.push(performance.now() - started)
-      if (answer.results.some((result) => result.part.partNumber === edit.other && result.relation === 'does-not-fit' && result.decidedBy === 'link')) shown++
+      if (
+        answer.results.some(
+          (result) => result.part.partNumber === edit.other && result.relation === 'does-not-fit' && result.decidedBy === 'link',
+        )
+      )
+        shown++
     } catch (error) {
       delay.disable()
       busy.failure = stall.failure = next.failure = failureReason(error)
@@ -55,6 +65,13 @@ export async function measureEdits(editor: Client, counter: Client, bare: BareQu
     latencyLine('single-link edit, event-loop busy', busy, null, { p95: 5 }),
     latencyLine('single-link edit, longest stall', stall, null, {}),
     latencyLine('what fits right after the edit', next, null, {}),
-    figureLine('edit visible in the next answer', `${shown} of ${edits.length}`, '', '', 'every edit', edits.length > 0 && shown === edits.length),
+    figureLine(
+      'edit visible in the next answer',
+      `${shown} of ${edits.length}`,
+      '',
+      '',
+      'every edit',
+      edits.length > 0 && shown === edits.length,
+    ),
   ]
 }

@@ -89,56 +89,115 @@ export function attributeCell(name: string, kind: PartKind, family: Family, rand
   const f = family
   const flag = (value: boolean) => (value ? 'true' : 'false')
   switch (name) {
-    case 'cylinders': return String(f.cylinders)
-    case 'boreMm': return String(kind === 'head-gasket' ? f.boreMm + random.pick([0.5, 1, 1.5]) : f.boreMm)
-    case 'strokeMm': return String(f.strokeMm)
-    case 'deckClearanceMm': return String(random.pick([0.2, 0.25, 0.3, 0.35, 0.5]))
-    case 'pistonVolumeCc': return String(random.pick([-4, 0, 4, 6, 8]))
-    case 'headBoltPattern': return f.headBoltPattern
-    case 'headBoltThread': case 'thread': return f.thread
-    case 'headBoltCount': case 'setQuantity': return String(f.cylinders * 2 + 2)
-    case 'tappedDepthMm': return String(random.pick([32, 35, 38, 40]))
-    case 'material': return kind === 'head' || random.next() < 0.3 ? 'aluminium' : 'cast-iron'
-    case 'oilRestrictor': return flag(kind === 'block' ? f.restrictorInBlock : !f.restrictorInBlock)
-    case 'crankToDeckMm': return String(f.crankToDeckMm)
-    case 'tensionerRangeMm': return String(random.pick([1.5, 2, 2.5, 3]))
-    case 'crankSnout': return f.crankSnout
-    case 'chamberCc': return String(38 + random.int(19))
-    case 'boltBossHeightMm': return String(80 + random.int(16))
-    case 'distributorMount': case 'mountPattern': return f.distributorMount
-    case 'valveLift': return f.variableLift ? 'variable' : 'fixed'
-    case 'intakePortPattern': return f.intakePort
-    case 'exhaustPortPattern': return f.exhaustPort
-    case 'portPattern': return kind.startsWith('intake') ? f.intakePort : f.exhaustPort
-    case 'camNose': return f.camNose
-    case 'camAboveDeckMm': return String(52 + random.int(11))
-    case 'compressedThicknessMm': return String(random.pick([0.7, 1.0, 1.2, 1.4]))
-    case 'construction': return random.pick(['multi-layer-steel', 'composite', 'copper'])
-    case 'lengthMm': return String(100 + random.int(41))
-    case 'torqueToYield': return flag(random.next() < 0.7)
-    case 'washerThicknessMm': return String(random.pick([0, 2, 3]))
-    case 'capStyle': return f.capStyle
-    case 'internals': return f.internals
-    case 'internalsTransferable': return flag(random.next() < 0.6)
-    case 'diagnosticGeneration': return f.diagnostic
-    case 'variableValveLift': case 'vvlLeads': return flag(f.variableLift)
-    case 'vvlLampWhenAbsent': return f.variableLift ? random.pick(['on', 'off']) : ''
-    case 'connector': return f.connector
-    case 'injectorImpedance': case 'impedance': return f.lowImpedance ? 'low' : 'high'
-    case 'injectorPlug': case 'plug': return f.injectorPlug
-    case 'fuelRailMount': return f.fuelRailMount
-    case 'injectorCupMm': case 'sealMm': return String(random.pick([11, 14]))
-    case 'outlets': return String(f.cylinders)
-    case 'pressureBar': case 'ratedPressureBar': return String(random.pick([2.5, 3, 3.5, 4]))
-    case 'flowCcMin': return String(180 + 10 * random.int(38))
-    case 'teeth': return String(kind === 'timing-belt' ? f.beltTeeth : kind === 'cam-gear' ? 42 + random.int(3) : 21 + random.int(2))
-    case 'pitchMm': return String(f.pitchMm)
-    case 'profile': return f.profile
-    case 'widthMm': return String(random.pick([19, 22, 25]))
-    case 'orificeMm': return String(random.pick([1.4, 1.6, 1.8, 2.0]))
-    case 'thicknessMm': return String(random.pick([1, 2, 3]))
-    case 'innerDiameterMm': return String(8 + random.int(33))
-    case 'quantityPerPack': return String(random.pick([1, 2, 5, 10]))
-    default: return ''
+    case 'cylinders':
+      return String(f.cylinders)
+    case 'boreMm':
+      return String(kind === 'head-gasket' ? f.boreMm + random.pick([0.5, 1, 1.5]) : f.boreMm)
+    case 'strokeMm':
+      return String(f.strokeMm)
+    case 'deckClearanceMm':
+      return String(random.pick([0.2, 0.25, 0.3, 0.35, 0.5]))
+    case 'pistonVolumeCc':
+      return String(random.pick([-4, 0, 4, 6, 8]))
+    case 'headBoltPattern':
+      return f.headBoltPattern
+    case 'headBoltThread':
+    case 'thread':
+      return f.thread
+    case 'headBoltCount':
+    case 'setQuantity':
+      return String(f.cylinders * 2 + 2)
+    case 'tappedDepthMm':
+      return String(random.pick([32, 35, 38, 40]))
+    case 'material':
+      return kind === 'head' || random.next() < 0.3 ? 'aluminium' : 'cast-iron'
+    case 'oilRestrictor':
+      return flag(kind === 'block' ? f.restrictorInBlock : !f.restrictorInBlock)
+    case 'crankToDeckMm':
+      return String(f.crankToDeckMm)
+    case 'tensionerRangeMm':
+      return String(random.pick([1.5, 2, 2.5, 3]))
+    case 'crankSnout':
+      return f.crankSnout
+    case 'chamberCc':
+      return String(38 + random.int(19))
+    case 'boltBossHeightMm':
+      return String(80 + random.int(16))
+    case 'distributorMount':
+    case 'mountPattern':
+      return f.distributorMount
+    case 'valveLift':
+      return f.variableLift ? 'variable' : 'fixed'
+    case 'intakePortPattern':
+      return f.intakePort
+    case 'exhaustPortPattern':
+      return f.exhaustPort
+    case 'portPattern':
+      return kind.startsWith('intake') ? f.intakePort : f.exhaustPort
+    case 'camNose':
+      return f.camNose
+    case 'camAboveDeckMm':
+      return String(52 + random.int(11))
+    case 'compressedThicknessMm':
+      return String(random.pick([0.7, 1.0, 1.2, 1.4]))
+    case 'construction':
+      return random.pick(['multi-layer-steel', 'composite', 'copper'])
+    case 'lengthMm':
+      return String(100 + random.int(41))
+    case 'torqueToYield':
+      return flag(random.next() < 0.7)
+    case 'washerThicknessMm':
+      return String(random.pick([0, 2, 3]))
+    case 'capStyle':
+      return f.capStyle
+    case 'internals':
+      return f.internals
+    case 'internalsTransferable':
+      return flag(random.next() < 0.6)
+    case 'diagnosticGeneration':
+      return f.diagnostic
+    case 'variableValveLift':
+    case 'vvlLeads':
+      return flag(f.variableLift)
+    case 'vvlLampWhenAbsent':
+      return f.variableLift ? random.pick(['on', 'off']) : ''
+    case 'connector':
+      return f.connector
+    case 'injectorImpedance':
+    case 'impedance':
+      return f.lowImpedance ? 'low' : 'high'
+    case 'injectorPlug':
+    case 'plug':
+      return f.injectorPlug
+    case 'fuelRailMount':
+      return f.fuelRailMount
+    case 'injectorCupMm':
+    case 'sealMm':
+      return String(random.pick([11, 14]))
+    case 'outlets':
+      return String(f.cylinders)
+    case 'pressureBar':
+    case 'ratedPressureBar':
+      return String(random.pick([2.5, 3, 3.5, 4]))
+    case 'flowCcMin':
+      return String(180 + 10 * random.int(38))
+    case 'teeth':
+      return String(kind === 'timing-belt' ? f.beltTeeth : kind === 'cam-gear' ? 42 + random.int(3) : 21 + random.int(2))
+    case 'pitchMm':
+      return String(f.pitchMm)
+    case 'profile':
+      return f.profile
+    case 'widthMm':
+      return String(random.pick([19, 22, 25]))
+    case 'orificeMm':
+      return String(random.pick([1.4, 1.6, 1.8, 2.0]))
+    case 'thicknessMm':
+      return String(random.pick([1, 2, 3]))
+    case 'innerDiameterMm':
+      return String(8 + random.int(33))
+    case 'quantityPerPack':
+      return String(random.pick([1, 2, 5, 10]))
+    default:
+      return ''
   }
 }

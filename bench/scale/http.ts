@@ -39,7 +39,10 @@ export async function signIn(base: string, email: string, password: string, time
     body: JSON.stringify({ email, password }),
   })
   await answer(response)
-  const cookie = response.headers.getSetCookie().map((line) => line.split(';')[0]).join('; ')
+  const cookie = response.headers
+    .getSetCookie()
+    .map((line) => line.split(';')[0])
+    .join('; ')
   if (!cookie) throw new Error(`Signing in as ${email} set no session cookie.`)
   return client(base, cookie, timeoutMs)
 }

@@ -24,17 +24,25 @@ export async function measureSmallImports(importer: Client, files: string[]): Pr
  * `/api/health` asked every 10 ms while a large links commit runs, against
  * the same request on the idle server just before.
  */
-export async function measureHealthDuringCommit(importer: Client, counter: Client, file: string, rows: number, pace: Pace): Promise<Line[]> {
+export async function measureHealthDuringCommit(
+  importer: Client,
+  counter: Client,
+  file: string,
+  rows: number,
+  pace: Pace,
+): Promise<Line[]> {
   const idle = await measure(() => counter.get('/api/health'), pace)
   const during: Sample = { times: [] }
   let done = false
   const started = performance.now()
-  const commit = commitImport(importer, 'links', file).then(
-    (created) => ({ created, ms: performance.now() - started }),
-    (error: unknown) => ({ error: failureReason(error) }),
-  ).finally(() => {
-    done = true
-  })
+  const commit = commitImport(importer, 'links', file)
+    .then(
+      (created) => ({ created, ms: performance.now() - started }),
+      (error: unknown) => ({ error: failureReason(error) }),
+    )
+    .finally(() => {
+      done = true
+    })
   while (!done) {
     const t = performance.now()
     try {
@@ -49,7 +57,21 @@ export async function measureHealthDuringCommit(importer: Client, counter: Clien
   const result = await commit
   const label = `/api/health during a ${rows.toLocaleString('en')}-row links commit`
   const health = latencyLine(label, during, idle, { p99: 100 })
-  if ('error' in result) return [health, figureLine(`links commit of ${rows.toLocaleString('en')} rows under reads`, `failed: ${result.error}`, '', '', '', false)]
+  if ('error' in result)
+    return [
+      health,
+      figureLine(`links commit of ${rows.toLocaleString('en')} rows under reads`, `failed: ${result.error}`, '', '', '', false),
+    ]
   const rate = Math.round(result.created / (result.ms / 1000))
-  return [health, figureLine(`links commit of ${rows.toLocaleString('en')} rows under reads`, `${rate.toLocaleString('en')} rows/s`, '', '', '', undefined)]
+  return [
+    health,
+    figureLine(
+      `links commit of ${rows.toLocaleString('en')} rows under reads`,
+      `${rate.toLocaleString('en')} rows/s`,
+      '',
+      '',
+      '',
+      undefined,
+    ),
+  ]
 }

@@ -22,5 +22,12 @@ export function importLines(load: LoadTimings, raw: { links: number; identities:
 }
 
 export function memoryLine(afterMb: number, beforeMb: number): Line {
-  return figureLine('resident memory, graph built', `${afterMb.toLocaleString('en')} MB`, `${beforeMb.toLocaleString('en')} MB before`, '', '≤ 500 MB', afterMb <= 500)
+  return figureLine(
+    'resident memory, graph built',
+    `${afterMb.toLocaleString('en')} MB`,
+    `${beforeMb.toLocaleString('en')} MB before`,
+    '',
+    '≤ 500 MB',
+    afterMb <= 500,
+  )
 }

@@ -4,7 +4,10 @@ import type { CatalogueFiles } from './csv-files'
 import type { Client } from './http'
 import { failureReason } from './stats'
 
-const committed = z.object({ batchId: z.number(), counts: z.object({ created: z.number(), updated: z.number(), unchanged: z.number(), rejected: z.number() }) })
+const committed = z.object({
+  batchId: z.number(),
+  counts: z.object({ created: z.number(), updated: z.number(), unchanged: z.number(), rejected: z.number() }),
+})
 
 export type ImportTiming = { rows: number; ms: number; failures: string[] }
 export type LoadTimings = { parts: ImportTiming; links: ImportTiming; identities: ImportTiming }

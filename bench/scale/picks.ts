@@ -31,12 +31,17 @@ export function pickParts(db: Database.Database, graph: TypedGraph): Picks {
   })
   // One family's parts in every slot, as a counter would plan a build; the family with the most slots covered.
   const families = db
-    .prepare("SELECT family, kind, MIN(partNumber) AS number FROM part WHERE partNumber LIKE 'GX-%' AND partNumber GLOB '*[0-9]' GROUP BY family, kind")
+    .prepare(
+      "SELECT family, kind, MIN(partNumber) AS number FROM part WHERE partNumber LIKE 'GX-%' AND partNumber GLOB '*[0-9]' GROUP BY family, kind",
+    )
     .all() as { family: string; kind: string; number: string }[]
   const byFamily = new Map<string, Record<string, string>>()
   for (const row of families) if (isSlotId(row.kind)) byFamily.set(row.family, { ...byFamily.get(row.family), [row.kind]: row.number })
   const build = [...byFamily.values()].sort((a, b) => Object.keys(b).length - Object.keys(a).length)[0] ?? {}
-  const marks = db.prepare("SELECT value FROM part_mark WHERE type = 'casting' AND value GLOB '[A-Z][0-9]*' LIMIT 20").pluck().all() as string[]
+  const marks = db
+    .prepare("SELECT value FROM part_mark WHERE type = 'casting' AND value GLOB '[A-Z][0-9]*' LIMIT 20")
+    .pluck()
+    .all() as string[]
   return {
     typical,
     hubs,

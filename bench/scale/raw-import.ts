@@ -10,11 +10,16 @@ function emptyCatalogueCopy(sourcePath: string, copyPath: string): Database.Data
   const copy = new Database(copyPath)
   copy.pragma('journal_mode = WAL')
   const source = new Database(sourcePath, { readonly: true })
-  const schema = source.prepare("SELECT sql FROM sqlite_master WHERE sql IS NOT NULL AND name NOT LIKE 'sqlite_%' ORDER BY type = 'index'").pluck().all() as string[]
+  const schema = source
+    .prepare("SELECT sql FROM sqlite_master WHERE sql IS NOT NULL AND name NOT LIKE 'sqlite_%' ORDER BY type = 'index'")
+    .pluck()
+    .all() as string[]
   source.close()
   for (const sql of schema) copy.exec(sql)
   copy.prepare('ATTACH DATABASE ? AS source').run(sourcePath)
-  copy.exec('INSERT INTO part SELECT * FROM source.part; INSERT INTO modification SELECT * FROM source.modification; DETACH DATABASE source')
+  copy.exec(
+    'INSERT INTO part SELECT * FROM source.part; INSERT INTO modification SELECT * FROM source.modification; DETACH DATABASE source',
+  )
   return copy
 }
 

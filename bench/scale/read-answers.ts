@@ -19,22 +19,72 @@ function answers(counter: Client, bare: BareQueries, graph: TypedGraph, picks: P
   const partial = Object.fromEntries(Object.entries(build).filter(([slot]) => !EMPTY_SLOTS.includes(slot)))
   const filledIds = Object.values(partial).map((number) => bare.partId(number))
   return [
-    { answer: 'search, part-number prefix', goal: search, call: (i) => counter.get(`/api/parts?q=${encodeURIComponent(at(picks.numberPrefixes, i))}`), bare: (i) => bare.searchNumberPrefix(normalisePartCode(at(picks.numberPrefixes, i))) },
-    { answer: 'search, casting-mark prefix', goal: search, call: (i) => counter.get(`/api/parts?q=${encodeURIComponent(at(picks.markPrefixes, i))}`), bare: (i) => bare.searchMarkPrefix(normalisePartCode(at(picks.markPrefixes, i))) },
-    { answer: 'search, name word', goal: search, call: (i) => counter.get(`/api/parts?q=${at(picks.nameWords, i)}`), bare: (i) => bare.searchNameWord(at(picks.nameWords, i)) },
-    { answer: 'what fits, typical part', goal: { p95: 20, within: 5 }, call: (i) => counter.get(`/api/parts/${pn(at(picks.typical, i).number)}/fits`), bare: (i) => bare.linksBothWays(at(picks.typical, i).id) },
-    { answer: 'what fits, reviewed only', goal: {}, call: (i) => counter.get(`/api/parts/${pn(at(picks.typical, i).number)}/fits?inferred=0`), bare: (i) => bare.linksBothWays(at(picks.typical, i).id) },
-    { answer: 'what fits, hub part', goal: { p95: 150, within: 2 }, call: (i) => counter.get(`/api/parts/${pn(at(picks.hubs, i).number)}/fits`), bare: (i) => bare.linksBothWays(at(picks.hubs, i).id) },
+    {
+      answer: 'search, part-number prefix',
+      goal: search,
+      call: (i) => counter.get(`/api/parts?q=${encodeURIComponent(at(picks.numberPrefixes, i))}`),
+      bare: (i) => bare.searchNumberPrefix(normalisePartCode(at(picks.numberPrefixes, i))),
+    },
+    {
+      answer: 'search, casting-mark prefix',
+      goal: search,
+      call: (i) => counter.get(`/api/parts?q=${encodeURIComponent(at(picks.markPrefixes, i))}`),
+      bare: (i) => bare.searchMarkPrefix(normalisePartCode(at(picks.markPrefixes, i))),
+    },
+    {
+      answer: 'search, name word',
+      goal: search,
+      call: (i) => counter.get(`/api/parts?q=${at(picks.nameWords, i)}`),
+      bare: (i) => bare.searchNameWord(at(picks.nameWords, i)),
+    },
+    {
+      answer: 'what fits, typical part',
+      goal: { p95: 20, within: 5 },
+      call: (i) => counter.get(`/api/parts/${pn(at(picks.typical, i).number)}/fits`),
+      bare: (i) => bare.linksBothWays(at(picks.typical, i).id),
+    },
+    {
+      answer: 'what fits, reviewed only',
+      goal: {},
+      call: (i) => counter.get(`/api/parts/${pn(at(picks.typical, i).number)}/fits?inferred=0`),
+      bare: (i) => bare.linksBothWays(at(picks.typical, i).id),
+    },
+    {
+      answer: 'what fits, hub part',
+      goal: { p95: 150, within: 2 },
+      call: (i) => counter.get(`/api/parts/${pn(at(picks.hubs, i).number)}/fits`),
+      bare: (i) => bare.linksBothWays(at(picks.hubs, i).id),
+    },
     {
       answer: 'path, two distant parts',
       goal: { p95: 50, within: 3 },
       call: (i) => counter.get(`/api/graph/path?from=${pn(at(picks.paths, i).from.number)}&to=${pn(at(picks.paths, i).to.number)}`),
       bare: (i) => distancesFrom(graph, at(picks.paths, i).from.id, at(picks.paths, i).to.id),
     },
-    { answer: 'neighbourhood, 2 steps, hub', goal: { p95: 30, within: 3 }, call: (i) => counter.get(`/api/graph/neighbourhood/${pn(at(picks.hubs, i).number)}?depth=2`), bare: (i) => bare.neighbourhood(at(picks.hubs, i).id) },
-    { answer: `evaluate, ${Object.keys(build).length} slots`, goal: { p95: 15 }, call: () => counter.send('POST', '/api/builds/evaluate', { slots: build }), bare: () => bare.buildPairs(Object.values(build)) },
-    { answer: 'complete, 3 empty slots', goal: { p95: 150 }, call: () => counter.send('POST', '/api/builds/complete', { slots: partial }), bare: () => bare.completionReads(filledIds, EMPTY_SLOTS) },
-    { answer: 'fill the gaps, 3 empty slots', goal: { p95: 300 }, call: () => counter.send('POST', '/api/builds/fill', { slots: partial }), bare: () => bare.completionReads(filledIds, EMPTY_SLOTS) },
+    {
+      answer: 'neighbourhood, 2 steps, hub',
+      goal: { p95: 30, within: 3 },
+      call: (i) => counter.get(`/api/graph/neighbourhood/${pn(at(picks.hubs, i).number)}?depth=2`),
+      bare: (i) => bare.neighbourhood(at(picks.hubs, i).id),
+    },
+    {
+      answer: `evaluate, ${Object.keys(build).length} slots`,
+      goal: { p95: 15 },
+      call: () => counter.send('POST', '/api/builds/evaluate', { slots: build }),
+      bare: () => bare.buildPairs(Object.values(build)),
+    },
+    {
+      answer: 'complete, 3 empty slots',
+      goal: { p95: 150 },
+      call: () => counter.send('POST', '/api/builds/complete', { slots: partial }),
+      bare: () => bare.completionReads(filledIds, EMPTY_SLOTS),
+    },
+    {
+      answer: 'fill the gaps, 3 empty slots',
+      goal: { p95: 300 },
+      call: () => counter.send('POST', '/api/builds/fill', { slots: partial }),
+      bare: () => bare.completionReads(filledIds, EMPTY_SLOTS),
+    },
   ]
 }
 
@@ -49,7 +99,10 @@ function gist(body: unknown): string {
   if ('capped' in answer) return `${count('nodes')} parts, ${count('edges')} links${answer.capped ? ', capped' : ''}`
   if ('verdict' in answer) return `verdict ${String(answer.verdict)}, ${count('pairs')} pairs`
   if ('filled' in answer) return `${count('filled')} filled, ${count('unfilled')} unfilled`
-  if ('slots' in answer && typeof answer.slots === 'object' && answer.slots) return `${Object.values(answer.slots as Record<string, { candidates?: unknown[] }>).map((slot) => slot.candidates?.length ?? 0).join('+')} candidates`
+  if ('slots' in answer && typeof answer.slots === 'object' && answer.slots)
+    return `${Object.values(answer.slots as Record<string, { candidates?: unknown[] }>)
+      .map((slot) => slot.candidates?.length ?? 0)
+      .join('+')} candidates`
   return 'answered'
 }
 

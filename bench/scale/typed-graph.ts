@@ -10,7 +10,9 @@ export function loadTypedGraph(db: Database.Database): TypedGraph {
   const started = performance.now()
   const nodes = ((db.prepare('SELECT MAX(id) FROM part').pluck().get() as number | null) ?? 0) + 1
   const edges = db
-    .prepare("SELECT partAId, partBId FROM link WHERE status = 'approved' AND relation <> 'does-not-fit' UNION ALL SELECT partAId, partBId FROM part_identity")
+    .prepare(
+      "SELECT partAId, partBId FROM link WHERE status = 'approved' AND relation <> 'does-not-fit' UNION ALL SELECT partAId, partBId FROM part_identity",
+    )
     .raw()
   const ends: number[] = []
   for (const row of edges.iterate() as Iterable<[number, number]>) ends.push(row[0], row[1])

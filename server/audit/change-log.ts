@@ -45,7 +45,13 @@ export function changeRecorder(db: Database.Database, batchId: number) {
   const insert = db.prepare(
     'INSERT INTO import_change (batchId, recordType, recordId, action, previousBatchId, previousValues) VALUES (?, ?, ?, ?, ?, ?)',
   )
-  return (recordType: ImportRecordType, recordId: number, action: 'updated' | 'deleted', previousBatchId: number | null, previous: PreviousRows) => {
+  return (
+    recordType: ImportRecordType,
+    recordId: number,
+    action: 'updated' | 'deleted',
+    previousBatchId: number | null,
+    previous: PreviousRows,
+  ) => {
     insert.run(batchId, recordType, recordId, action, previousBatchId, JSON.stringify(previous))
   }
 }

@@ -28,7 +28,9 @@ export function handEdit(db: Database.Database, editor: Editor, counts: { create
       record('link', linkId, action, link.batchId, { link: [link], link_modification: mods } satisfies PreviousRows)
     },
     rememberIdentity(identityId: number) {
-      const identity = db.prepare('SELECT * FROM part_identity WHERE id = ?').get(identityId) as Record<string, unknown> & { batchId: number | null }
+      const identity = db.prepare('SELECT * FROM part_identity WHERE id = ?').get(identityId) as Record<string, unknown> & {
+        batchId: number | null
+      }
       record('identity', identityId, 'deleted', identity.batchId, { part_identity: [identity] })
     },
     /** Sets a link's modifications; an unknown name becomes a proposed modification of this edit. */

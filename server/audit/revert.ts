@@ -31,7 +31,9 @@ function findBlockers(db: Database.Database, batchId: number): Blocker[] {
     UNION SELECT l.batchId, 'uses modifications this batch proposed' FROM link_modification lm
       JOIN link l ON l.id = lm.linkId JOIN modification m ON m.id = lm.modificationId
       WHERE m.batchId = @batch AND ${outside('l')}`
-  const rows = db.prepare(`SELECT x.batchId, x.what, b.fileName FROM (${sql}) x LEFT JOIN import_batch b ON b.id = x.batchId`).all({ batch: batchId }) as Blocker[]
+  const rows = db
+    .prepare(`SELECT x.batchId, x.what, b.fileName FROM (${sql}) x LEFT JOIN import_batch b ON b.id = x.batchId`)
+    .all({ batch: batchId }) as Blocker[]
   return rows.sort((a, b) => (b.batchId ?? 0) - (a.batchId ?? 0))
 }
 
@@ -62,7 +64,10 @@ function restorer(db: Database.Database) {
   }
   const insert = (table: string, row: Record<string, unknown>) => {
     const columns = Object.keys(row).filter((column) => COLUMN.test(column))
-    run(`INSERT INTO ${table} (${columns.map((c) => `"${c}"`).join(', ')}) VALUES (${columns.map(() => '?').join(', ')})`, columns.map((c) => row[c]))
+    run(
+      `INSERT INTO ${table} (${columns.map((c) => `"${c}"`).join(', ')}) VALUES (${columns.map(() => '?').join(', ')})`,
+      columns.map((c) => row[c]),
+    )
   }
   return (type: ImportRecordType, recordId: number, action: 'updated' | 'deleted', previous: PreviousRows) => {
     const { table, children } = TABLES[type]
@@ -102,16 +107,26 @@ export function revertBatch(db: Database.Database, batchId: number, userName: st
     throw new AppError(409, 'revert_blocked', message, details)
   }
 
-  const changes = (db.prepare('SELECT recordType, recordId, action, previousValues FROM import_change WHERE batchId = ? ORDER BY id').all(batchId) as ChangeRow[])
-    .map((change) => ({ ...change, type: change.recordType, rows: JSON.parse(change.previousValues) as PreviousRows }))
+  const changes = (
+    db
+      .prepare('SELECT recordType, recordId, action, previousValues FROM import_change WHERE batchId = ? ORDER BY id')
+      .all(batchId) as ChangeRow[]
+  ).map((change) => ({ ...change, type: change.recordType, rows: JSON.parse(change.previousValues) as PreviousRows }))
   const missing = missingReferences(db, changes)
   if (missing.length) {
-    throw new AppError(409, 'revert_blocked', `The records this batch replaced point at ${missing.join(', ')}, removed since by another revert, so they cannot be put back exactly.`)
+    throw new AppError(
+      409,
+      'revert_blocked',
+      `The records this batch replaced point at ${missing.join(', ')}, removed since by another revert, so they cannot be put back exactly.`,
+    )
   }
   const restore = restorer(db)
   for (const change of changes) if (change.action === 'updated') restore(change.type, change.recordId, 'updated', change.rows)
   for (const table of ['link', 'part_identity', 'part', 'modification']) db.prepare(`DELETE FROM ${table} WHERE batchId = ?`).run(batchId)
   for (const change of changes) if (change.action === 'deleted') restore(change.type, change.recordId, 'deleted', change.rows)
-  rewritePartWords(db, changes.filter((change) => change.type === 'part').map((change) => change.recordId))
+  rewritePartWords(
+    db,
+    changes.filter((change) => change.type === 'part').map((change) => change.recordId),
+  )
   db.prepare(`UPDATE import_batch SET status = 'reverted', revertedAt = ${SQL_NOW}, revertedByName = ? WHERE id = ?`).run(userName, batchId)
 }

@@ -17,11 +17,7 @@ export function authRoutes(auth: passport.PassportStatic, options: { loginAttemp
   router.post('/auth/login', loginThrottle(options.loginAttempts), async (req: Request, res: Response, next: NextFunction) => {
     req.body = parseBody(loginSchema, req)
     const user = await new Promise<User | false>((resolve, reject) => {
-      auth.authenticate('local', (error: unknown, found: User | false) => (error ? reject(error) : resolve(found)))(
-        req,
-        res,
-        next,
-      )
+      auth.authenticate('local', (error: unknown, found: User | false) => (error ? reject(error) : resolve(found)))(req, res, next)
     })
     // One message for both halves, so a caller cannot probe which e-mails exist.
     if (!user) throw new AppError(401, 'invalid_credentials', 'E-mail or password is not right.')

@@ -21,7 +21,10 @@ export function loginThrottle(maxFailures: number) {
     },
     handler: (_req: Request, res: Response) => {
       res.status(429).json({
-        error: { code: 'too_many_attempts', message: 'Too many failed sign-ins. Wait a quarter of an hour, or ask an administrator to reset the password.' },
+        error: {
+          code: 'too_many_attempts',
+          message: 'Too many failed sign-ins. Wait a quarter of an hour, or ask an administrator to reset the password.',
+        },
       })
     },
   })

@@ -19,9 +19,7 @@ async function sessionSecret(dataSource: DataSource, configured?: string): Promi
 }
 
 export async function createSessionMiddleware(dataSource: DataSource, options: { secret?: string }) {
-  const store = new TypeormStore({ cleanupLimit: 2, ttl: EIGHT_HOURS_S }).connect(
-    dataSource.getRepository(SessionEntity),
-  )
+  const store = new TypeormStore({ cleanupLimit: 2, ttl: EIGHT_HOURS_S }).connect(dataSource.getRepository(SessionEntity))
   return session({
     name: 'fitwright.sid',
     secret: await sessionSecret(dataSource, options.secret),

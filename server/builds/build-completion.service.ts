@@ -28,7 +28,9 @@ export class CompletionReads {
   rowsOf(kind: SlotId): Promise<Row[]> {
     let rows = this.rows.get(kind)
     if (!rows) {
-      rows = this.dataSource.query('SELECT id, partNumber, attributes, yearTo FROM part WHERE kind = ? ORDER BY partNumber', [kind]) as Promise<Row[]>
+      rows = this.dataSource.query('SELECT id, partNumber, attributes, yearTo FROM part WHERE kind = ? ORDER BY partNumber', [
+        kind,
+      ]) as Promise<Row[]>
       this.rows.set(kind, rows)
     }
     return rows
@@ -63,7 +65,10 @@ export class BuildCompletionService {
   async complete(request: Parameters<BuildEvaluationService['resolve']>[0], limit: number, only?: string[]): Promise<Completion> {
     const unknown = (only ?? []).filter((slot) => !isSlotId(slot))
     if (unknown.length) {
-      throw AppError.badRequest(`Unknown slot ${unknown.join(', ')}.`, unknown.map((slot) => ({ path: 'only', message: `Unknown slot "${slot}".` })))
+      throw AppError.badRequest(
+        `Unknown slot ${unknown.join(', ')}.`,
+        unknown.map((slot) => ({ path: 'only', message: `Unknown slot "${slot}".` })),
+      )
     }
     const build = await this.evaluation.resolve(request)
     return this.completeBuild(build, await this.graphIndex.snapshot(), limit, { only: only?.filter(isSlotId) })
@@ -107,7 +112,10 @@ export class BuildCompletionService {
   private async judge(slot: SlotId, row: Row, build: ResolvedBuild, graph: FitGraph) {
     const trial: ResolvedBuild = {
       ...build,
-      parts: { ...build.parts, [slot]: { partNumber: row.partNumber, attributes: JSON.parse(row.attributes) as PartAttributes, yearTo: row.yearTo } as Part },
+      parts: {
+        ...build.parts,
+        [slot]: { partNumber: row.partNumber, attributes: JSON.parse(row.attributes) as PartAttributes, yearTo: row.yearTo } as Part,
+      },
       ids: { ...build.ids, [slot]: row.id },
     }
     const { facts } = this.evaluation.prepare(trial)

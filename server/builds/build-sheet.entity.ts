@@ -1,14 +1,5 @@
 import { FLOAT_COLUMN } from '../db/column-types'
-import {
-  Column,
-  CreateDateColumn,
-  Entity,
-  Index,
-  JoinColumn,
-  ManyToOne,
-  PrimaryGeneratedColumn,
-  UpdateDateColumn,
-} from 'typeorm'
+import { Column, CreateDateColumn, Entity, Index, JoinColumn, ManyToOne, PrimaryGeneratedColumn, UpdateDateColumn } from 'typeorm'
 import { UserEntity } from '../users/user.entity'
 
 /** A technician's saved target combination. */

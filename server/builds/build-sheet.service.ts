@@ -57,10 +57,14 @@ export class BuildSheetService {
   /** Slots are checked like an evaluation's (known slot, known part, right kind) and stored by part number. */
   private async checkedSlots(slots: Record<string, string>): Promise<Record<string, string>> {
     const resolved = await resolveSlots(this.parts, slots)
-    return Object.fromEntries(Object.keys(slots).filter(isSlotId).flatMap((slot) => {
-      const entity = resolved.get(slot)
-      return entity ? [[slot, entity.partNumber]] : []
-    }))
+    return Object.fromEntries(
+      Object.keys(slots)
+        .filter(isSlotId)
+        .flatMap((slot) => {
+          const entity = resolved.get(slot)
+          return entity ? [[slot, entity.partNumber]] : []
+        }),
+    )
   }
 
   async create(input: BuildSheetInput, user: User): Promise<BuildSheet> {

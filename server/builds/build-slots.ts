@@ -11,10 +11,7 @@ const ARTICLE = (word: string) => (/^[aeiou]/i.test(word) ? 'an' : 'a')
  * Checks a build's slots and finds their parts. Every problem is collected so
  * the answer names all unknown slots, unknown parts and misplaced kinds at once.
  */
-export async function resolveSlots(
-  parts: PartService,
-  slots: Record<string, string | string[]>,
-): Promise<Map<SlotId, PartRecord>> {
+export async function resolveSlots(parts: PartService, slots: Record<string, string | string[]>): Promise<Map<SlotId, PartRecord>> {
   const problems: FieldError[] = []
   const resolved = new Map<SlotId, PartRecord>()
   for (const [slot, value] of Object.entries(slots)) {

@@ -1,11 +1,6 @@
 import { Router } from 'express'
 import { z } from 'zod'
-import {
-  buildSheetInputSchema,
-  buildSheetUpdateSchema,
-  completeRequestSchema,
-  evaluateRequestSchema,
-} from '../../shared/schemas/build'
+import { buildSheetInputSchema, buildSheetUpdateSchema, completeRequestSchema, evaluateRequestSchema } from '../../shared/schemas/build'
 import { rolesFor } from '../../shared/permissions'
 import { requireRole } from '../auth/require-role'
 import { parseBody, parseParams } from '../middleware/validate'

@@ -56,7 +56,11 @@ export class PartSearchRepository {
     const where = kind ? ' WHERE "kind" = ?' : ''
     const params: SqlValue[] = kind ? [kind] : []
     const count = await this.db.get<{ total: number }>(`SELECT CAST(COUNT(*) AS INTEGER) AS "total" FROM part${where}`, params)
-    const rows = await this.db.all<{ id: number }>(`SELECT "id" FROM part${where} ORDER BY "partNumber" LIMIT ? OFFSET ?`, [...params, limit, offset])
+    const rows = await this.db.all<{ id: number }>(`SELECT "id" FROM part${where} ORDER BY "partNumber" LIMIT ? OFFSET ?`, [
+      ...params,
+      limit,
+      offset,
+    ])
     return { ids: rows.map((row) => row.id), total: count?.total ?? 0 }
   }
 }

@@ -1,4 +1,4 @@
-import { Column, Entity, Index, JoinColumn, ManyToOne, PrimaryColumn } from 'typeorm'
+import { Entity, Index, JoinColumn, ManyToOne, PrimaryColumn } from 'typeorm'
 import { PartEntity } from './part.entity'
 
 /** One word of a part's name or family, lower case: the index behind search by word prefix. */

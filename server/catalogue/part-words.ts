@@ -6,7 +6,11 @@
 export function wordsOf(...texts: string[]): string[] {
   const words = new Set<string>()
   for (const text of texts) {
-    for (const word of text.normalize('NFKD').replace(/[\u0300-\u036f]/g, '').toLowerCase().split(/[^a-z0-9]+/)) {
+    for (const word of text
+      .normalize('NFKD')
+      .replace(/[\u0300-\u036f]/g, '')
+      .toLowerCase()
+      .split(/[^a-z0-9]+/)) {
       if (word) words.add(word)
     }
   }

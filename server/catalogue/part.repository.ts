@@ -34,7 +34,10 @@ export class PartRepository {
     if (rows.length === 0) return []
     const marks = new Map<number, { type: MarkType; value: string }[]>()
     for (const ids of chunks(rows.map((row) => row.id))) {
-      const found = await this.db.all<MarkRow>(`SELECT "partId", "type", "value" FROM part_mark WHERE "partId" IN (${placeholders(ids.length)})`, ids)
+      const found = await this.db.all<MarkRow>(
+        `SELECT "partId", "type", "value" FROM part_mark WHERE "partId" IN (${placeholders(ids.length)})`,
+        ids,
+      )
       for (const mark of found) {
         const list = marks.get(mark.partId)
         if (list) list.push({ type: mark.type, value: mark.value })

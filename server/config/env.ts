@@ -18,7 +18,11 @@ const envSchema = z.object({
   FITWRIGHT_ADMIN_EMAIL: z.email().optional(),
   FITWRIGHT_ADMIN_PASSWORD: z.string().min(10, 'Use at least 10 characters.').optional(),
   FITWRIGHT_LOGIN_ATTEMPTS: z.coerce.number().int().positive().default(10),
-  FITWRIGHT_IMPORT_MAX_BYTES: z.coerce.number().int().positive().default(50 * 1024 * 1024),
+  FITWRIGHT_IMPORT_MAX_BYTES: z.coerce
+    .number()
+    .int()
+    .positive()
+    .default(50 * 1024 * 1024),
   FITWRIGHT_IMPORT_MAX_ROWS: z.coerce.number().int().positive().default(500_000),
 })
 

@@ -39,7 +39,10 @@ export async function listenForCatalogueChanges(
     running = running.then(async () => {
       if (closed) return
       try {
-        const { rows } = await client.query<ChangeRow>('SELECT "id", "touched" FROM catalogue_change WHERE "id" > $1 ORDER BY "id" LIMIT 1000', [lastSeen])
+        const { rows } = await client.query<ChangeRow>(
+          'SELECT "id", "touched" FROM catalogue_change WHERE "id" > $1 ORDER BY "id" LIMIT 1000',
+          [lastSeen],
+        )
         if (rows.length === 0) return
         lastSeen = Number(rows[rows.length - 1]!.id)
         await apply(merge(rows))

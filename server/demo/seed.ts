@@ -5,7 +5,7 @@ import type { DataSource } from 'typeorm'
 import { z } from 'zod'
 import type { Role } from '../../shared/schemas/auth'
 import { buildSheetInputSchema } from '../../shared/schemas/build'
-import { linkSourceSchema, relationSchema, type ReviewStatus } from '../../shared/schemas/fitment'
+import { linkSourceSchema, relationSchema } from '../../shared/schemas/fitment'
 import type { ImportType } from '../../shared/schemas/imports'
 import { splitList } from '../imports/csv/part-row'
 import { readCsvText } from '../imports/csv/read-csv'
@@ -34,11 +34,19 @@ export const DEMO_USERS: { email: string; name: string; role: Role }[] = [
 async function importDemoFile(imports: ImportService, demoDir: string, file: string, type: ImportType, user: ImportUser) {
   const filePath = path.join(demoDir, file)
   try {
-    await imports.run({ filePath, fileName: `demo/${file}`, fileSize: statSync(filePath).size, type, mode: 'commit', validRowsOnly: false, user })
+    await imports.run({
+      filePath,
+      fileName: `demo/${file}`,
+      fileSize: statSync(filePath).size,
+      type,
+      mode: 'commit',
+      validRowsOnly: false,
+      user,
+    })
   } catch (error) {
     if (!(error instanceof AppError)) throw error
     const details = (error.details ?? []).map((detail) => `${detail.path}: ${detail.message}`).join('; ')
-    throw new Error(`Demo data ${file}: ${error.message} ${details}`)
+    throw new Error(`Demo data ${file}: ${error.message} ${details}`, { cause: error })
   }
 }
 
@@ -68,7 +76,16 @@ function seedBuilds(db: Database.Database, file: string, ownerId: number) {
     `INSERT INTO build_sheet (ownerId, name, notes, slots, targetPowerKw, fuelOctane, chassisModelYear, vin) VALUES (?, ?, ?, ?, ?, ?, ?, ?)`,
   )
   for (const build of demoBuildsSchema.parse(JSON.parse(readFileSync(file, 'utf8')))) {
-    insert.run(ownerId, build.name, build.notes, JSON.stringify(build.slots), build.targetPowerKw ?? null, build.fuelOctane ?? null, build.chassisModelYear ?? null, build.vin ?? null)
+    insert.run(
+      ownerId,
+      build.name,
+      build.notes,
+      JSON.stringify(build.slots),
+      build.targetPowerKw ?? null,
+      build.fuelOctane ?? null,
+      build.chassisModelYear ?? null,
+      build.vin ?? null,
+    )
   }
 }
 
@@ -80,7 +97,11 @@ const SEEDED_KEY = 'demo-seeded'
  * reported at the next start rather than silently left half-filled.
  * Returns whether it seeded.
  */
-export async function seedDemo(dataSource: DataSource, services: Pick<Services, 'users' | 'imports' | 'graphIndex'>, demoDir: string): Promise<boolean> {
+export async function seedDemo(
+  dataSource: DataSource,
+  services: Pick<Services, 'users' | 'imports' | 'graphIndex'>,
+  demoDir: string,
+): Promise<boolean> {
   const { users, imports } = services
   const settings = dataSource.getRepository(AppSettingEntity)
   if (await settings.existsBy({ key: SEEDED_KEY })) return false
@@ -90,8 +111,18 @@ export async function seedDemo(dataSource: DataSource, services: Pick<Services, 
   ])
   if (userCount > 0 || partCount > 0) {
     const [{ sheets }] = (await dataSource.query('SELECT COUNT(*) AS sheets FROM build_sheet')) as [{ sheets: number }]
-    if (sheets === 0 && (await users.withPassword(DEMO_USERS.map((u) => u.email), DEMO_PASSWORD)).length > 0) {
-      console.warn('WARNING: the demo scenario looks only partly seeded (a start was cut short). Delete the database file to seed it again.')
+    if (
+      sheets === 0 &&
+      (
+        await users.withPassword(
+          DEMO_USERS.map((u) => u.email),
+          DEMO_PASSWORD,
+        )
+      ).length > 0
+    ) {
+      console.warn(
+        'WARNING: the demo scenario looks only partly seeded (a start was cut short). Delete the database file to seed it again.',
+      )
     }
     return false
   }
@@ -99,7 +130,9 @@ export async function seedDemo(dataSource: DataSource, services: Pick<Services, 
   for (const user of DEMO_USERS) created.push(await users.create({ ...user, password: DEMO_PASSWORD }))
   const editor = created.find((user) => user.role === 'editor')!
   const tech = created.find((user) => user.role === 'tech')!
-  const partFiles = readdirSync(path.join(demoDir, 'parts')).filter((file) => file.endsWith('.csv')).sort()
+  const partFiles = readdirSync(path.join(demoDir, 'parts'))
+    .filter((file) => file.endsWith('.csv'))
+    .sort()
   for (const file of partFiles) await importDemoFile(imports, demoDir, `parts/${file}`, 'parts', editor)
   await importDemoFile(imports, demoDir, 'links.csv', 'links', editor)
   await inTransaction(dataSource, (db) => {

@@ -21,7 +21,10 @@ export function errorAnswer(error: unknown): { status: number; body: ErrorRespon
     return { status: error.status, body: { error: { code: error.code, message: error.message, details: error.details } } }
   }
   if (error instanceof ZodError) {
-    return { status: 400, body: { error: { code: 'validation_failed', message: 'Some fields are not valid.', details: zodDetails(error) } } }
+    return {
+      status: 400,
+      body: { error: { code: 'validation_failed', message: 'Some fields are not valid.', details: zodDetails(error) } },
+    }
   }
   const httpError = error as { status?: number; type?: string; expose?: boolean; message?: string }
   if (httpError.type === 'entity.parse.failed') {

@@ -34,7 +34,13 @@ export async function loadChainDetails(graph: FitGraph, chains: Chain[]): Promis
   return { links, identities }
 }
 
-export function identityStep(graph: FitGraph, identity: GraphIdentity, detail: IdentityDetail | undefined, from: number, to: number): ExplanationStep {
+export function identityStep(
+  graph: FitGraph,
+  identity: GraphIdentity,
+  detail: IdentityDetail | undefined,
+  from: number,
+  to: number,
+): ExplanationStep {
   const a = graph.partNumberOf(from)
   const b = graph.partNumberOf(to)
   return {

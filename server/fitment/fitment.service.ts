@@ -99,16 +99,14 @@ export class FitmentService {
       identical: identical.flatMap((id) => partOf(id) ?? []),
       page: query.page,
       pageSize: query.pageSize,
-      groups: groups.map(
-        (group): FitGroupPage => ({
-          kind: group.kind,
-          relation: group.relation,
-          source: group.source,
-          total: group.total,
-          offset,
-          results: group.found.flatMap(toResult),
-        }),
-      ),
+      groups: groups.map((group): FitGroupPage => ({
+        kind: group.kind,
+        relation: group.relation,
+        source: group.source,
+        total: group.total,
+        offset,
+        results: group.found.flatMap(toResult),
+      })),
     }
   }
 }

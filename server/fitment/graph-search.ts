@@ -8,7 +8,15 @@ export function isFitLink(link: Pick<GraphLink, 'status' | 'relation'>): boolean
 }
 
 /** Per-graph work arrays, reused by every search (searches run to the end without awaiting). */
-type Buffers = { stamp: Uint32Array; closed: Uint32Array; distance: Int32Array; via: Int32Array; previous: Int32Array; queue: Int32Array; round: number }
+type Buffers = {
+  stamp: Uint32Array
+  closed: Uint32Array
+  distance: Int32Array
+  via: Int32Array
+  previous: Int32Array
+  queue: Int32Array
+  round: number
+}
 const buffers = new WeakMap<FitGraph, Buffers>()
 
 function buffersFor(graph: FitGraph): Buffers {
@@ -86,7 +94,7 @@ export function shortestFitPath(graph: FitGraph, from: number, to: number): Path
   }
   if (!found) return null
   const steps: PathStep[] = []
-  for (let node = to; node !== from; ) {
+  for (let node = to; node !== from;) {
     const step = via[node]!
     const back = previous[node]!
     steps.push(
@@ -153,7 +161,8 @@ export function neighbourhoodOf(graph: FitGraph, centre: number, depth: number, 
     const next: number[] = []
     for (const id of frontier) {
       const identitySlots = identities.slotsAt(id)
-      for (let i = 0, n = identities.degreeOf(id); i < n && !capped; i++) capped = !visit(next, identities.other(identitySlots[i]!, id), level)
+      for (let i = 0, n = identities.degreeOf(id); i < n && !capped; i++)
+        capped = !visit(next, identities.other(identitySlots[i]!, id), level)
       const linkSlots = links.slotsAt(id)
       for (let i = 0, n = links.degreeOf(id); i < n && !capped; i++) {
         const slot = linkSlots[i]!

@@ -93,7 +93,10 @@ export class GraphService {
       from: fromNumber,
       to: toNumber,
       found: true,
-      nodes: await this.nodes(graph, [from, ...steps.map((step) => step.to)].map((id, index) => [id, index])),
+      nodes: await this.nodes(
+        graph,
+        [from, ...steps.map((step) => step.to)].map((id, index) => [id, index]),
+      ),
       edges,
       message:
         from === to

@@ -64,8 +64,9 @@ export function insertIdentityRow(
 ): number {
   const [a, b] = orderedPair(input.partIds)
   return Number(
-    db.prepare('INSERT INTO part_identity (partAId, partBId, note, source, batchId) VALUES (?, ?, ?, ?, ?)').run(a, b, input.note, input.source, input.batchId)
-      .lastInsertRowid,
+    db
+      .prepare('INSERT INTO part_identity (partAId, partBId, note, source, batchId) VALUES (?, ?, ?, ?, ?)')
+      .run(a, b, input.note, input.source, input.batchId).lastInsertRowid,
   )
 }
 

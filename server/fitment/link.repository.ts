@@ -70,7 +70,8 @@ export class LinkRepository implements FitDetails {
 
   private async byIds<T>(select: string, ids: readonly number[]): Promise<T[]> {
     const rows: T[] = []
-    for (const list of chunks([...new Set(ids)])) rows.push(...(await this.db.all<T>(`${select} WHERE "id" IN (${placeholders(list.length)})`, list)))
+    for (const list of chunks([...new Set(ids)]))
+      rows.push(...(await this.db.all<T>(`${select} WHERE "id" IN (${placeholders(list.length)})`, list)))
     return rows
   }
 }

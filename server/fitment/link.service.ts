@@ -8,7 +8,11 @@ import { handEdit, type Editor } from '../audit/hand-edit'
 import { insertIdentityRow, insertLinkRow, orderedPair, pairHolder } from './link-rows'
 import type { PartService } from '../catalogue/part.service'
 
-type LinkRow = Omit<Link, 'modifications' | 'createdAt' | 'updatedAt'> & { createdAt: string; updatedAt: string; modifications: string | null }
+type LinkRow = Omit<Link, 'modifications' | 'createdAt' | 'updatedAt'> & {
+  createdAt: string
+  updatedAt: string
+  modifications: string | null
+}
 
 const LINK_SELECT = `SELECT l.id, a.partNumber AS "from", b.partNumber AS "to", l.relation, l.note, l.source, l.status, l.createdAt, l.updatedAt,
   (SELECT group_concat(m.name, ';') FROM link_modification lm JOIN modification m ON m.id = lm.modificationId WHERE lm.linkId = l.id) AS modifications
@@ -140,16 +144,24 @@ export class LinkService {
 /** Only a fit with modification names modifications, and it names at least one. */
 function checkModifications(relation: string, modifications: string[]) {
   if (relation === 'fits-with-modification' && modifications.length === 0) {
-    throw AppError.badRequest('Name the modification a fit with modification needs.', [{ path: 'modifications', message: 'Required for a fit with modification.' }])
+    throw AppError.badRequest('Name the modification a fit with modification needs.', [
+      { path: 'modifications', message: 'Required for a fit with modification.' },
+    ])
   }
   if (relation !== 'fits-with-modification' && modifications.length > 0) {
-    throw AppError.badRequest('Only a fit with modification names modifications.', [{ path: 'modifications', message: 'Leave empty for this relation.' }])
+    throw AppError.badRequest('Only a fit with modification names modifications.', [
+      { path: 'modifications', message: 'Leave empty for this relation.' },
+    ])
   }
 }
 
 /** A pair holds one relation: a fit link or an identity, as imports have it too. */
 function refuseTakenPair(db: Parameters<typeof pairHolder>[0], partIds: [number, number], path: string) {
   const holder = pairHolder(db, partIds)
-  if (holder === 'link') throw AppError.conflict('These two parts are linked already; change that link instead.', [{ path, message: 'Already linked to the first part.' }])
-  if (holder === 'identity') throw AppError.conflict('These two parts are declared identical already.', [{ path, message: 'Already the same part as the first.' }])
+  if (holder === 'link')
+    throw AppError.conflict('These two parts are linked already; change that link instead.', [
+      { path, message: 'Already linked to the first part.' },
+    ])
+  if (holder === 'identity')
+    throw AppError.conflict('These two parts are declared identical already.', [{ path, message: 'Already the same part as the first.' }])
 }

@@ -29,13 +29,24 @@ export class ExportService {
 
   partsCsv(): string {
     const db = sqliteConnection(this.dataSource)
-    const rows = db.prepare('SELECT id, partNumber, kind, name, family, yearFrom, yearTo, notes, attributes FROM part ORDER BY partNumber').all() as PartRow[]
+    const rows = db
+      .prepare('SELECT id, partNumber, kind, name, family, yearFrom, yearTo, notes, attributes FROM part ORDER BY partNumber')
+      .all() as PartRow[]
     const marks = new Map<number, { type: MarkType; value: string }[]>()
-    const markRows = db.prepare('SELECT partId, type, value FROM part_mark ORDER BY value').all() as { partId: number; type: MarkType; value: string }[]
+    const markRows = db.prepare('SELECT partId, type, value FROM part_mark ORDER BY value').all() as {
+      partId: number
+      type: MarkType
+      value: string
+    }[]
     for (const { partId, type, value } of markRows) pushTo(marks, partId, { type, value })
     const cells = rows.map((row) => {
       const partMarks = (marks.get(row.id) ?? []).sort((a, b) => MARK_TYPES.indexOf(a.type) - MARK_TYPES.indexOf(b.type))
-      const part: PartInput = { ...row, kind: row.kind as PartKind, attributes: JSON.parse(row.attributes) as PartInput['attributes'], marks: partMarks }
+      const part: PartInput = {
+        ...row,
+        kind: row.kind as PartKind,
+        attributes: JSON.parse(row.attributes) as PartInput['attributes'],
+        marks: partMarks,
+      }
       return partCells(part)
     })
     const fixed: string[] = [...PART_COLUMNS, ...Object.keys(MARK_COLUMNS)]

@@ -1,7 +1,15 @@
 import { createReadStream } from 'node:fs'
 import type Database from 'better-sqlite3'
 import type { DataSource } from 'typeorm'
-import type { ImportBatch, ImportIssue, ImportMode, ImportPhase, ImportProgress, ImportResult, ImportType } from '../../shared/schemas/imports'
+import type {
+  ImportBatch,
+  ImportIssue,
+  ImportMode,
+  ImportPhase,
+  ImportProgress,
+  ImportResult,
+  ImportType,
+} from '../../shared/schemas/imports'
 import { CsvFileError, readCsvStream, type CsvReadSummary } from './csv/csv-stream'
 import { inTransaction, sqliteConnection } from '../db/sqlite-connection'
 import { ImportBatchEntity } from '../audit/import-batch.entity'

@@ -19,7 +19,10 @@ const exportParamsSchema = z.object({ file: z.enum(EXPORT_FILES, { error: () => 
 
 /** A name safe to show and store: no folders, no control characters, not endless. */
 function cleanFileName(name: string): string {
-  const base = path.basename(name.replace(/\\/g, '/')).replace(/[\u0000-\u001f\u007f]/g, '').trim()
+  const base = path
+    .basename(name.replace(/\\/g, '/'))
+    .replace(/\p{Cc}/gu, '')
+    .trim()
   return (base || 'upload.csv').slice(0, 200)
 }
 

@@ -11,7 +11,11 @@ export class PartWords1796197875848 implements MigrationInterface {
     )
     await queryRunner.query('CREATE INDEX "IDX_e13831c3aa6f47e0b21ef61600" ON "part_word" ("word") ')
     const numbered = queryRunner.connection.driver.options.type === 'postgres'
-    const parts = (await queryRunner.query('SELECT "id", "name", "family" FROM "part" ORDER BY "id"')) as { id: number; name: string; family: string }[]
+    const parts = (await queryRunner.query('SELECT "id", "name", "family" FROM "part" ORDER BY "id"')) as {
+      id: number
+      name: string
+      family: string
+    }[]
     const rows = parts.flatMap((part) => wordsOf(part.name, part.family).map((word) => [part.id, word] as const))
     for (let start = 0; start < rows.length; start += 400) {
       const batch = rows.slice(start, start + 400)

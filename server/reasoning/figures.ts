@@ -138,7 +138,13 @@ function injector(parts: SlotParts, context: BuildContext): FigureFacts['injecto
   const railPressureBar = num(parts['fuel-rail'], 'pressureBar') ?? ratedPressureBar
   let result: ReturnType<typeof injectorHeadroom>
   try {
-    result = injectorHeadroom({ targetPowerKw: context.targetPowerKw, injectors: cylinders(parts), flowCcMin, ratedPressureBar, railPressureBar })
+    result = injectorHeadroom({
+      targetPowerKw: context.targetPowerKw,
+      injectors: cylinders(parts),
+      flowCcMin,
+      ratedPressureBar,
+      railPressureBar,
+    })
   } catch {
     return undefined
   }

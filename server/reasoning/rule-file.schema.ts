@@ -8,18 +8,7 @@ import { skillLevelSchema } from '../../shared/schemas/fitment'
  * conditions limited to our own operators, which are false whenever a value
  * they compare is missing: a rule never fires on data it does not have.
  */
-export const OPERATORS = [
-  'is',
-  'isNot',
-  'below',
-  'atMost',
-  'above',
-  'atLeast',
-  'present',
-  'absent',
-  'twiceOf',
-  'notTwiceOf',
-] as const
+export const OPERATORS = ['is', 'isNot', 'below', 'atMost', 'above', 'atLeast', 'present', 'absent', 'twiceOf', 'notTwiceOf'] as const
 
 /** Facts a rule may read: each slot's attributes (by kind), the build's figures, its input and its filled slots. */
 export const FACT_NAMES = [...SLOT_IDS, 'figures', 'input', 'slots'] as const
@@ -30,10 +19,7 @@ const factRef = z.object({ fact: factName, path }).strict()
 const scalar = z.union([z.string(), z.number(), z.boolean()])
 
 export type Condition =
-  | { all: Condition[] }
-  | { any: Condition[] }
-  | { not: Condition }
-  | { fact: string; path?: string; operator: string; value: unknown }
+  { all: Condition[] } | { any: Condition[] } | { not: Condition } | { fact: string; path?: string; operator: string; value: unknown }
 
 const leafSchema = z
   .object({
@@ -73,9 +59,7 @@ const topCondition = conditionSchema.refine(
 )
 
 const template = z.string().min(1)
-const findPartSchema = z
-  .object({ kind: z.string(), attributes: z.record(z.string(), template).optional() })
-  .strict()
+const findPartSchema = z.object({ kind: z.string(), attributes: z.record(z.string(), template).optional() }).strict()
 export const ruleExtraPartSchema = z
   .object({
     description: template,
@@ -93,9 +77,7 @@ const eventSchema = z.discriminatedUnion('type', [
   }),
   z.object({
     type: z.literal('modification'),
-    params: z
-      .object({ modification: z.string(), reason: template, extraParts: z.array(ruleExtraPartSchema).optional() })
-      .strict(),
+    params: z.object({ modification: z.string(), reason: template, extraParts: z.array(ruleExtraPartSchema).optional() }).strict(),
   }),
   z.object({
     type: z.literal('extra-part'),
@@ -103,9 +85,7 @@ const eventSchema = z.discriminatedUnion('type', [
   }),
   z.object({
     type: z.literal('caution'),
-    params: z
-      .object({ severity: z.enum(['info', 'warning', 'danger']), text: template, reference: z.string().optional() })
-      .strict(),
+    params: z.object({ severity: z.enum(['info', 'warning', 'danger']), text: template, reference: z.string().optional() }).strict(),
   }),
 ])
 export type RuleEvent = z.infer<typeof eventSchema>
@@ -137,18 +117,28 @@ export const ruleFileSchema = z
   .superRefine((file, ctx) => {
     const names = new Set<string>()
     file.rules.forEach((rule, index) => {
-      if (names.has(rule.name)) ctx.addIssue({ code: 'custom', path: ['rules', index, 'name'], message: `duplicate rule name "${rule.name}"` })
+      if (names.has(rule.name))
+        ctx.addIssue({ code: 'custom', path: ['rules', index, 'name'], message: `duplicate rule name "${rule.name}"` })
       names.add(rule.name)
       const pair = rule.pair ?? file.pair
       if (file.scope === 'pair') {
         if (!pair) ctx.addIssue({ code: 'custom', path: ['rules', index, 'pair'], message: 'a pair rule needs a pair of slots' })
         else if (!mates(pair[0], pair[1])) {
-          ctx.addIssue({ code: 'custom', path: ['rules', index, 'pair'], message: `${pair[0]} and ${pair[1]} are not a mating pair of the build template` })
+          ctx.addIssue({
+            code: 'custom',
+            path: ['rules', index, 'pair'],
+            message: `${pair[0]} and ${pair[1]} are not a mating pair of the build template`,
+          })
         }
       } else {
-        if (pair) ctx.addIssue({ code: 'custom', path: ['rules', index, 'pair'], message: 'a build rule judges the whole build, not a pair' })
+        if (pair)
+          ctx.addIssue({ code: 'custom', path: ['rules', index, 'pair'], message: 'a build rule judges the whole build, not a pair' })
         if (rule.event.type === 'relation' || rule.event.type === 'modification') {
-          ctx.addIssue({ code: 'custom', path: ['rules', index, 'event', 'type'], message: 'a build rule may only add cautions and extra parts' })
+          ctx.addIssue({
+            code: 'custom',
+            path: ['rules', index, 'event', 'type'],
+            message: 'a build rule may only add cautions and extra parts',
+          })
         }
       }
     })

@@ -1,6 +1,9 @@
 /** Reads `$.a.b` (or `a.b`) from an object; undefined when any step is missing. */
 export function resolvePath(value: unknown, path: string): unknown {
-  const steps = path.replace(/^\$\.?/, '').split('.').filter(Boolean)
+  const steps = path
+    .replace(/^\$\.?/, '')
+    .split('.')
+    .filter(Boolean)
   let current: unknown = value
   for (const step of steps) {
     if (current === null || typeof current !== 'object') return undefined

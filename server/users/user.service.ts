@@ -37,9 +37,7 @@ export class UserService {
 
   async create(input: { email: string; name: string; role: Role; password: string }): Promise<User> {
     if (await this.users.existsBy({ email: input.email.trim().toLowerCase() })) {
-      throw AppError.conflict(`A user with e-mail ${input.email} exists already.`, [
-        { path: 'email', message: 'This e-mail is taken.' },
-      ])
+      throw AppError.conflict(`A user with e-mail ${input.email} exists already.`, [{ path: 'email', message: 'This e-mail is taken.' }])
     }
     const entity = this.users.create({
       email: input.email.trim().toLowerCase(),
@@ -65,12 +63,9 @@ export class UserService {
         if (admins <= 1) throw AppError.conflict('Fitwright needs at least one administrator; make another one first.')
         if (id === actingUserId) throw AppError.conflict('You cannot take the administrator role from yourself.')
       }
-      db.prepare('UPDATE user SET name = COALESCE(?, name), role = COALESCE(?, role), passwordHash = COALESCE(?, passwordHash) WHERE id = ?').run(
-        change.name ?? null,
-        change.role ?? null,
-        passwordHash,
-        id,
-      )
+      db.prepare(
+        'UPDATE user SET name = COALESCE(?, name), role = COALESCE(?, role), passwordHash = COALESCE(?, passwordHash) WHERE id = ?',
+      ).run(change.name ?? null, change.role ?? null, passwordHash, id)
     })
     return (await this.findById(id))!
   }

@@ -8,7 +8,7 @@ const MM3_PER_CC = 1000
 
 /** π/4·d²·h in cc. Left unchecked on purpose: a negative height (piston proud of the deck) must give a negative volume. */
 export function cylinderVolumeCc(diameterMm: number, heightMm: number): number {
-  return (Math.PI / 4) * diameterMm * diameterMm * heightMm / MM3_PER_CC
+  return ((Math.PI / 4) * diameterMm * diameterMm * heightMm) / MM3_PER_CC
 }
 
 /** Volume one piston sweeps from bottom to top dead centre. */

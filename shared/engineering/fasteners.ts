@@ -23,7 +23,11 @@ export function minThreadEngagementMm(diameterMm: number, material: ThreadMateri
   return diameterMm * MIN_ENGAGEMENT_FACTOR[material]
 }
 
-export function tighteningTorqueNm({ nutFactor, diameterMm, preloadN }: {
+export function tighteningTorqueNm({
+  nutFactor,
+  diameterMm,
+  preloadN,
+}: {
   nutFactor: number
   diameterMm: number
   preloadN: number
@@ -34,7 +38,11 @@ export function tighteningTorqueNm({ nutFactor, diameterMm, preloadN }: {
   return (nutFactor * diameterMm * preloadN) / MM_PER_M
 }
 
-export function preloadForTorqueN({ torqueNm, nutFactor, diameterMm }: {
+export function preloadForTorqueN({
+  torqueNm,
+  nutFactor,
+  diameterMm,
+}: {
   torqueNm: number
   nutFactor: number
   diameterMm: number
@@ -121,14 +129,9 @@ export function checkHeadBolt(input: HeadBoltInput): HeadBoltCheck {
  * with modification for ordinary bolts only: extra grip voids a torque-angle specification, and
  * a bolt of the right length is the better fix.
  */
-export function spacerFix(
-  input: HeadBoltInput,
-  spacerOptionsMm: number[],
-): { spacerMm: number; check: HeadBoltCheck } | null {
+export function spacerFix(input: HeadBoltInput, spacerOptionsMm: number[]): { spacerMm: number; check: HeadBoltCheck } | null {
   if (checkHeadBolt(input).status !== 'bottoms') return null
-  const candidates = spacerOptionsMm
-    .map((mm) => requirePositive(mm, 'spacer thickness'))
-    .sort((a, b) => a - b)
+  const candidates = spacerOptionsMm.map((mm) => requirePositive(mm, 'spacer thickness')).sort((a, b) => a - b)
   for (const spacerMm of candidates) {
     const check = checkHeadBolt({ ...input, washerThicknessMm: input.washerThicknessMm + spacerMm })
     if (check.status === 'ok') return { spacerMm, check }

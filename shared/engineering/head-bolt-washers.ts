@@ -89,17 +89,33 @@ function answerFor(input: WasherStackInput, boss: BossPosition, stacks: number[]
   const lengthRangeMm = check.lengthRangeMm
   const base = { position: boss.position, bossHeightMm: boss.bossHeightMm, washersMm: [], stackMm: 0, check, lengthRangeMm }
   if (lengthRangeMm.min > lengthRangeMm.max) {
-    return { ...base, fix: 'no-length', reason: `The tapped hole is too shallow to engage the ${mm(check.minEngagementMm)} of thread this bolt needs: no bolt length fits` }
+    return {
+      ...base,
+      fix: 'no-length',
+      reason: `The tapped hole is too shallow to engage the ${mm(check.minEngagementMm)} of thread this bolt needs: no bolt length fits`,
+    }
   }
   if (check.status === 'ok') {
-    return { ...base, fix: 'none', reason: `Fits as it stands: ${mm(check.projectionMm)} of bolt in the hole, ${range({ min: check.minEngagementMm, max: check.maxProjectionMm })} allowed` }
+    return {
+      ...base,
+      fix: 'none',
+      reason: `Fits as it stands: ${mm(check.projectionMm)} of bolt in the hole, ${range({ min: check.minEngagementMm, max: check.maxProjectionMm })} allowed`,
+    }
   }
   const useLength = `use a bolt of ${range(lengthRangeMm)} at this position`
   if (check.status === 'too-short') {
-    return { ...base, fix: 'bolt-length', reason: `Only ${mm(check.projectionMm)} of the ${mm(check.minEngagementMm)} thread engagement needed; washers cannot lengthen a bolt: ${useLength}` }
+    return {
+      ...base,
+      fix: 'bolt-length',
+      reason: `Only ${mm(check.projectionMm)} of the ${mm(check.minEngagementMm)} thread engagement needed; washers cannot lengthen a bolt: ${useLength}`,
+    }
   }
   if (input.torqueToYield) {
-    return { ...base, fix: 'bolt-length', reason: `Bottoms by ${mm(check.extraGripNeededMm)}; torque-to-yield bolts never get washers (extra grip voids the torque-angle specification): ${useLength}` }
+    return {
+      ...base,
+      fix: 'bolt-length',
+      reason: `Bottoms by ${mm(check.extraGripNeededMm)}; torque-to-yield bolts never get washers (extra grip voids the torque-angle specification): ${useLength}`,
+    }
   }
   for (const stack of stacks) {
     const stackMm = stack.reduce((sum, t) => sum + t, 0)
@@ -116,7 +132,11 @@ function answerFor(input: WasherStackInput, boss: BossPosition, stacks: number[]
       }
     }
   }
-  return { ...base, fix: 'bolt-length', reason: `Bottoms by ${mm(check.extraGripNeededMm)} and no stack of stocked washers fixes it: ${useLength}` }
+  return {
+    ...base,
+    fix: 'bolt-length',
+    reason: `Bottoms by ${mm(check.extraGripNeededMm)} and no stack of stocked washers fixes it: ${useLength}`,
+  }
 }
 
 /** Per bolt position: nothing to do, the washer stack from stocked thicknesses, or the bolt length that works. */

@@ -2,7 +2,10 @@ import { z } from 'zod'
 import { linkSourceSchema, relationSchema, reviewStatusSchema } from './fitment'
 
 const partNumber = z.string().trim().min(1, 'Give a part number.').max(100)
-const modificationName = z.string().trim().regex(/^[a-z0-9-]+$/, 'Modification names are kebab-case, like hardened-washer-stack.')
+const modificationName = z
+  .string()
+  .trim()
+  .regex(/^[a-z0-9-]+$/, 'Modification names are kebab-case, like hardened-washer-stack.')
 
 export const linkSchema = z.object({
   id: z.number().int(),
@@ -61,5 +64,11 @@ export type LinkUpdate = z.infer<typeof linkUpdateSchema>
 
 export const identityCreateSchema = z.object({ partA: partNumber, partB: partNumber, note: z.string().max(2000).default('') })
 export type IdentityCreate = z.infer<typeof identityCreateSchema>
-export const identitySchema = z.object({ id: z.number().int(), partA: z.string(), partB: z.string(), note: z.string(), source: linkSourceSchema })
+export const identitySchema = z.object({
+  id: z.number().int(),
+  partA: z.string(),
+  partB: z.string(),
+  note: z.string(),
+  source: linkSourceSchema,
+})
 export type Identity = z.infer<typeof identitySchema>

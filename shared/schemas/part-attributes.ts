@@ -12,9 +12,7 @@ const code = z.string().trim().min(1).max(40)
 const unknownAttribute = z.union([z.string(), z.number(), z.boolean()])
 
 /** ISO metric thread notation, e.g. M11x1.5 (diameter x pitch, mm). */
-export const metricThreadSchema = z
-  .string()
-  .regex(/^M\d+(\.\d+)?x\d+(\.\d+)?$/, 'Thread must read like M11x1.5 (diameter x pitch in mm).')
+export const metricThreadSchema = z.string().regex(/^M\d+(\.\d+)?x\d+(\.\d+)?$/, 'Thread must read like M11x1.5 (diameter x pitch in mm).')
 
 export const TOOTH_PROFILES = ['trapezoidal', 'curvilinear', 'modified-curvilinear'] as const
 const toothProfile = z.enum(TOOTH_PROFILES)

@@ -11,8 +11,7 @@ import {
 import { request, requestVoid } from './http'
 
 export const buildsApi = {
-  evaluate: (body: EvaluateRequest, signal?: AbortSignal) =>
-    request('POST', '/builds/evaluate', evaluationSchema, { body, signal }),
+  evaluate: (body: EvaluateRequest, signal?: AbortSignal) => request('POST', '/builds/evaluate', evaluationSchema, { body, signal }),
   /** Candidates for the empty slots (only those in `only`, when given). */
   complete: (body: EvaluateRequest & { limit?: number; only?: string[] }, signal?: AbortSignal) =>
     request('POST', '/builds/complete', completionSchema, { body, signal }),

@@ -65,10 +65,14 @@ function upload({ file, type, mode, validRowsOnly, onProgress }: UploadRequest):
       const answer = last as ImportStreamLine | null
       if (answer?.type === 'result') {
         const result = importResultSchema.safeParse(answer.body)
-        return result.success ? resolve(result.data) : reject(new ApiError(0, 'bad_answer', 'The server sent an answer this page does not understand.'))
+        return result.success
+          ? resolve(result.data)
+          : reject(new ApiError(0, 'bad_answer', 'The server sent an answer this page does not understand.'))
       }
       if (answer?.type === 'error') return reject(apiErrorFrom(answer.status, answer.body))
-      reject(new ApiError(0, 'incomplete', 'The server stopped answering before the import finished. Check the batch list before trying again.'))
+      reject(
+        new ApiError(0, 'incomplete', 'The server stopped answering before the import finished. Check the batch list before trying again.'),
+      )
     }
     const form = new FormData()
     form.append('type', type)

@@ -1,9 +1,4 @@
-import {
-  userListSchema,
-  userSchema,
-  type UserCreateInput,
-  type UserUpdateInput,
-} from '@shared/schemas/auth'
+import { userListSchema, userSchema, type UserCreateInput, type UserUpdateInput } from '@shared/schemas/auth'
 import { request } from './http'
 
 export const usersApi = {

@@ -37,7 +37,9 @@ export function useFitGraph() {
   const neighbourhood = computed(() => (remote.data.value && 'centre' in remote.data.value ? remote.data.value : null))
   const path = computed(() => (remote.data.value && 'found' in remote.data.value ? remote.data.value : null))
   /** The parts drawn as the centre: the centre part, or both ends of a path. */
-  const highlight = computed(() => (path.value ? [path.value.nodes[0]?.id, path.value.nodes.at(-1)?.id].filter((id): id is string => !!id) : []))
+  const highlight = computed(() =>
+    path.value ? [path.value.nodes[0]?.id, path.value.nodes.at(-1)?.id].filter((id): id is string => !!id) : [],
+  )
 
   const depthQuery = (value: 1 | 2) => (value === 2 ? { depth: '2' } : {})
   const recentre = (centre: string) => router.push({ name: 'graph', params: { partNumber: centre }, query: depthQuery(depth.value) })

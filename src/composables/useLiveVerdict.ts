@@ -24,5 +24,9 @@ export function useLiveVerdict() {
     await build.setSlots(current, 'replace')
   }, DEBOUNCE_MS)
 
-  watch(() => buildKey(build.state.value), () => void evaluate(), { immediate: true })
+  watch(
+    () => buildKey(build.state.value),
+    () => void evaluate(),
+    { immediate: true },
+  )
 }

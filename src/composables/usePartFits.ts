@@ -69,5 +69,18 @@ export function usePartFits(partNumber: Ref<string>) {
     void load()
     loadPage()
   }
-  return { ...remote, reload, filters, setFilters, showPage, visible, groups, counts, kinds, pageSize, pageLoading: paged.isLoading, pageError: paged.error }
+  return {
+    ...remote,
+    reload,
+    filters,
+    setFilters,
+    showPage,
+    visible,
+    groups,
+    counts,
+    kinds,
+    pageSize,
+    pageLoading: paged.isLoading,
+    pageError: paged.error,
+  }
 }

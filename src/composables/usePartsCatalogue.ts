@@ -43,9 +43,7 @@ export function usePartsCatalogue() {
   }
 
   function load() {
-    return remote.run((signal) =>
-      partsApi.list({ q: q.value, kind: kind.value, page: page.value, pageSize: pageSize.value }, signal),
-    )
+    return remote.run((signal) => partsApi.list({ q: q.value, kind: kind.value, page: page.value, pageSize: pageSize.value }, signal))
   }
 
   watch([q, kind, page, pageSize], load, { immediate: true })

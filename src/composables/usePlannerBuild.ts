@@ -2,7 +2,15 @@ import { computed } from 'vue'
 import { useRoute, useRouter } from 'vue-router'
 import type { SlotId } from '@shared/build-template'
 import type { BuildContext } from '@shared/schemas/build'
-import { filledSlotCount, plannerFromQuery, plannerToQuery, sameBuild, withContext, withSlots, type PlannerState } from '@/lib/planner-query'
+import {
+  filledSlotCount,
+  plannerFromQuery,
+  plannerToQuery,
+  sameBuild,
+  withContext,
+  withSlots,
+  type PlannerState,
+} from '@/lib/planner-query'
 import { sheetState, usePlannerStore } from '@/stores/planner'
 
 const PLANNER_ROUTES = new Set(['planner', 'planner-sheet'])
@@ -22,7 +30,9 @@ export function usePlannerBuild() {
   )
   const query = computed(() => plannerToQuery(state.value))
   const filledCount = computed(() => filledSlotCount(state.value.slots))
-  const isDirty = computed(() => (planner.sheet ? !sameBuild(plannerToQuery(sheetState(planner.sheet)), query.value) : filledCount.value > 0))
+  const isDirty = computed(() =>
+    planner.sheet ? !sameBuild(plannerToQuery(sheetState(planner.sheet)), query.value) : filledCount.value > 0,
+  )
 
   /** `replace` is for what the user did not do (a mark turned into its current number). */
   async function go(next: PlannerState, how: 'push' | 'replace' = 'push') {
@@ -40,7 +50,8 @@ export function usePlannerBuild() {
     isDirty,
     go,
     setSlot: (slot: SlotId, partNumber: string | null) => go(withSlots(state.value, { [slot]: partNumber })),
-    setSlots: (changes: Partial<Record<SlotId, string | null>>, how: 'push' | 'replace' = 'push') => go(withSlots(state.value, changes), how),
+    setSlots: (changes: Partial<Record<SlotId, string | null>>, how: 'push' | 'replace' = 'push') =>
+      go(withSlots(state.value, changes), how),
     setContext: (change: Partial<BuildContext>) => go(withContext(state.value, change)),
   }
 }

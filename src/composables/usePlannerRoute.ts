@@ -55,7 +55,11 @@ export function usePlannerRoute() {
     planner.lastAddress = { sheetId: planner.sheet?.id ?? null, query: plannerToQuery(plannerFromQuery(route.query)) }
   }
 
-  watch(() => [route.name, route.params.id, route.query], (_now, before) => fromRoute(before), { immediate: true })
+  watch(
+    () => [route.name, route.params.id, route.query],
+    (_now, before) => fromRoute(before),
+    { immediate: true },
+  )
 
   return { sheetError, isOpeningSheet }
 }

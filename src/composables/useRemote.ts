@@ -30,8 +30,7 @@ export function useRemote<T>(initial: T | null = null): Remote<T> {
       return result
     } catch (cause) {
       if (current.signal.aborted) return null
-      error.value =
-        cause instanceof ApiError ? cause : new ApiError(0, 'client', 'Something went wrong while loading. Try again.')
+      error.value = cause instanceof ApiError ? cause : new ApiError(0, 'client', 'Something went wrong while loading. Try again.')
       return null
     } finally {
       if (controller === current) isLoading.value = false

@@ -19,7 +19,10 @@ export function fieldMessages(errors: readonly FieldError[]): Record<string, str
  * Messages for the fields a form shows, and whether some message has no field
  * to sit beside (the form then says it elsewhere, so nothing goes unsaid).
  */
-export function placeFieldMessages(errors: readonly FieldError[], fields: readonly string[]): { messages: Record<string, string>; unplaced: boolean } {
+export function placeFieldMessages(
+  errors: readonly FieldError[],
+  fields: readonly string[],
+): { messages: Record<string, string>; unplaced: boolean } {
   const placed = errors.filter((error) => fields.includes(error.path))
   return { messages: fieldMessages(placed), unplaced: placed.length < errors.length }
 }

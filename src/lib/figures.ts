@@ -56,12 +56,13 @@ export function figureRows(figures: BuildFigures): FigureRow[] {
           label: 'Head bolt projection into the block',
           value: format(f.headBoltProjectionMm, 1),
           unit: 'mm',
-          note: [
-            f.threadEngagementMinMm !== null ? `at least ${format(f.threadEngagementMinMm, 1)} mm` : '',
-            f.headBoltMaxProjectionMm !== null ? `at most ${format(f.headBoltMaxProjectionMm, 1)} mm` : '',
-          ]
-            .filter(Boolean)
-            .join(', ') || undefined,
+          note:
+            [
+              f.threadEngagementMinMm !== null ? `at least ${format(f.threadEngagementMinMm, 1)} mm` : '',
+              f.headBoltMaxProjectionMm !== null ? `at most ${format(f.headBoltMaxProjectionMm, 1)} mm` : '',
+            ]
+              .filter(Boolean)
+              .join(', ') || undefined,
         }
       : null,
   )
@@ -76,7 +77,11 @@ export function figureRows(figures: BuildFigures): FigureRow[] {
       : null,
   )
   add(f.washerStackMm !== null ? { key: 'washers', label: 'Hardened washer stack', value: format(f.washerStackMm, 1), unit: 'mm' } : null)
-  add(f.camCrankCentreMm !== null ? { key: 'centres', label: 'Cam to crank centres', value: format(f.camCrankCentreMm, 1), unit: 'mm' } : null)
+  add(
+    f.camCrankCentreMm !== null
+      ? { key: 'centres', label: 'Cam to crank centres', value: format(f.camCrankCentreMm, 1), unit: 'mm' }
+      : null,
+  )
   add(
     f.beltTeethNeeded !== null
       ? {

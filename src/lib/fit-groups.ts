@@ -40,7 +40,10 @@ export function groupFits(groups: readonly FitGroupPage[]): FitGroup[] {
 /** How many answers each relation has under the other filters, for the filter's counts. */
 export function relationCounts(groups: readonly FitGroupPage[], filters: Omit<FitFilters, 'page'>): Record<Relation, number> {
   const base = filterGroups(groups, { ...filters, relation: undefined })
-  return Object.fromEntries(RELATIONS.map((relation) => [relation, sum(base.filter((g) => g.relation === relation))])) as Record<Relation, number>
+  return Object.fromEntries(RELATIONS.map((relation) => [relation, sum(base.filter((g) => g.relation === relation))])) as Record<
+    Relation,
+    number
+  >
 }
 
 /** Kinds present in the answer, for the kind filter's options. */

@@ -82,7 +82,11 @@ export function isLargeGraph(answer: GraphAnswer): boolean {
  * Positions for a path: one column per step from the start, identical numbers
  * stacked in the same column, so the chain reads left to right without a layout run.
  */
-export function pathPositions(nodes: readonly { id: string; distance: number }[], gapX = 230, gapY = 90): Record<string, { x: number; y: number }> {
+export function pathPositions(
+  nodes: readonly { id: string; distance: number }[],
+  gapX = 230,
+  gapY = 90,
+): Record<string, { x: number; y: number }> {
   const columns = new Map<number, string[]>()
   for (const node of nodes) columns.set(node.distance, [...(columns.get(node.distance) ?? []), node.id])
   const positions: Record<string, { x: number; y: number }> = {}

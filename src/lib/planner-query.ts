@@ -79,7 +79,8 @@ export function withSlots(state: PlannerState, changes: Partial<Record<SlotId, s
 /** The build with context fields changed; a field set to undefined or '' is dropped. */
 export function withContext(state: PlannerState, change: Partial<BuildContext>): PlannerState {
   const context: BuildContext = { ...state.context, ...change }
-  for (const key of Object.keys(context) as (keyof BuildContext)[]) if (context[key] === undefined || context[key] === '') delete context[key]
+  for (const key of Object.keys(context) as (keyof BuildContext)[])
+    if (context[key] === undefined || context[key] === '') delete context[key]
   return { slots: state.slots, context }
 }
 

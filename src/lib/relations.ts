@@ -31,9 +31,33 @@ export const FIT_LOOKS: Record<FitLook, FitLookStyle> = {
     marker: 'diamond',
     colourVar: '--fw-modified',
   },
-  'does-not-fit': { label: 'Does not fit', short: 'no fit', icon: 'pi-ban', glyph: '✕', line: 'dotted', marker: 'tee', colourVar: '--fw-no-fit' },
-  unknown: { label: 'No evidence either way', short: 'unknown', icon: 'pi-question-circle', glyph: '?', line: 'dotted', marker: 'square', colourVar: '--fw-unknown' },
-  identical: { label: 'Same part, another number', short: 'same part', icon: 'pi-equals', glyph: '≡', line: 'double', marker: 'none', colourVar: '--fw-unknown' },
+  'does-not-fit': {
+    label: 'Does not fit',
+    short: 'no fit',
+    icon: 'pi-ban',
+    glyph: '✕',
+    line: 'dotted',
+    marker: 'tee',
+    colourVar: '--fw-no-fit',
+  },
+  unknown: {
+    label: 'No evidence either way',
+    short: 'unknown',
+    icon: 'pi-question-circle',
+    glyph: '?',
+    line: 'dotted',
+    marker: 'square',
+    colourVar: '--fw-unknown',
+  },
+  identical: {
+    label: 'Same part, another number',
+    short: 'same part',
+    icon: 'pi-equals',
+    glyph: '≡',
+    line: 'double',
+    marker: 'none',
+    colourVar: '--fw-unknown',
+  },
 }
 
 export const REVIEW_LABELS = {

@@ -38,7 +38,13 @@ export function slotOptionGroups(slot: SlotId, query: string, candidates: readon
   const taken = new Set(candidates.map((candidate) => candidate.part.partNumber))
   const others = found
     .filter((part) => !taken.has(part.partNumber))
-    .map((part): SlotOption => ({ part, suggested: false, modifications: [], reasons: [], note: candidates.length ? 'not suggested' : undefined }))
+    .map((part): SlotOption => ({
+      part,
+      suggested: false,
+      modifications: [],
+      reasons: [],
+      note: candidates.length ? 'not suggested' : undefined,
+    }))
   const kind = PART_KIND_LABELS[slot].toLowerCase()
   return [
     { label: 'Fit the parts already chosen', items: suggested },

@@ -15,7 +15,10 @@ export function slotStatuses(pairs: readonly PairJudgement[]): Record<string, Sl
   for (const [slot, own] of bySlot) {
     const verdict = worstVerdict(own.map((pair) => pair.relation))
     const setting = own.filter((pair) => pair.relation === verdict).map((pair) => pair.label)
-    statuses[slot] = { verdict, text: verdict === 'fits' ? `Fits its ${own.length} mating part${own.length === 1 ? '' : 's'}` : setting.join('; ') }
+    statuses[slot] = {
+      verdict,
+      text: verdict === 'fits' ? `Fits its ${own.length} mating part${own.length === 1 ? '' : 's'}` : setting.join('; '),
+    }
   }
   return statuses
 }

@@ -27,7 +27,10 @@ export function verdictHeadline(verdict: Verdict, partial: boolean): string {
 export function verdictDetail(evaluation: Pick<Evaluation, 'verdict' | 'pairs' | 'modifications'>): string {
   const { verdict, pairs, modifications } = evaluation
   if (verdict === 'does-not-fit') {
-    return `Does not fit: ${pairs.filter((pair) => pair.relation === 'does-not-fit').map((pair) => pair.label).join('; ')}.`
+    return `Does not fit: ${pairs
+      .filter((pair) => pair.relation === 'does-not-fit')
+      .map((pair) => pair.label)
+      .join('; ')}.`
   }
   if (verdict === 'fits-with-modification') return `${plural(modifications.length, 'modification')} needed: see the checklist.`
   if (verdict === 'unknown') {
@@ -51,6 +54,8 @@ export function fillGapsSummary({ filled, unfilled }: Pick<FillResult, 'filled' 
   return {
     severity: filled.length ? 'success' : 'info',
     summary: filled.length ? `Filled ${plural(filled.length, 'slot')}` : 'No empty slot could be filled',
-    detail: unfilled.length ? `Still empty: ${unfilled.map((gap) => `${slotLabel(gap.slot)} (${gap.note})`).join('; ')}` : 'Every slot now has a part.',
+    detail: unfilled.length
+      ? `Still empty: ${unfilled.map((gap) => `${slotLabel(gap.slot)} (${gap.note})`).join('; ')}`
+      : 'Every slot now has a part.',
   }
 }

@@ -70,7 +70,12 @@ export const FitwrightPreset = definePreset(Aura, {
         },
       },
       dark: {
-        primary: { color: '{verdigris.300}', contrastColor: '{verdigris.950}', hoverColor: '{verdigris.200}', activeColor: '{verdigris.100}' },
+        primary: {
+          color: '{verdigris.300}',
+          contrastColor: '{verdigris.950}',
+          hoverColor: '{verdigris.200}',
+          activeColor: '{verdigris.100}',
+        },
         surface: {
           0: '#ffffff',
           50: '{castiron.50}',

@@ -43,7 +43,13 @@ function startUpload(progress: UploadProgress[]) {
   return { promise, xhr: FakeXhr.last! }
 }
 
-const result = { batchId: 7, counts: { created: 1, updated: 0, unchanged: 0, rejected: 0 }, errors: [], changes: [], omitted: { errors: 0, changes: 0 } }
+const result = {
+  batchId: 7,
+  counts: { created: 1, updated: 0, unchanged: 0, rejected: 0 },
+  errors: [],
+  changes: [],
+  omitted: { errors: 0, changes: 0 },
+}
 
 describe('importsApi.upload', () => {
   it('sends the form fields and file, reports upload and server progress, and resolves with the result line', async () => {

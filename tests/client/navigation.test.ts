@@ -17,7 +17,7 @@ describe('navigationFor', () => {
     expect(navigationFor(undefined)).toEqual([])
   })
 
-  it('marks the graph link current on a part\'s graph and on a path, and the planner link on a saved sheet', () => {
+  it("marks the graph link current on a part's graph and on a path, and the planner link on a saved sheet", () => {
     const link = (name: string) => NAVIGATION.find((entry) => entry.name === name)!
     expect(isCurrentArea(link('graph-home'), 'graph')).toBe(true)
     expect(isCurrentArea(link('graph-home'), 'graph-path')).toBe(true)

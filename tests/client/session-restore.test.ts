@@ -31,7 +31,10 @@ afterEach(() => vi.unstubAllGlobals())
 describe('session restore', () => {
   it('keeps a server fault as the connection error instead of throwing, and asks again on the next call', async () => {
     setActivePinia(createPinia())
-    const fetchMock = stubServer(() => answer(500, { error: { code: 'internal', message: 'Something went wrong on the server.' } }), () => answer(200, counter))
+    const fetchMock = stubServer(
+      () => answer(500, { error: { code: 'internal', message: 'Something went wrong on the server.' } }),
+      () => answer(200, counter),
+    )
     const session = useSessionStore()
 
     await expect(session.restore()).resolves.toBeUndefined()
@@ -84,7 +87,10 @@ describe('first load without a connection', () => {
 
   it('checks again on the next navigation after a failed check', async () => {
     setActivePinia(createPinia())
-    const fetchMock = stubServer(() => answer(502, null), () => answer(200, counter))
+    const fetchMock = stubServer(
+      () => answer(502, null),
+      () => answer(200, counter),
+    )
 
     await router.push('/lookup')
     expect(router.currentRoute.value.name).toBe('sign-in')

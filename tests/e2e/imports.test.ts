@@ -27,7 +27,9 @@ describe.skipIf(!run)('imports in the browser', () => {
   it('lets an editor preview a parts file and see counts, row errors and changes', async () => {
     await page.getByRole('navigation', { name: 'Main' }).getByRole('link', { name: 'Imports' }).click()
     await page.waitForURL(/\/imports/)
-    await page.getByLabel('CSV file', { exact: true }).setInputFiles({ name: 'heads.csv', mimeType: 'text/csv', buffer: Buffer.from(PARTS_CSV) })
+    await page
+      .getByLabel('CSV file', { exact: true })
+      .setInputFiles({ name: 'heads.csv', mimeType: 'text/csv', buffer: Buffer.from(PARTS_CSV) })
     await page.getByRole('button', { name: 'Preview' }).click()
     await expect.poll(() => page.getByText('Preview: nothing has been written yet.').isVisible()).toBe(true)
     const counts = page.getByRole('region', { name: 'Preview counts' })
@@ -52,7 +54,11 @@ describe.skipIf(!run)('imports in the browser', () => {
 
   it('reverts the batch after a confirmation', async () => {
     const batches = page.getByRole('table', { name: 'Import batches' })
-    await batches.locator('tbody tr').first().getByRole('button', { name: /Revert batch/ }).click()
+    await batches
+      .locator('tbody tr')
+      .first()
+      .getByRole('button', { name: /Revert batch/ })
+      .click()
     await page.getByRole('alertdialog').getByRole('button', { name: 'Revert' }).click()
     await expect.poll(() => batches.locator('tbody tr').first().textContent()).toContain('reverted by Tobias Ferrand')
   })

@@ -1,4 +1,4 @@
-import type { BrowserContext, Page } from 'playwright-core'
+import type { Page } from 'playwright-core'
 import { afterAll, beforeAll, describe, expect, it } from 'vitest'
 import { browserAvailable, saveScreenshot, signInAs, type RunningServer, openBrowserSession, type BrowserSession } from '../helpers/browser'
 import { nodePosition, waitForGraph } from '../helpers/graph-page'
@@ -11,12 +11,11 @@ describe.skipIf(!run)('counter: what fits a head, and the fit graph', () => {
   let session: BrowserSession
   let server: RunningServer
   let page: Page
-  let context: BrowserContext
   let consoleErrors: string[] = []
 
   beforeAll(async () => {
     session = await openBrowserSession({ viewport: { width: 1280, height: 860 } })
-    ;({ server, page, context, consoleErrors } = session)
+    ;({ server, page, consoleErrors } = session)
   })
   afterAll(() => session?.close())
 

@@ -1,7 +1,15 @@
 import { readFileSync } from 'node:fs'
 import type { BrowserContext, Page } from 'playwright-core'
 import { afterAll, beforeAll, describe, expect, it } from 'vitest'
-import { browserAvailable, saveScreenshot, SCREENSHOT_DIR, signInAs, type RunningServer, openBrowserSession, type BrowserSession } from '../helpers/browser'
+import {
+  browserAvailable,
+  saveScreenshot,
+  SCREENSHOT_DIR,
+  signInAs,
+  type RunningServer,
+  openBrowserSession,
+  type BrowserSession,
+} from '../helpers/browser'
 
 const run = browserAvailable()
 /** A fresh page loads the client, restores the session and asks the API: give it time. */
@@ -127,7 +135,10 @@ describe.skipIf(!run)('technician: plan a build, get the verdict and the parts l
   })
 
   it('exports the parts list as a CSV file', async () => {
-    const [download] = await Promise.all([page.waitForEvent('download'), page.getByRole('button', { name: 'Export parts list (CSV)' }).click()])
+    const [download] = await Promise.all([
+      page.waitForEvent('download'),
+      page.getByRole('button', { name: 'Export parts list (CSV)' }).click(),
+    ])
     expect(download.suggestedFilename()).toBe('build-parts-list.csv')
     const text = readFileSync((await download.path())!, 'utf8')
     expect(text.replace(/^\uFEFF/, '').split('\r\n')[0]).toBe('"Part number","Description","Quantity","Unit","Category","Reason"')
@@ -217,7 +228,16 @@ describe.skipIf(!run)('technician: plan a build, get the verdict and the parts l
     expect(overflow).toBeLessThanOrEqual(0)
     await saveScreenshot(page, 'build-sheets-768')
     await page.getByLabel('Search').fill('TK18 head')
-    await expect.poll(() => page.getByRole('status').filter({ hasText: / of \d+ sheets/ }).textContent(), within).toMatch(/^[1-9]\d* of \d+ sheets$/)
+    await expect
+      .poll(
+        () =>
+          page
+            .getByRole('status')
+            .filter({ hasText: / of \d+ sheets/ })
+            .textContent(),
+        within,
+      )
+      .toMatch(/^[1-9]\d* of \d+ sheets$/)
     expect(await page.getByRole('row').filter({ hasText: 'Bench swap for bay 3' }).count()).toBe(0)
     expect(await page.getByRole('row').filter({ hasText: 'TK18 head on a TK20V block' }).count()).toBeGreaterThan(0)
     await saveScreenshot(page, 'build-sheets-search-768')

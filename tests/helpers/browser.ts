@@ -20,7 +20,7 @@ export function chromiumPath(): string | null {
 export function browserAvailable(): boolean {
   if (chromiumPath()) return true
   if (process.env.FITWRIGHT_E2E === 'required') {
-    throw new Error('FITWRIGHT_E2E=required but no chromium was found (install Debian\'s chromium or set CHROMIUM_PATH).')
+    throw new Error("FITWRIGHT_E2E=required but no chromium was found (install Debian's chromium or set CHROMIUM_PATH).")
   }
   console.warn('\n*** Browser tests SKIPPED: no chromium at /usr/bin/chromium or CHROMIUM_PATH. ***\n')
   return false
@@ -29,8 +29,16 @@ export function browserAvailable(): boolean {
 export async function launchBrowser(): Promise<Browser> {
   return chromium.launch({
     executablePath: chromiumPath()!,
-    args: ['--headless', '--no-sandbox', '--disable-gpu', '--disable-quic', '--no-first-run',
-      '--disable-background-networking', '--disable-component-update', '--disable-sync'],
+    args: [
+      '--headless',
+      '--no-sandbox',
+      '--disable-gpu',
+      '--disable-quic',
+      '--no-first-run',
+      '--disable-background-networking',
+      '--disable-component-update',
+      '--disable-sync',
+    ],
   })
 }
 

@@ -27,8 +27,21 @@ export function makeCandidate(part: Part, relation: Candidate['relation'] = 'fit
   return { part, relation, modifications: [], score: 0, reasons: [] }
 }
 
-export function makePair(slots: [string, string], relation: PairJudgement['relation'], label = `${slots[0]} with ${slots[1]}`): PairJudgement {
-  return { slots, label, partNumbers: ['A-1', 'B-1'], relation, decidedBy: 'rule', ruleIds: [], modifications: [], explanation: [{ type: 'rule', text: `${label}: ${relation}` }] }
+export function makePair(
+  slots: [string, string],
+  relation: PairJudgement['relation'],
+  label = `${slots[0]} with ${slots[1]}`,
+): PairJudgement {
+  return {
+    slots,
+    label,
+    partNumbers: ['A-1', 'B-1'],
+    relation,
+    decidedBy: 'rule',
+    ruleIds: [],
+    modifications: [],
+    explanation: [{ type: 'rule', text: `${label}: ${relation}` }],
+  }
 }
 
 export function makeEvaluation(overrides: Partial<Evaluation> = {}): Evaluation {

@@ -29,19 +29,13 @@ describe('POST /api/auth/login', () => {
   })
 
   it('accepts the e-mail in any case and with spaces around it', async () => {
-    const response = await request(t.app)
-      .post('/api/auth/login')
-      .send({ email: '  Counter@Fitwright.TEST ', password: DEMO_PASSWORD })
+    const response = await request(t.app).post('/api/auth/login').send({ email: '  Counter@Fitwright.TEST ', password: DEMO_PASSWORD })
     expect(response.status).toBe(200)
   })
 
   it('answers 401 with the same message for a wrong password and an unknown e-mail', async () => {
-    const wrongPassword = await request(t.app)
-      .post('/api/auth/login')
-      .send({ email: 'counter@fitwright.test', password: 'not-it' })
-    const unknownUser = await request(t.app)
-      .post('/api/auth/login')
-      .send({ email: 'nobody@fitwright.test', password: DEMO_PASSWORD })
+    const wrongPassword = await request(t.app).post('/api/auth/login').send({ email: 'counter@fitwright.test', password: 'not-it' })
+    const unknownUser = await request(t.app).post('/api/auth/login').send({ email: 'nobody@fitwright.test', password: DEMO_PASSWORD })
     expect(wrongPassword.status).toBe(401)
     expect(unknownUser.status).toBe(401)
     expect(wrongPassword.body.error.message).toBe(unknownUser.body.error.message)
@@ -56,10 +50,7 @@ describe('POST /api/auth/login', () => {
   })
 
   it('answers 400 for malformed JSON, without a stack trace', async () => {
-    const response = await request(t.app)
-      .post('/api/auth/login')
-      .set('Content-Type', 'application/json')
-      .send('{"email": ')
+    const response = await request(t.app).post('/api/auth/login').set('Content-Type', 'application/json').send('{"email": ')
     expect(response.status).toBe(400)
     expect(response.body.error.code).toBe('malformed_json')
     expect(JSON.stringify(response.body)).not.toMatch(/at .*\.(js|ts):\d+/)

@@ -10,7 +10,11 @@ beforeAll(async () => {
 })
 afterAll(() => t.close())
 
-type Slot = { matesWith: string[]; candidates: { part: { partNumber: string; kind: string }; relation: string; modifications: string[]; score: number }[]; note?: string }
+type Slot = {
+  matesWith: string[]
+  candidates: { part: { partNumber: string; kind: string }; relation: string; modifications: string[]; score: number }[]
+  note?: string
+}
 
 describe('POST /api/builds/complete', () => {
   it('suggests, for each empty slot, parts that fit every filled slot it mates with', async () => {
@@ -39,7 +43,13 @@ describe('POST /api/builds/complete', () => {
 
   it('checks a candidate against all its filled mating slots at once', async () => {
     const response = await agent.post('/api/builds/complete').send({
-      slots: { 'cam-gear': 'TM-CG-2000', 'crank-pulley': 'TM-CP-2000', block: 'TM-BL-2000', head: 'TM-HD-2000', 'head-gasket': 'TM-HG-2000' },
+      slots: {
+        'cam-gear': 'TM-CG-2000',
+        'crank-pulley': 'TM-CP-2000',
+        block: 'TM-BL-2000',
+        head: 'TM-HD-2000',
+        'head-gasket': 'TM-HG-2000',
+      },
     })
     const belts = (response.body.slots as Record<string, Slot>)['timing-belt']!.candidates.map((c) => c.part.partNumber)
     expect(belts).toEqual(['TM-TB-2000']) // the conversion belt is too short here; the narrow one too narrow

@@ -11,7 +11,14 @@ beforeAll(async () => {
 })
 afterAll(() => t.close())
 
-type DemoBuild = { name: string; slots: Record<string, string>; targetPowerKw?: number; fuelOctane?: number; chassisModelYear?: number; vin?: string }
+type DemoBuild = {
+  name: string
+  slots: Record<string, string>
+  targetPowerKw?: number
+  fuelOctane?: number
+  chassisModelYear?: number
+  vin?: string
+}
 const demoBuilds = JSON.parse(readFileSync('data/demo/builds.json', 'utf8')) as DemoBuild[]
 const demo = (name: string) => demoBuilds.find((b) => b.name === name)!
 const evaluate = (build: Omit<DemoBuild, 'name'>) => agent.post('/api/builds/evaluate').send(build)
@@ -23,8 +30,17 @@ describe('POST /api/builds/evaluate on the demo builds', () => {
   it.each([
     ['TK20V as built at the factory', 'fits', []],
     ['TK20V head on a TK18 block', 'fits-with-modification', ['oil-restrictor-fit']],
-    ['TK18 head on a TK20V block, TK20V electronics', 'fits-with-modification',
-      ['distributor-internals-transfer', 'hardened-washer-stack', 'injector-resistor-pack', 'oil-restrictor-remove-duplicate', 'vvl-leads-insulate']],
+    [
+      'TK18 head on a TK20V block, TK20V electronics',
+      'fits-with-modification',
+      [
+        'distributor-internals-transfer',
+        'hardened-washer-stack',
+        'injector-resistor-pack',
+        'oil-restrictor-remove-duplicate',
+        'vvl-leads-insulate',
+      ],
+    ],
     ['TK20V engine on a TK18 control unit, 1997 car', 'fits-with-modification', ['vvl-lockout']],
     ['TK20V fixed-lift head with the OBD-II control unit', 'fits-with-modification', ['vvl-leads-insulate']],
     ['Domed pistons on regular fuel, too much power asked', 'does-not-fit', []],
@@ -113,7 +129,13 @@ describe('POST /api/builds/evaluate on the demo builds', () => {
 
   it('gives the whole bill: chosen parts with quantities, modification parts and consumables', async () => {
     const { name: _name, ...build } = demo('TK20V head on a TK18 block')
-    const lines = (await evaluate(build)).body.partsList as { partNumber?: string; quantity: number; category: string; description: string; reason: string }[]
+    const lines = (await evaluate(build)).body.partsList as {
+      partNumber?: string
+      quantity: number
+      category: string
+      description: string
+      reason: string
+    }[]
     expect(lines.filter((l) => l.category === 'chosen')).toHaveLength(Object.keys(build.slots).length)
     expect(lines.find((l) => l.partNumber === 'TM-IN-2000')!.quantity).toBe(4)
     expect(lines.find((l) => l.partNumber === 'TM-HB-2000')!.reason).toMatch(/single-use/)

@@ -10,7 +10,9 @@ import { readCsvStream } from '../../server/imports/csv/csv-stream'
  * file of the corpus through readCsvStream, the code path uploads take.
  */
 const corpus = path.dirname(createRequire(import.meta.url).resolve('csv-spectrum/package.json'))
-const cases = readdirSync(path.join(corpus, 'csvs')).map((file) => path.basename(file, '.csv')).sort()
+const cases = readdirSync(path.join(corpus, 'csvs'))
+  .map((file) => path.basename(file, '.csv'))
+  .sort()
 
 async function readAsObjects(file: string): Promise<Record<string, string>[]> {
   let header: string[] = []
@@ -39,7 +41,7 @@ describe('the CSV parsing layer on the csv-spectrum corpus', () => {
 
   // The corpus's expected JSON for this file is one object, not a list, and its
   // phone number differs from the CSV's; every other field is compared.
-  it('reads location_coordinates as the corpus expects, apart from the corpus\'s own phone-number slip', async () => {
+  it("reads location_coordinates as the corpus expects, apart from the corpus's own phone-number slip", async () => {
     const expected = JSON.parse(readFileSync(path.join(corpus, 'json', 'location_coordinates.json'), 'utf8')) as Record<string, string>
     const [row, ...rest] = await readAsObjects(path.join(corpus, 'csvs', 'location_coordinates.csv'))
     expect(rest).toEqual([])

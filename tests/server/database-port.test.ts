@@ -14,7 +14,7 @@ import { createPostgresDatabase, postgresServerUrl } from '../helpers/postgres'
 describe('numbering placeholders for PostgreSQL', () => {
   it.each([
     ['SELECT 1 WHERE a = ? AND b = ?', 'SELECT 1 WHERE a = $1 AND b = $2'],
-    ["SELECT '?' AS q, \"we?ird\" FROM t WHERE x = ?", "SELECT '?' AS q, \"we?ird\" FROM t WHERE x = $1"],
+    ['SELECT \'?\' AS q, "we?ird" FROM t WHERE x = ?', 'SELECT \'?\' AS q, "we?ird" FROM t WHERE x = $1'],
     ['INSERT INTO t (a) VALUES (?), (?), (?)', 'INSERT INTO t (a) VALUES ($1), ($2), ($3)'],
   ])('numbers %s', (sql, expected) => {
     expect(numberPlaceholders(sql)).toBe(expected)
@@ -115,10 +115,10 @@ describe.each(drivers)('the data port on $name', (driver) => {
     release()
     await expect(transaction).rejects.toThrow('rolled back on purpose')
     await outside
-    const numbers = await db.all<{ partNumber: string }>('SELECT "partNumber" FROM part WHERE "partNumber" IN (?, ?) ORDER BY "partNumber"', [
-      'PT-HD-0004',
-      'PT-HD-0005',
-    ])
+    const numbers = await db.all<{ partNumber: string }>(
+      'SELECT "partNumber" FROM part WHERE "partNumber" IN (?, ?) ORDER BY "partNumber"',
+      ['PT-HD-0004', 'PT-HD-0005'],
+    )
     expect(numbers.map((row) => row.partNumber)).toEqual(['PT-HD-0005'])
   })
 

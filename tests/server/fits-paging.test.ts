@@ -43,13 +43,17 @@ describe('GET /api/parts/:partNumber/fits on a hub part', () => {
     expect(noFit).toMatchObject({ kind: 'other', source: 'reviewed', total: 10 })
     expect(fits.results).toHaveLength(20)
     expect(noFit.results).toHaveLength(10)
-    const expectedFits = Array.from({ length: SPOKES }, (_, i) => i).filter((i) => i % 5 !== 0).map(spoke)
+    const expectedFits = Array.from({ length: SPOKES }, (_, i) => i)
+      .filter((i) => i % 5 !== 0)
+      .map(spoke)
     expect(numbersOf(fits)).toEqual(expectedFits.slice(0, 20))
     expect(response.body).toMatchObject({ page: 1, pageSize: 20 })
   })
 
   it('pages one group with kind, relation, page and page size, through to an empty page', async () => {
-    const expectedFits = Array.from({ length: SPOKES }, (_, i) => i).filter((i) => i % 5 !== 0).map(spoke)
+    const expectedFits = Array.from({ length: SPOKES }, (_, i) => i)
+      .filter((i) => i % 5 !== 0)
+      .map(spoke)
     const seen: string[] = []
     for (let page = 1; page <= 4; page++) {
       const response = await editor.get(`/api/parts/${HUB}/fits?inferred=0&kind=other&relation=fits&page=${page}&pageSize=10`)
@@ -69,7 +73,9 @@ describe('what fits and path follow edits without loading the graph again', () =
     const loads = t.services.graphIndex.loads
     const list = await editor.get(`/api/links?part=${spoke(1)}`)
     const link = list.body.items[0] as { id: number }
-    const changed = await editor.patch(`/api/links/${link.id}`).send({ relation: 'does-not-fit', note: 'Checked: the bolt circle differs.' })
+    const changed = await editor
+      .patch(`/api/links/${link.id}`)
+      .send({ relation: 'does-not-fit', note: 'Checked: the bolt circle differs.' })
     expect(changed.status).toBe(200)
     const after = groupsOf((await editor.get(`/api/parts/${HUB}/fits?inferred=0&relation=does-not-fit&pageSize=50`)).body)
     const moved = after[0]!.results.find((r) => r.part.partNumber === spoke(1))!

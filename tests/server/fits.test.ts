@@ -10,7 +10,15 @@ beforeAll(async () => {
 })
 afterAll(() => t.close())
 
-type Result = { part: { partNumber: string; kind: string }; relation: string; decidedBy: string; review: string; ruleIds: string[]; modifications: { name: string; steps: string[] }[]; explanation: { type: string; text: string }[] }
+type Result = {
+  part: { partNumber: string; kind: string }
+  relation: string
+  decidedBy: string
+  review: string
+  ruleIds: string[]
+  modifications: { name: string; steps: string[] }[]
+  explanation: { type: string; text: string }[]
+}
 type Group = { kind: string; relation: string; source: 'reviewed' | 'inferred'; total: number; offset: number; results: Result[] }
 const byNumber = (results: Result[], number: string) => results.find((r) => r.part.partNumber === number)
 const resultsOf = (body: { groups: Group[] }): Result[] => body.groups.flatMap((group) => group.results)
@@ -43,7 +51,9 @@ describe('GET /api/parts/:partNumber/fits', () => {
       const reviews = new Set(group.results.map((r) => r.review))
       if (group.source === 'inferred') expect([...reviews]).toEqual(['inferred'])
       else expect(reviews.has('inferred')).toBe(false)
-      const reviewedTwin = groups.findIndex((other) => other.kind === group.kind && other.relation === group.relation && other.source === 'reviewed')
+      const reviewedTwin = groups.findIndex(
+        (other) => other.kind === group.kind && other.relation === group.relation && other.source === 'reviewed',
+      )
       if (group.source === 'inferred' && reviewedTwin >= 0) expect(reviewedTwin).toBeLessThan(groups.indexOf(group))
     }
     const gear = byNumber(resultsOf(response.body), 'TM-CG-1800')!
@@ -59,7 +69,11 @@ describe('GET /api/parts/:partNumber/fits', () => {
     expect(relations['TM-TB-2000']).toBe('fits')
     expect(relations['TM-TB-2022']).toBe('does-not-fit') // 22 mm belt on a 25 mm gear
     expect(relations['TM-TB-1800']).toBe('does-not-fit') // trapezoidal 9.525 mm pitch
-    expect(byNumber(resultsOf(response.body), 'TM-TB-2090')).toMatchObject({ relation: 'fits', decidedBy: 'rule', ruleIds: ['timing-drive'] })
+    expect(byNumber(resultsOf(response.body), 'TM-TB-2090')).toMatchObject({
+      relation: 'fits',
+      decidedBy: 'rule',
+      ruleIds: ['timing-drive'],
+    })
   })
 
   it('infers a head gasket against a cylinder bore', async () => {

@@ -5,7 +5,8 @@ import { FitGraph, type FitDetails, type GraphIdentity, type GraphLink, type Gra
 import { neighbourhoodOf, reviewedFits, shortestFitPath } from '../../server/fitment/graph-search'
 
 // Written out here, not imported: only approved fits carry a path.
-const carriesPath = (link: GraphLink) => link.status === 'approved' && (link.relation === 'fits' || link.relation === 'fits-with-modification')
+const carriesPath = (link: GraphLink) =>
+  link.status === 'approved' && (link.relation === 'fits' || link.relation === 'fits-with-modification')
 
 /*
  * Reference: cytoscape.js headless (a general-purpose graph library) on the
@@ -16,8 +17,7 @@ const carriesPath = (link: GraphLink) => link.status === 'approved' && (link.rel
 
 type RandomGraph = { size: number; links: GraphLink[]; identities: GraphIdentity[] }
 
-const pairArb = (size: number) =>
-  fc.tuple(fc.integer({ min: 1, max: size }), fc.integer({ min: 1, max: size })).filter(([a, b]) => a !== b)
+const pairArb = (size: number) => fc.tuple(fc.integer({ min: 1, max: size }), fc.integer({ min: 1, max: size })).filter(([a, b]) => a !== b)
 
 const graphArb: fc.Arbitrary<RandomGraph> = fc.integer({ min: 2, max: 18 }).chain((size) =>
   fc
@@ -111,7 +111,10 @@ describe('reviewedFits against cytoscape connected components (identity classes)
       fc.property(graphArb, fc.integer({ min: 1, max: 18 }), (g, raw) => {
         const part = ((raw - 1) % g.size) + 1
         const graph = freshGraph(parts(g.size), g.links, g.identities)
-        const identityGraph = cy(g, g.identities.map((i) => ({ id: `i${i.id}`, source: i.a, target: i.b, weight: 0 })))
+        const identityGraph = cy(
+          g,
+          g.identities.map((i) => ({ id: `i${i.id}`, source: i.a, target: i.b, weight: 0 })),
+        )
         const componentOf = new Map<number, Set<number>>()
         for (const component of identityGraph.elements().components()) {
           const ids = new Set(component.nodes().map((n) => Number(n.id())))
@@ -121,7 +124,10 @@ describe('reviewedFits against cytoscape connected components (identity classes)
         const expected = new Set<number>()
         for (const link of g.links) {
           if (link.status === 'rejected') continue
-          for (const [x, y] of [[link.a, link.b], [link.b, link.a]] as const) {
+          for (const [x, y] of [
+            [link.a, link.b],
+            [link.b, link.a],
+          ] as const) {
             if (own.has(x) && !own.has(y)) for (const id of componentOf.get(y)!) expected.add(id)
           }
         }
@@ -242,13 +248,17 @@ describe('the graph after deltas against a fresh load of the same rows', () => {
         for (const { id } of rows.partList) {
           expect(edited.classOf(id)).toEqual(fresh.classOf(id))
           const fits = (graph: FitGraph) =>
-            [...reviewedFits(graph, id).values()].map((fit) => [fit.target, graph.linkAt(fit.slot).id, fit.cost]).sort((x, y) => x[0]! - y[0]!)
+            [...reviewedFits(graph, id).values()]
+              .map((fit) => [fit.target, graph.linkAt(fit.slot).id, fit.cost])
+              .sort((x, y) => x[0]! - y[0]!)
           expect(fits(edited)).toEqual(fits(fresh))
           const around = (graph: FitGraph) => [...neighbourhoodOf(graph, id, 2, 1000, 1000).distance].sort((x, y) => x[0] - y[0])
           expect(around(edited)).toEqual(around(fresh))
           for (const { id: other } of rows.partList) {
             expect(linkCount(shortestFitPath(edited, id, other))).toBe(linkCount(shortestFitPath(fresh, id, other)))
-            expect(edited.linkBetween(id, other, ['approved', 'proposed'])?.link.id).toBe(fresh.linkBetween(id, other, ['approved', 'proposed'])?.link.id)
+            expect(edited.linkBetween(id, other, ['approved', 'proposed'])?.link.id).toBe(
+              fresh.linkBetween(id, other, ['approved', 'proposed'])?.link.id,
+            )
           }
         }
       }),

@@ -76,12 +76,28 @@ describe('GET /api/graph/neighbourhood/:partNumber', () => {
     const hubNumber = 'TEST-HUB'
     const written = await inTransaction(own.dataSource, (db) => {
       const spokes = Array.from({ length: MAX_NEIGHBOURHOOD_NODES + 50 }, (_, i) => ({
-        partNumber: `TEST-SPOKE-${i}`, kind: 'other' as const, name: 'Spoke', family: '', yearFrom: null, yearTo: null, notes: '', attributes: {}, marks: [],
+        partNumber: `TEST-SPOKE-${i}`,
+        kind: 'other' as const,
+        name: 'Spoke',
+        family: '',
+        yearFrom: null,
+        yearTo: null,
+        notes: '',
+        attributes: {},
+        marks: [],
       }))
       const ids = insertPartRows(db, [{ ...spokes[0]!, partNumber: hubNumber }, ...spokes])
       const hub = ids.get(hubNumber)!
       const links = spokes.map((spoke) =>
-        insertLinkRow(db, { partIds: [hub, ids.get(spoke.partNumber)!], relation: 'fits', modifications: [], note: '', source: 'editor', status: 'approved', batchId: null }),
+        insertLinkRow(db, {
+          partIds: [hub, ids.get(spoke.partNumber)!],
+          relation: 'fits',
+          modifications: [],
+          note: '',
+          source: 'editor',
+          status: 'approved',
+          batchId: null,
+        }),
       )
       return { parts: [...ids.values()], links }
     })

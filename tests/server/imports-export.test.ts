@@ -19,7 +19,11 @@ describe('GET /api/export/*.csv', () => {
     expect(response.status).toBe(200)
     expect(response.headers['content-type']).toBe('text/csv; charset=utf-8')
     expect(response.headers['content-disposition']).toMatch(/^attachment; filename="?fitwright-parts-\d{4}-\d{2}-\d{2}\.csv/)
-    expect(response.text.startsWith('\uFEFFpart_number,kind,name,family,year_from,year_to,notes,casting_marks,stamped_codes,superseded_numbers,')).toBe(true)
+    expect(
+      response.text.startsWith(
+        '\uFEFFpart_number,kind,name,family,year_from,year_to,notes,casting_marks,stamped_codes,superseded_numbers,',
+      ),
+    ).toBe(true)
     const rows = cellsOf(response.text)
     expect(rows.find((row) => row[0] === 'TM-BL-2000')).toBeDefined()
   })
@@ -27,7 +31,14 @@ describe('GET /api/export/*.csv', () => {
   it('exports approved links and identities, not links still awaiting review', async () => {
     const rows = cellsOf((await editor.get('/api/export/links.csv')).text)
     expect(rows[0]).toEqual(['from_part', 'to_part', 'relation', 'modifications', 'note', 'source'])
-    expect(rows).toContainEqual(['TM-BL-2000', 'TM-BL-2001', 'identical', '', 'Same casting; the late number adds a revised core plug.', 'demo'])
+    expect(rows).toContainEqual([
+      'TM-BL-2000',
+      'TM-BL-2001',
+      'identical',
+      '',
+      'Same casting; the late number adds a revised core plug.',
+      'demo',
+    ])
     expect(rows.some((row) => row.includes('TM-EM-2000H'))).toBe(false)
   })
 
@@ -54,7 +65,10 @@ describe('GET /api/export/*.csv', () => {
   })
 
   it('changes nothing when its own export is imported again (parts, then links)', async () => {
-    await uploadCsv(editor, 'part_number,kind,name,notes,deck_clearance_mm\nTM-X-1,block,=1+1,"\'quoted, and ""more""",-0.5\n', { type: 'parts', mode: 'commit' })
+    await uploadCsv(editor, 'part_number,kind,name,notes,deck_clearance_mm\nTM-X-1,block,=1+1,"\'quoted, and ""more""",-0.5\n', {
+      type: 'parts',
+      mode: 'commit',
+    })
     const before = await catalogueSnapshot(t.dataSource)
     for (const type of ['parts', 'links'] as const) {
       const exported = (await editor.get(`/api/export/${type}.csv`)).text
@@ -64,6 +78,10 @@ describe('GET /api/export/*.csv', () => {
       expect(again.body.counts.unchanged).toBe(cellsOf(exported).length - 1)
     }
     expect(await catalogueSnapshot(t.dataSource)).toEqual(before)
-    expect((await editor.get('/api/parts/TM-X-1')).body).toMatchObject({ name: '=1+1', notes: '\'quoted, and "more"', attributes: { deckClearanceMm: -0.5 } })
+    expect((await editor.get('/api/parts/TM-X-1')).body).toMatchObject({
+      name: '=1+1',
+      notes: '\'quoted, and "more"',
+      attributes: { deckClearanceMm: -0.5 },
+    })
   })
 })

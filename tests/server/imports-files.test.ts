@@ -129,10 +129,17 @@ describe('imports and exports, permissions', () => {
 describe('POST /api/imports with progress', () => {
   it('streams read progress and ends with the result line carrying the real status', async () => {
     const editor = await editorOn()
-    const response = await uploadCsv(editor, 'part_number,kind,name\nTM-X-1,other,Washer\n', { type: 'parts', mode: 'commit', progress: true })
+    const response = await uploadCsv(editor, 'part_number,kind,name\nTM-X-1,other,Washer\n', {
+      type: 'parts',
+      mode: 'commit',
+      progress: true,
+    })
     expect(response.status).toBe(200)
     expect(response.headers['content-type']).toContain('application/x-ndjson')
-    const lines = response.text.trim().split('\n').map((line) => importStreamLineSchema.parse(JSON.parse(line)))
+    const lines = response.text
+      .trim()
+      .split('\n')
+      .map((line) => importStreamLineSchema.parse(JSON.parse(line)))
     expect(lines[0]).toMatchObject({ type: 'progress', phase: 'read' })
     expect(lines.some((line) => line.type === 'progress' && line.phase === 'write')).toBe(true)
     expect(lines.at(-1)).toMatchObject({ type: 'result', status: 201, body: { counts: { created: 1 } } })
@@ -140,7 +147,11 @@ describe('POST /api/imports with progress', () => {
 
   it('ends with an error line when the commit is refused', async () => {
     const editor = await editorOn()
-    const response = await uploadCsv(editor, 'part_number,kind,name\nTM-X-1,flux,Washer\n', { type: 'parts', mode: 'commit', progress: true })
+    const response = await uploadCsv(editor, 'part_number,kind,name\nTM-X-1,flux,Washer\n', {
+      type: 'parts',
+      mode: 'commit',
+      progress: true,
+    })
     const last = importStreamLineSchema.parse(JSON.parse(response.text.trim().split('\n').at(-1)!))
     expect(last).toMatchObject({ type: 'error', status: 422, body: { error: { code: 'rows_rejected' } } })
   })

@@ -29,8 +29,16 @@ describe('POST /api/imports, links, commit', () => {
     const response = await uploadCsv(editor, csv, { type: 'links', mode: 'commit' })
     expect(response.status).toBe(201)
     expect(response.body.counts).toEqual({ created: 2, updated: 0, unchanged: 0, rejected: 0 })
-    expect(await linkRow('TM-HD-2000R', 'TM-BL-2001')).toMatchObject({ relation: 'fits', status: 'approved', source: 'import', batchId: response.body.batchId })
-    expect(await linkRow('TM-BL-2000', 'TM-HD-1810')).toMatchObject({ source: 'field-report', mods: expect.stringContaining('head-stud-sleeve') })
+    expect(await linkRow('TM-HD-2000R', 'TM-BL-2001')).toMatchObject({
+      relation: 'fits',
+      status: 'approved',
+      source: 'import',
+      batchId: response.body.batchId,
+    })
+    expect(await linkRow('TM-BL-2000', 'TM-HD-1810')).toMatchObject({
+      source: 'field-report',
+      mods: expect.stringContaining('head-stud-sleeve'),
+    })
     const [proposed] = await t.dataSource.query("SELECT status, source, batchId FROM modification WHERE name = 'head-stud-sleeve'")
     expect(proposed).toEqual({ status: 'proposed', source: 'import', batchId: response.body.batchId })
   })
@@ -40,7 +48,9 @@ describe('POST /api/imports, links, commit', () => {
     expect((fitResults(before.body) as { part: { partNumber: string } }[]).map((r) => r.part.partNumber)).not.toContain('TM-IM-1800')
     await uploadCsv(editor, `${HEADER}\nTM-HD-2000R,TM-IM-1800,does-not-fit,,Ports do not line up.,\n`, { type: 'links', mode: 'commit' })
     const after = await editor.get('/api/parts/TM-HD-2000R/fits?inferred=0')
-    expect(fitResults(after.body)).toContainEqual(expect.objectContaining({ part: expect.objectContaining({ partNumber: 'TM-IM-1800' }), relation: 'does-not-fit' }))
+    expect(fitResults(after.body)).toContainEqual(
+      expect.objectContaining({ part: expect.objectContaining({ partNumber: 'TM-IM-1800' }), relation: 'does-not-fit' }),
+    )
   })
 
   it('approves a proposed link the file names, and counts it as updated', async () => {
@@ -53,7 +63,10 @@ describe('POST /api/imports, links, commit', () => {
   })
 
   it('declares two parts identical with the relation identical, replacing their approved fit link', async () => {
-    const response = await uploadCsv(editor, `${HEADER}\nTM-BL-2000,TM-HD-2000,identical,,Test only.,editor\n`, { type: 'links', mode: 'commit' })
+    const response = await uploadCsv(editor, `${HEADER}\nTM-BL-2000,TM-HD-2000,identical,,Test only.,editor\n`, {
+      type: 'links',
+      mode: 'commit',
+    })
     expect(response.body.counts.updated).toBe(1)
     expect(await linkRow('TM-BL-2000', 'TM-HD-2000')).toBeUndefined()
     const identities = await t.dataSource.query(
@@ -64,7 +77,9 @@ describe('POST /api/imports, links, commit', () => {
 
   it('changes nothing when the same links file is imported a second time', async () => {
     const csv = `${HEADER}\nTM-HD-2000R,TM-BL-2001,fits,,Exchange head.,\nTM-CP-2000,TM-CP-2099,identical,,Same pulley.,\n`
-    await t.dataSource.query("INSERT INTO part (partNumber, partKey, kind, name, attributes) VALUES ('TM-CP-2099', 'TMCP2099', 'crank-pulley', 'Pulley', '{}')")
+    await t.dataSource.query(
+      "INSERT INTO part (partNumber, partKey, kind, name, attributes) VALUES ('TM-CP-2099', 'TMCP2099', 'crank-pulley', 'Pulley', '{}')",
+    )
     expect((await uploadCsv(editor, csv, { type: 'links', mode: 'commit' })).body.counts.created).toBe(2)
     const before = await catalogueSnapshot(t.dataSource)
     const again = await uploadCsv(editor, csv, { type: 'links', mode: 'commit' })
@@ -78,10 +93,20 @@ describe('POST /api/imports, links, bad rows', () => {
     ['an unknown relation', 'TM-HD-2000R,TM-BL-2001,bolts-on,,,', 'relation', 'Unknown relation "bolts-on"'],
     ['a part in neither the catalogue nor the file', 'TM-HD-2000R,TM-BL-9999,fits,,,', 'to_part', 'No part TM-BL-9999'],
     ['a part linked to itself', 'TM-HD-2000R,TM-HD-2000R,fits,,,', 'to_part', 'cannot be linked to itself'],
-    ['fits-with-modification without a modification', 'TM-HD-2000R,TM-BL-2001,fits-with-modification,,,', 'modifications', 'needs at least one modification'],
+    [
+      'fits-with-modification without a modification',
+      'TM-HD-2000R,TM-BL-2001,fits-with-modification,,,',
+      'modifications',
+      'needs at least one modification',
+    ],
     ['a modification on a plain fit', 'TM-HD-2000R,TM-BL-2001,fits,oil-restrictor-fit,,', 'modifications', 'fits-with-modification only'],
     ['an unknown source', 'TM-HD-2000R,TM-BL-2001,fits,,,rumour', 'source', 'Unknown source "rumour"'],
-    ['a modification name that is not a name', 'TM-HD-2000R,TM-BL-2001,fits-with-modification,Drill it out,,', 'modifications', 'not a modification name'],
+    [
+      'a modification name that is not a name',
+      'TM-HD-2000R,TM-BL-2001,fits-with-modification,Drill it out,,',
+      'modifications',
+      'not a modification name',
+    ],
   ])('rejects a row with %s at its column and writes nothing on commit', async (_what, line, column, message) => {
     const csv = `${HEADER}\nTM-HD-2000R,TM-IM-2000,fits,,Good row.,\n${line}\n`
     const preview = await uploadCsv(editor, csv, { type: 'links' })

@@ -29,7 +29,12 @@ describe('POST /api/imports/:id/revert', () => {
     expect(await catalogueSnapshot(t.dataSource)).not.toEqual(before)
     const response = await editor.post(`/api/imports/${batchId}/revert`)
     expect(response.status).toBe(200)
-    expect(response.body).toMatchObject({ id: batchId, status: 'reverted', revertedByName: 'Tobias Ferrand', revertedAt: expect.any(String) })
+    expect(response.body).toMatchObject({
+      id: batchId,
+      status: 'reverted',
+      revertedByName: 'Tobias Ferrand',
+      revertedAt: expect.any(String),
+    })
     expect(await catalogueSnapshot(t.dataSource)).toEqual(before)
   })
 
@@ -66,7 +71,9 @@ describe('POST /api/imports/:id/revert', () => {
     const links = await commit(`${LINKS}\nTM-HD-2100,TM-BL-2000,fits,,,\n`, 'links')
     const refused = await editor.post(`/api/imports/${parts}/revert`)
     expect(refused.status).toBe(409)
-    expect(refused.body.error.details).toEqual([{ path: `batch ${links}`, message: expect.stringContaining('links parts this batch added') }])
+    expect(refused.body.error.details).toEqual([
+      { path: `batch ${links}`, message: expect.stringContaining('links parts this batch added') },
+    ])
     expect((await editor.get('/api/parts/TM-HD-2100')).status).toBe(200)
   })
 
@@ -77,7 +84,10 @@ describe('POST /api/imports/:id/revert', () => {
     expect((await editor.post(`/api/imports/${links.id}/revert`)).status).toBe(200)
     const refused = await editor.post(`/api/imports/${exhaust.id}/revert`)
     expect(refused.status).toBe(409)
-    expect(refused.body.error.details).toContainEqual({ path: 'outside imports', message: expect.stringContaining('links parts this batch added') })
+    expect(refused.body.error.details).toContainEqual({
+      path: 'outside imports',
+      message: expect.stringContaining('links parts this batch added'),
+    })
   })
 
   it('answers 409 for a batch already reverted and 404 for an unknown one', async () => {

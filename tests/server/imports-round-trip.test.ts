@@ -26,13 +26,18 @@ import { insertPartRows } from '../../server/catalogue/part-writer'
 
 // Any text a spreadsheet cell may hold except NUL (a file holding NUL is refused as binary).
 const text = (maxLength: number) => fc.string({ unit: 'grapheme', maxLength }).filter((value) => !value.includes('\u0000'))
-const trimmed = (maxLength: number) => text(maxLength).map((value) => value.trim()).filter((value) => value.length > 0)
+const trimmed = (maxLength: number) =>
+  text(maxLength)
+    .map((value) => value.trim())
+    .filter((value) => value.length > 0)
 
 function valueFor(schema: z.ZodType): fc.Arbitrary<string | number | boolean> {
   if (schema instanceof z.ZodEnum) return fc.constantFrom(...(schema.options as string[]))
   if (schema instanceof z.ZodBoolean) return fc.boolean()
   if (schema instanceof z.ZodNumber) {
-    return fc.oneof(fc.integer({ min: -5, max: 20 }), fc.double({ min: -5, max: 300, noNaN: true })).filter((v) => schema.safeParse(v).success)
+    return fc
+      .oneof(fc.integer({ min: -5, max: 20 }), fc.double({ min: -5, max: 300, noNaN: true }))
+      .filter((v) => schema.safeParse(v).success)
   }
   return fc.oneof(fc.constantFrom('M11x1.5', 'M10x1.25'), trimmed(12)).filter((v) => schema.safeParse(v).success)
 }
@@ -65,19 +70,25 @@ function partFor(kind: PartKind): fc.Arbitrary<PartInput> {
 }
 
 const catalogueArb = fc
-  .uniqueArray(fc.constantFrom(...PART_KINDS).chain(partFor), { minLength: 2, maxLength: 8, selector: (p) => normalisePartCode(p.partNumber) })
+  .uniqueArray(fc.constantFrom(...PART_KINDS).chain(partFor), {
+    minLength: 2,
+    maxLength: 8,
+    selector: (p) => normalisePartCode(p.partNumber),
+  })
   .chain((parts) =>
     fc.record({
       parts: fc.constant(parts),
       links: fc.uniqueArray(
-        fc.record({
-          a: fc.nat({ max: parts.length - 1 }),
-          b: fc.nat({ max: parts.length - 1 }),
-          relation: fc.constantFrom('fits', 'fits-with-modification', 'does-not-fit', 'identical'),
-          mods: fc.uniqueArray(fc.constantFrom('oil-restrictor-fit', 'custom-shim', 'bracket-trim'), { minLength: 1, maxLength: 2 }),
-          note: text(40),
-          source: fc.constantFrom(...LINK_SOURCES),
-        }).filter((link) => link.a !== link.b),
+        fc
+          .record({
+            a: fc.nat({ max: parts.length - 1 }),
+            b: fc.nat({ max: parts.length - 1 }),
+            relation: fc.constantFrom('fits', 'fits-with-modification', 'does-not-fit', 'identical'),
+            mods: fc.uniqueArray(fc.constantFrom('oil-restrictor-fit', 'custom-shim', 'bracket-trim'), { minLength: 1, maxLength: 2 }),
+            note: text(40),
+            source: fc.constantFrom(...LINK_SOURCES),
+          })
+          .filter((link) => link.a !== link.b),
         { maxLength: 10, selector: (link) => [link.a, link.b].sort().join(':') },
       ),
     }),
@@ -92,7 +103,15 @@ async function writeCatalogue(dataSource: DataSource, { parts, links }: Catalogu
       if (link.relation === 'identical') insertIdentityRow(db, { partIds, note: link.note, source: link.source, batchId: null })
       else {
         const modifications = link.relation === 'fits-with-modification' ? link.mods : []
-        insertLinkRow(db, { partIds, relation: link.relation, modifications, note: link.note, source: link.source, status: 'approved', batchId: null })
+        insertLinkRow(db, {
+          partIds,
+          relation: link.relation,
+          modifications,
+          note: link.note,
+          source: link.source,
+          status: 'approved',
+          batchId: null,
+        })
       }
     }
   })
@@ -100,7 +119,9 @@ async function writeCatalogue(dataSource: DataSource, { parts, links }: Catalogu
 
 /** The catalogue by natural keys only: ids and timestamps may differ between two databases. */
 async function readCatalogue(dataSource: DataSource) {
-  const parts = (await dataSource.query('SELECT partNumber, kind, name, family, yearFrom, yearTo, notes, attributes FROM part ORDER BY partNumber')) as {
+  const parts = (await dataSource.query(
+    'SELECT partNumber, kind, name, family, yearFrom, yearTo, notes, attributes FROM part ORDER BY partNumber',
+  )) as {
     attributes: string
   }[]
   const pair = `CASE WHEN a.partNumber < b.partNumber THEN a.partNumber || ' ' || b.partNumber ELSE b.partNumber || ' ' || a.partNumber END`
@@ -112,7 +133,9 @@ async function readCatalogue(dataSource: DataSource) {
          (SELECT group_concat(name, ';') FROM (SELECT m.name FROM link_modification lm JOIN modification m ON m.id = lm.modificationId WHERE lm.linkId = l.id ORDER BY m.name)) AS mods
        FROM link l JOIN part a ON a.id = l.partAId JOIN part b ON b.id = l.partBId ORDER BY 1`,
     ),
-    identities: await dataSource.query(`SELECT ${pair} AS pair, i.note, i.source FROM part_identity i JOIN part a ON a.id = i.partAId JOIN part b ON b.id = i.partBId ORDER BY 1`),
+    identities: await dataSource.query(
+      `SELECT ${pair} AS pair, i.note, i.source FROM part_identity i JOIN part a ON a.id = i.partAId JOIN part b ON b.id = i.partBId ORDER BY 1`,
+    ),
     modifications: await dataSource.query('SELECT name, status FROM modification ORDER BY name'),
   }
 }
@@ -137,7 +160,15 @@ describe('export then import into an empty database (property, fast-check)', () 
             const file = path.join(dir, `${type}.csv`)
             writeFileSync(file, csv)
             const user = { id: null, name: 'test' }
-            await imports.run({ filePath: file, fileName: `${type}.csv`, fileSize: Buffer.byteLength(csv), type, mode: 'commit', validRowsOnly: false, user })
+            await imports.run({
+              filePath: file,
+              fileName: `${type}.csv`,
+              fileSize: Buffer.byteLength(csv),
+              type,
+              mode: 'commit',
+              validRowsOnly: false,
+              user,
+            })
           }
           expect(await readCatalogue(target)).toEqual(await readCatalogue(source))
         } finally {

@@ -12,7 +12,11 @@ beforeAll(async () => {
 afterAll(() => t.close())
 
 const fitsOf = async (part: string) =>
-  fitResults((await editor.get(`/api/parts/${part}/fits?inferred=0`)).body) as { part: { partNumber: string }; relation: string; review: string }[]
+  fitResults((await editor.get(`/api/parts/${part}/fits?inferred=0`)).body) as {
+    part: { partNumber: string }
+    relation: string
+    review: string
+  }[]
 
 describe('/api/links (editors review and edit the fitment graph)', () => {
   it('lists proposed links for review', async () => {
@@ -41,7 +45,9 @@ describe('/api/links (editors review and edit the fitment graph)', () => {
   })
 
   it('creates an approved editor link, changes it and deletes it', async () => {
-    const created = await editor.post('/api/links').send({ fromPart: 'TM-IM-2000T', toPart: 'TM-HD-2050', relation: 'fits', note: 'Checked on the bench.' })
+    const created = await editor
+      .post('/api/links')
+      .send({ fromPart: 'TM-IM-2000T', toPart: 'TM-HD-2050', relation: 'fits', note: 'Checked on the bench.' })
     expect(created.status).toBe(201)
     expect(created.body).toMatchObject({ relation: 'fits', status: 'approved', source: 'editor' })
     const changed = await editor
@@ -57,7 +63,9 @@ describe('/api/links (editors review and edit the fitment graph)', () => {
 
   it('declares two parts identical, and their links are shared at once', async () => {
     expect((await fitsOf('TM-HD-1810')).map((r) => r.part.partNumber)).not.toContain('TM-DS-2000')
-    const identity = await editor.post('/api/identities').send({ partA: 'TM-HD-1810', partB: 'TM-HD-1800', note: 'Same casting, later number.' })
+    const identity = await editor
+      .post('/api/identities')
+      .send({ partA: 'TM-HD-1810', partB: 'TM-HD-1800', note: 'Same casting, later number.' })
     expect(identity.status).toBe(201)
     expect((await fitsOf('TM-HD-1810')).map((r) => r.part.partNumber)).toContain('TM-DS-2000')
     expect((await editor.delete(`/api/identities/${identity.body.id}`)).status).toBe(204)
@@ -67,16 +75,28 @@ describe('/api/links (editors review and edit the fitment graph)', () => {
   it('refuses bad links with a message and writes nothing', async () => {
     const before = (await editor.get('/api/links')).body.total
     expectBadRequest(await editor.post('/api/links').send({ fromPart: 'TM-HD-2000', toPart: 'TM-HD-2000', relation: 'fits' }), 'toPart')
-    expectBadRequest(await editor.post('/api/links').send({ fromPart: 'TM-HD-2000', toPart: 'NOPE', relation: 'fits' }), 'toPart', /Unknown part/)
-    expectBadRequest(await editor.post('/api/links').send({ fromPart: 'TM-HD-2000', toPart: 'TM-IM-2000', relation: 'fits-with-modification' }), 'modifications')
-    expectBadRequest(await editor.post('/api/links').send({ fromPart: 'TM-HD-2000', toPart: 'TM-IM-2000', relation: 'sort-of' }), 'relation')
+    expectBadRequest(
+      await editor.post('/api/links').send({ fromPart: 'TM-HD-2000', toPart: 'NOPE', relation: 'fits' }),
+      'toPart',
+      /Unknown part/,
+    )
+    expectBadRequest(
+      await editor.post('/api/links').send({ fromPart: 'TM-HD-2000', toPart: 'TM-IM-2000', relation: 'fits-with-modification' }),
+      'modifications',
+    )
+    expectBadRequest(
+      await editor.post('/api/links').send({ fromPart: 'TM-HD-2000', toPart: 'TM-IM-2000', relation: 'sort-of' }),
+      'relation',
+    )
     const duplicate = await editor.post('/api/links').send({ fromPart: 'TM-BL-2000', toPart: 'TM-HD-2000', relation: 'does-not-fit' })
     expect(duplicate.status).toBe(409)
     expect((await editor.get('/api/links')).body.total).toBe(before)
   })
 
   it('records a change by hand as a batch that blocks reverting the import it changed, and can itself be reverted', async () => {
-    const link = (await editor.get('/api/links?part=TM-HD-1810')).body.items.find((l: { to: string; from: string }) => [l.from, l.to].includes('TM-BL-1800'))
+    const link = (await editor.get('/api/links?part=TM-HD-1810')).body.items.find((l: { to: string; from: string }) =>
+      [l.from, l.to].includes('TM-BL-1800'),
+    )
     const importBatch = (await editor.get('/api/imports')).body.find((b: { fileName: string }) => b.fileName === 'demo/links.csv')
     expect(importBatch).toBeDefined()
     await editor.patch(`/api/links/${link.id}`).send({ note: 'Checked again on the bench.' })

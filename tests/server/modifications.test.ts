@@ -10,7 +10,12 @@ beforeAll(async () => {
 afterAll(() => t.close())
 
 const row = async (name: string) =>
-  ((await t.dataSource.query('SELECT title, updatedAt, status, source FROM modification WHERE name = ?', [name])) as { title: string; updatedAt: string }[])[0]!
+  (
+    (await t.dataSource.query('SELECT title, updatedAt, status, source FROM modification WHERE name = ?', [name])) as {
+      title: string
+      updatedAt: string
+    }[]
+  )[0]!
 
 describe('shipped modification catalogue', () => {
   const specs = loadRules('rules').modifications

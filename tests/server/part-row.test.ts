@@ -6,7 +6,10 @@ const row = (values: Record<string, string>) => ({ part_number: 'X-1', kind: 'he
 describe('parsePartRow', () => {
   it('types known attributes from snake_case columns and keeps unknown columns as text', () => {
     const result = parsePartRow(row({ chamber_cc: '44.5', oil_restrictor: 'yes', valve_lift: 'variable', finish: '12' }))
-    expect(result).toMatchObject({ ok: true, part: { attributes: { chamberCc: 44.5, oilRestrictor: true, valveLift: 'variable', finish: '12' } } })
+    expect(result).toMatchObject({
+      ok: true,
+      part: { attributes: { chamberCc: 44.5, oilRestrictor: true, valveLift: 'variable', finish: '12' } },
+    })
   })
 
   it('reads marks from the reserved list columns', () => {

@@ -28,9 +28,27 @@ describe('GET /api/parts', () => {
   })
 
   it('has demo parts of every kind', async () => {
-    const kinds = ['block', 'head', 'head-gasket', 'head-bolt', 'distributor', 'ignition-leads', 'ecu', 'harness',
-      'intake-manifold', 'intake-gasket', 'exhaust-manifold', 'exhaust-gasket', 'fuel-rail', 'injector', 'cam-gear',
-      'timing-belt', 'crank-pulley', 'oil-restrictor', 'other']
+    const kinds = [
+      'block',
+      'head',
+      'head-gasket',
+      'head-bolt',
+      'distributor',
+      'ignition-leads',
+      'ecu',
+      'harness',
+      'intake-manifold',
+      'intake-gasket',
+      'exhaust-manifold',
+      'exhaust-gasket',
+      'fuel-rail',
+      'injector',
+      'cam-gear',
+      'timing-belt',
+      'crank-pulley',
+      'oil-restrictor',
+      'other',
+    ]
     for (const kind of kinds) {
       const response = await agent.get(`/api/parts?kind=${kind}`)
       expect(response.body.total, kind).toBeGreaterThan(0)

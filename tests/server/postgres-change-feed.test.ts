@@ -43,17 +43,21 @@ describe.skipIf(!postgresServerUrl)('the catalogue change feed between two serve
   })
 
   const addPart = (number: string) =>
-    db.insert(
-      `INSERT INTO part ("partNumber", "partKey", "kind", "name", "attributes") VALUES (?, ?, 'head', ?, '{}') RETURNING "id"`,
-      [number, number.replace(/-/g, ''), number],
-    )
+    db.insert(`INSERT INTO part ("partNumber", "partKey", "kind", "name", "attributes") VALUES (?, ?, 'head', ?, '{}') RETURNING "id"`, [
+      number,
+      number.replace(/-/g, ''),
+      number,
+    ])
 
   it('hands the other server the ids of parts and links written, changed and removed, within a second', async () => {
     const a = await addPart('CF-HD-0001')
     const b = await addPart('CF-BL-0001')
     expect(await nextChange(received, (t) => (t.parts ?? []).includes(b), 1000)).toBeDefined()
 
-    const link = await db.insert(`INSERT INTO link ("partAId", "partBId", "relation", "source") VALUES (?, ?, 'fits', 'editor') RETURNING "id"`, [a, b])
+    const link = await db.insert(
+      `INSERT INTO link ("partAId", "partBId", "relation", "source") VALUES (?, ?, 'fits', 'editor') RETURNING "id"`,
+      [a, b],
+    )
     await nextChange(received, (t) => (t.links ?? []).includes(link), 1000)
 
     received.length = 0
@@ -70,7 +74,9 @@ describe.skipIf(!postgresServerUrl)('the catalogue change feed between two serve
     received.length = 0
     await expect(
       db.transaction(async (tx) => {
-        await tx.insert(`INSERT INTO part ("partNumber", "partKey", "kind", "name", "attributes") VALUES ('CF-HD-0009', 'CFHD0009', 'head', 'x', '{}') RETURNING "id"`)
+        await tx.insert(
+          `INSERT INTO part ("partNumber", "partKey", "kind", "name", "attributes") VALUES ('CF-HD-0009', 'CFHD0009', 'head', 'x', '{}') RETURNING "id"`,
+        )
         throw new Error('rolled back on purpose')
       }),
     ).rejects.toThrow('rolled back on purpose')

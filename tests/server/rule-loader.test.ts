@@ -21,7 +21,13 @@ function edit(file: string, change: (json: Record<string, unknown>) => void) {
   change(json)
   writeFileSync(full, JSON.stringify(json))
 }
-type Rules = { rules: { pair?: string[]; conditions: { all: { operator: string; fact: string }[] }; event: { type: string; params: Record<string, unknown> } }[] }
+type Rules = {
+  rules: {
+    pair?: string[]
+    conditions: { all: { operator: string; fact: string }[] }
+    event: { type: string; params: Record<string, unknown> }
+  }[]
+}
 
 describe('loadRules', () => {
   it('loads every shipped rule file and the catalogues', () => {
@@ -32,13 +38,66 @@ describe('loadRules', () => {
   })
 
   it.each([
-    ['not JSON', 'timing-drive.json', () => writeFileSync(path.join(dir, 'timing-drive.json'), '{ "id": '), /rules\/timing-drive\.json: not valid JSON/],
-    ['an unknown operator', 'oil-restrictor.json', () => edit('oil-restrictor.json', (j) => { (j as unknown as Rules).rules[0]!.conditions.all[0]!.operator = 'roughly' }), /rules\/oil-restrictor\.json: .*unknown operator "roughly"/],
-    ['an unknown fact', 'oil-restrictor.json', () => edit('oil-restrictor.json', (j) => { (j as unknown as Rules).rules[0]!.conditions.all[0]!.fact = 'weather' }), /unknown fact "weather"/],
-    ['a pair that does not mate', 'ignition-lead-cap.json', () => edit('ignition-lead-cap.json', (j) => { (j as unknown as Rules).rules[0]!.pair = ['ignition-leads', 'block'] }), /not a mating pair/],
-    ['an unknown modification', 'distributor-mount.json', () => edit('distributor-mount.json', (j) => { (j as unknown as Rules).rules[1]!.event.params.modification = 'magic' }), /"magic" is not in catalogue\/modifications\.json/],
-    ['an id that is not the file name', 'shaft-fits.json', () => edit('shaft-fits.json', (j) => { j.id = 'other-name' }), /must match the file name/],
-    ['a relation in a build rule', 'shop-safety.json', () => edit('shop-safety.json', (j) => { (j as unknown as Rules).rules[0]!.event = { type: 'relation', params: { relation: 'fits', reason: 'x' } } }), /build rule may only add cautions/],
+    [
+      'not JSON',
+      'timing-drive.json',
+      () => writeFileSync(path.join(dir, 'timing-drive.json'), '{ "id": '),
+      /rules\/timing-drive\.json: not valid JSON/,
+    ],
+    [
+      'an unknown operator',
+      'oil-restrictor.json',
+      () =>
+        edit('oil-restrictor.json', (j) => {
+          ;(j as unknown as Rules).rules[0]!.conditions.all[0]!.operator = 'roughly'
+        }),
+      /rules\/oil-restrictor\.json: .*unknown operator "roughly"/,
+    ],
+    [
+      'an unknown fact',
+      'oil-restrictor.json',
+      () =>
+        edit('oil-restrictor.json', (j) => {
+          ;(j as unknown as Rules).rules[0]!.conditions.all[0]!.fact = 'weather'
+        }),
+      /unknown fact "weather"/,
+    ],
+    [
+      'a pair that does not mate',
+      'ignition-lead-cap.json',
+      () =>
+        edit('ignition-lead-cap.json', (j) => {
+          ;(j as unknown as Rules).rules[0]!.pair = ['ignition-leads', 'block']
+        }),
+      /not a mating pair/,
+    ],
+    [
+      'an unknown modification',
+      'distributor-mount.json',
+      () =>
+        edit('distributor-mount.json', (j) => {
+          ;(j as unknown as Rules).rules[1]!.event.params.modification = 'magic'
+        }),
+      /"magic" is not in catalogue\/modifications\.json/,
+    ],
+    [
+      'an id that is not the file name',
+      'shaft-fits.json',
+      () =>
+        edit('shaft-fits.json', (j) => {
+          j.id = 'other-name'
+        }),
+      /must match the file name/,
+    ],
+    [
+      'a relation in a build rule',
+      'shop-safety.json',
+      () =>
+        edit('shop-safety.json', (j) => {
+          ;(j as unknown as Rules).rules[0]!.event = { type: 'relation', params: { relation: 'fits', reason: 'x' } }
+        }),
+      /build rule may only add cautions/,
+    ],
   ])('stops with the file and the fault for %s', (_label, _file, breakIt, message) => {
     copyRules()
     breakIt()
@@ -50,12 +109,24 @@ describe('RuleBook', () => {
   const book = new RuleBook(loadRules('rules'))
 
   it('never fires on a missing attribute', async () => {
-    const outcomes = await book.evaluatePair('timing-belt', 'cam-gear', { 'timing-belt': { profile: 'curvilinear' }, 'cam-gear': {}, figures: {}, input: {}, slots: {} })
+    const outcomes = await book.evaluatePair('timing-belt', 'cam-gear', {
+      'timing-belt': { profile: 'curvilinear' },
+      'cam-gear': {},
+      figures: {},
+      input: {},
+      slots: {},
+    })
     expect(outcomes).toEqual([])
   })
 
   it('fills the reason from the facts', async () => {
-    const outcomes = await book.evaluatePair('head-gasket', 'block', { 'head-gasket': { boreMm: 84.5 }, block: { boreMm: 86 }, figures: {}, input: {}, slots: {} })
+    const outcomes = await book.evaluatePair('head-gasket', 'block', {
+      'head-gasket': { boreMm: 84.5 },
+      block: { boreMm: 86 },
+      figures: {},
+      input: {},
+      slots: {},
+    })
     expect(outcomes.map((o) => o.event)).toContainEqual({
       type: 'relation',
       params: { relation: 'does-not-fit', reason: expect.stringContaining('Gasket bore 84.5 mm is smaller than the 86 mm cylinder bore') },

@@ -23,13 +23,17 @@ describe('fill the gaps', () => {
   it('rejects a choice that leaves an empty mate without any part that fits', () => {
     const before: Completion = { slots: { 'cam-gear': { matesWith: ['head'], candidates: [candidate('ZX-CG-1', 'cam-gear')] } } }
     const boxedIn: Completion = { slots: { 'cam-gear': { matesWith: ['head', 'crank-pulley'], candidates: [] } } }
-    const open: Completion = { slots: { 'cam-gear': { matesWith: ['head', 'crank-pulley'], candidates: [candidate('ZX-CG-2', 'cam-gear')] } } }
+    const open: Completion = {
+      slots: { 'cam-gear': { matesWith: ['head', 'crank-pulley'], candidates: [candidate('ZX-CG-2', 'cam-gear')] } },
+    }
     expect(createsDeadEnd('crank-pulley', before, boxedIn)).toBe(true)
     expect(createsDeadEnd('crank-pulley', before, open)).toBe(false)
   })
 
   it('does not hold against a choice a mate that was stuck already, nor a slot that does not mate with it', () => {
-    const stuck: Completion = { slots: { 'cam-gear': { matesWith: ['head'], candidates: [] }, injector: { matesWith: ['ecu'], candidates: [] } } }
+    const stuck: Completion = {
+      slots: { 'cam-gear': { matesWith: ['head'], candidates: [] }, injector: { matesWith: ['ecu'], candidates: [] } },
+    }
     expect(createsDeadEnd('crank-pulley', stuck, stuck)).toBe(false)
     const before: Completion = { slots: { injector: { matesWith: [], candidates: [] } } }
     const injectorStuck: Completion = { slots: { injector: { matesWith: ['ecu'], candidates: [] } } }

@@ -189,7 +189,7 @@ export class FitGraph {
         previous.set(next, slot)
         if (next === to) {
           const chain: GraphIdentity[] = []
-          for (let node = to; node !== from; ) {
+          for (let node = to; node !== from;) {
             const step = previous.get(node)!
             chain.unshift(this.identityAt(step))
             node = this.identities.other(step, node)

@@ -39,9 +39,11 @@ export class FitGraphIndex {
     if (this.graph) return Promise.resolve(this.graph)
     if (!this.loading) {
       const loading = this.readAll().then((graph) => (this.graph = graph))
-      loading.catch(() => undefined).finally(() => {
-        if (this.loading === loading) this.loading = null
-      })
+      loading
+        .catch(() => undefined)
+        .finally(() => {
+          if (this.loading === loading) this.loading = null
+        })
       this.loading = loading
     }
     return this.loading
@@ -99,21 +101,21 @@ export class FitGraphIndex {
     this.loads++
     const graph = new FitGraph(this.repository)
     const repo = this.repository
-    for (let after = 0; ; ) {
+    for (let after = 0; ;) {
       const rows = await repo.partPage(after, LOAD_PAGE)
       for (const row of rows) graph.setPart(row.id, row.partNumber, row.kind)
       if (rows.length < LOAD_PAGE) break
       after = rows[rows.length - 1]!.id
       await nextTurn()
     }
-    for (let after = 0; ; ) {
+    for (let after = 0; ;) {
       const rows = await repo.linkPage(after, LOAD_PAGE)
       for (const row of rows) graph.setLink(row.id, row.a, row.b, row.relation, row.status)
       if (rows.length < LOAD_PAGE) break
       after = rows[rows.length - 1]!.id
       await nextTurn()
     }
-    for (let after = 0; ; ) {
+    for (let after = 0; ;) {
       const rows = await repo.identityPage(after, LOAD_PAGE)
       for (const row of rows) graph.identities.add(row.id, row.a, row.b)
       if (rows.length < LOAD_PAGE) break

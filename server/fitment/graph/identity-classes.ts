@@ -21,7 +21,7 @@ export class IdentityClasses {
     const find = (x: number): number => {
       let root = x
       for (let up = parent.get(root); up !== undefined && up !== root; up = parent.get(root)) root = up
-      for (let node = x; node !== root; ) {
+      for (let node = x; node !== root;) {
         const next = parent.get(node)!
         parent.set(node, root)
         node = next

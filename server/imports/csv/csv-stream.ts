@@ -138,7 +138,13 @@ export async function readCsvStream(input: Readable, options: CsvReadOptions): P
         const quoteError = results.errors.find((error) => error.type === 'Quotes')
         if (quoteError) {
           const near = records + (quoteError.row ?? 0) + 1
-          return fail(new CsvFileError('malformed', `Near row ${near}: ${quoteError.message.toLowerCase()}. A quote inside a quoted cell is written as two quotes ("").`), parser)
+          return fail(
+            new CsvFileError(
+              'malformed',
+              `Near row ${near}: ${quoteError.message.toLowerCase()}. A quote inside a quoted cell is written as two quotes ("").`,
+            ),
+            parser,
+          )
         }
         try {
           for (const cells of results.data) {

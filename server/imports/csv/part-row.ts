@@ -107,9 +107,7 @@ export function parsePartRow(row: Record<string, string>): PartRowResult {
   const yearFrom = parseYear(row.year_from, 'year_from', errors)
   const yearTo = parseYear(row.year_to, 'year_to', errors)
   const attributes = typedAttributes(kind, row, errors)
-  const marks = Object.entries(MARK_COLUMNS).flatMap(([column, type]) =>
-    splitList(row[column]).map((value) => ({ type, value })),
-  )
+  const marks = Object.entries(MARK_COLUMNS).flatMap(([column, type]) => splitList(row[column]).map((value) => ({ type, value })))
   if (errors.length) return { ok: false, errors }
   return checkPart({
     partNumber: row.part_number ?? '',
@@ -132,10 +130,7 @@ export function checkPart(candidate: PartInput): PartRowResult {
     ok: false,
     errors: parsed.error.issues.map((issue) => {
       const [first, second] = issue.path.map(String)
-      const column =
-        first === 'attributes' && second
-          ? attributeColumn(candidate.kind, second)
-          : camelToSnake(first ?? 'row')
+      const column = first === 'attributes' && second ? attributeColumn(candidate.kind, second) : camelToSnake(first ?? 'row')
       return { column, message: issue.message }
     }),
   }

@@ -4,7 +4,11 @@ export type CsvTable = { headers: string[]; rows: Record<string, string>[] }
 
 /** Header names as the importers compare them: trimmed, lower case, spaces as underscores. */
 export function normaliseHeader(header: string): string {
-  return header.replace(/^\uFEFF/, '').trim().toLowerCase().replace(/\s+/g, '_')
+  return header
+    .replace(/^\uFEFF/, '')
+    .trim()
+    .toLowerCase()
+    .replace(/\s+/g, '_')
 }
 
 /** Parses a whole CSV text with a header row (delimiter detected, BOM dropped). */

@@ -33,7 +33,11 @@ export type IdentityRecord = {
 export function loadLinkCatalogue(db: Database.Database) {
   const partIds = new Map<string, number>()
   const keys = new Map<string, string>()
-  for (const [id, partNumber, partKey] of db.prepare('SELECT id, partNumber, partKey FROM part').raw().all() as [number, string, string][]) {
+  for (const [id, partNumber, partKey] of db.prepare('SELECT id, partNumber, partKey FROM part').raw().all() as [
+    number,
+    string,
+    string,
+  ][]) {
     partIds.set(partNumber, id)
     keys.set(partKey, partNumber)
   }

@@ -26,7 +26,14 @@ type Shown = { relation: string; modifications: string; note: string; source: st
 const NOTHING: Shown = { relation: '', modifications: '', note: '', source: '', review: '' }
 
 function shownLink(link: StoredLink | undefined, identity: IdentityRecord | undefined): Shown {
-  if (link) return { relation: link.record.relation, modifications: link.names.join('; '), note: link.record.note, source: link.record.source, review: link.record.status }
+  if (link)
+    return {
+      relation: link.record.relation,
+      modifications: link.names.join('; '),
+      note: link.record.note,
+      source: link.record.source,
+      review: link.record.status,
+    }
   if (identity) return { relation: 'identical', modifications: '', note: identity.note, source: identity.source, review: '' }
   return NOTHING
 }
@@ -67,7 +74,11 @@ export function planLinks(db: Database.Database, rows: LinkRows): LinksPlan {
     const id = catalogue.partIds.get(number)
     if (id !== undefined) return id
     const similar = catalogue.numberForKey(normalisePartCode(number))
-    reject(entry, column, `No part ${number} in the catalogue${similar ? ` (did you mean ${similar}?)` : ''}; import it in a parts file first.`)
+    reject(
+      entry,
+      column,
+      `No part ${number} in the catalogue${similar ? ` (did you mean ${similar}?)` : ''}; import it in a parts file first.`,
+    )
     return undefined
   }
 
@@ -113,7 +124,13 @@ export function planLinks(db: Database.Database, rows: LinkRows): LinksPlan {
         continue
       }
       before = shownLink(link, identity)
-      after = { relation: values.relation, modifications: values.modifications.join('; '), note: values.note, source: values.source, review: 'approved' }
+      after = {
+        relation: values.relation,
+        modifications: values.modifications.join('; '),
+        note: values.note,
+        source: values.source,
+        review: 'approved',
+      }
       if (identity) plan.identityDeletes.push(identity)
       if (identity && link) before = { ...before, relation: `${link.record.relation}, identical` }
       if (!link) plan.linkCreates.push({ a, b, values })
@@ -122,7 +139,12 @@ export function planLinks(db: Database.Database, rows: LinkRows): LinksPlan {
     }
 
     plan.changes.repeats(entry.repeats?.length ?? 0)
-    if (before === NOTHING) plan.changes.create(entry.row, () => `${entry.from} – ${entry.to}`, () => fieldChanges(NOTHING, after))
+    if (before === NOTHING)
+      plan.changes.create(
+        entry.row,
+        () => `${entry.from} – ${entry.to}`,
+        () => fieldChanges(NOTHING, after),
+      )
     else plan.changes.compare(entry.row, `${entry.from} – ${entry.to}`, fieldChanges(before, after))
   }
   plan.newModifications = [...newNames].sort()

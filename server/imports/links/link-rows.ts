@@ -32,7 +32,9 @@ function sameValues(a: LinkEntry, b: LinkEntry): boolean {
     a.relation === b.relation &&
     a.note === b.note &&
     a.source === b.source &&
-    (a.modifications === null ? b.modifications === null : b.modifications !== null && a.modifications.join(';') === b.modifications.join(';'))
+    (a.modifications === null
+      ? b.modifications === null
+      : b.modifications !== null && a.modifications.join(';') === b.modifications.join(';'))
   )
 }
 
@@ -81,7 +83,9 @@ export class LinkRows {
     const at = this.at
     const from = restoreCell(cells[at.from] ?? '').trim()
     const to = restoreCell(cells[at.to] ?? '').trim()
-    const relation = restoreCell(cells[at.relation] ?? '').trim().toLowerCase()
+    const relation = restoreCell(cells[at.relation] ?? '')
+      .trim()
+      .toLowerCase()
     const modificationsCell = optionalCell(cells, at.modifications)
     const sourceCell = optionalCell(cells, at.source)?.trim().toLowerCase() ?? null
     const note = optionalCell(cells, at.note)
@@ -101,7 +105,11 @@ export class LinkRows {
       modifications = modificationsCell.trim() ? [...new Set(splitList(modificationsCell).map((name) => name.toLowerCase()))].sort() : []
       for (const name of modifications) {
         if (!MODIFICATION_NAME.test(name) || name.length > 80) {
-          issues.add(row, 'modifications', `"${name}" is not a modification name; names are lower-case words joined by hyphens, like oil-restrictor-fit.`)
+          issues.add(
+            row,
+            'modifications',
+            `"${name}" is not a modification name; names are lower-case words joined by hyphens, like oil-restrictor-fit.`,
+          )
         }
       }
     }
@@ -143,9 +151,17 @@ export class LinkRows {
     }
     const differs = first.relation !== entry.relation ? 'a different relation' : 'different values'
     for (const earlier of rowsOf(first)) {
-      this.issues.add(earlier, 'relation', `The pair ${entry.from} and ${entry.to} is also on row ${row} with ${differs} (${entry.relation}).`)
+      this.issues.add(
+        earlier,
+        'relation',
+        `The pair ${entry.from} and ${entry.to} is also on row ${row} with ${differs} (${entry.relation}).`,
+      )
     }
-    this.issues.add(row, 'relation', `The pair ${entry.from} and ${entry.to} is also on row ${first.row} with ${differs} (${first.relation}).`)
+    this.issues.add(
+      row,
+      'relation',
+      `The pair ${entry.from} and ${entry.to} is also on row ${first.row} with ${differs} (${first.relation}).`,
+    )
     this.conflicting.add(pair)
     this.byPair.delete(pair)
   }

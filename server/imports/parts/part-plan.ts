@@ -35,10 +35,7 @@ export type PartsPlan = {
   updates: PartUpdate[]
 }
 
-const MARK_COLUMN_OF = Object.fromEntries(Object.entries(MARK_COLUMNS).map(([column, type]) => [type, column])) as Record<
-  MarkType,
-  string
->
+const MARK_COLUMN_OF = Object.fromEntries(Object.entries(MARK_COLUMNS).map(([column, type]) => [type, column])) as Record<MarkType, string>
 
 function storedPart(record: PartRecord, marks: MarkRecord[]): PartInput {
   return {
@@ -109,7 +106,11 @@ export function planParts(db: Database.Database, rows: PartRows): PartsPlan {
     if (!record) {
       const sameKey = byKey.get(normalisePartCode(part.partNumber))
       if (sameKey) {
-        reject(entry, 'part_number', `"${part.partNumber}" is part ${sameKey.partNumber} in the catalogue once case and punctuation are ignored; write it as ${sameKey.partNumber}.`)
+        reject(
+          entry,
+          'part_number',
+          `"${part.partNumber}" is part ${sameKey.partNumber} in the catalogue once case and punctuation are ignored; write it as ${sameKey.partNumber}.`,
+        )
         continue
       }
       plan.creates.push(part)
@@ -121,7 +122,8 @@ export function planParts(db: Database.Database, rows: PartRows): PartsPlan {
     const stored = storedPart(record, marks)
     const checked = checkPart(mergeAbsentColumns(stored, part, header))
     if (!checked.ok) {
-      for (const error of checked.errors) reject(entry, error.column, `${error.message} (with the catalogue's values for columns this file does not have)`)
+      for (const error of checked.errors)
+        reject(entry, error.column, `${error.message} (with the catalogue's values for columns this file does not have)`)
       continue
     }
     const merged = checked.part

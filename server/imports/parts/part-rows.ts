@@ -7,8 +7,7 @@ import { RowIssues } from '../import-issues'
 
 export type PartEntry = { rows: number[]; part: PartInput; fingerprint: string }
 
-const sortedEntries = (record: Record<string, unknown>) =>
-  Object.entries(record).sort(([a], [b]) => (a < b ? -1 : a > b ? 1 : 0))
+const sortedEntries = (record: Record<string, unknown>) => Object.entries(record).sort(([a], [b]) => (a < b ? -1 : a > b ? 1 : 0))
 
 /** Everything about a part but its number, in a form two parts compare equal by. */
 export function partFingerprint(part: PartInput): string {

@@ -31,7 +31,18 @@ export function writeParts(db: Database.Database, plan: PartsPlan, batchId: numb
   }
   for (const part of plan.creates) {
     const c = partColumns(part)
-    const result = insertPart.run(c.partNumber, c.partKey, c.kind, c.name, c.family, c.yearFrom, c.yearTo, c.notes, JSON.stringify(c.attributes), batchId)
+    const result = insertPart.run(
+      c.partNumber,
+      c.partKey,
+      c.kind,
+      c.name,
+      c.family,
+      c.yearFrom,
+      c.yearTo,
+      c.notes,
+      JSON.stringify(c.attributes),
+      batchId,
+    )
     const id = Number(result.lastInsertRowid)
     written.push(id)
     writeMarks(id, part)

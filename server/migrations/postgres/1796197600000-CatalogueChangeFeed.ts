@@ -21,7 +21,11 @@ export class CatalogueChangeFeed1796197600000 implements MigrationInterface {
       'CREATE TABLE "catalogue_change" ("id" BIGSERIAL PRIMARY KEY, "touched" jsonb NOT NULL, "createdAt" TIMESTAMP NOT NULL DEFAULT (now() AT TIME ZONE \'utc\'))',
     )
     for (const [table, key, column] of TABLES) {
-      for (const [operation, rows] of [['INSERT', 'new_rows'], ['UPDATE', 'new_rows'], ['DELETE', 'old_rows']] as const) {
+      for (const [operation, rows] of [
+        ['INSERT', 'new_rows'],
+        ['UPDATE', 'new_rows'],
+        ['DELETE', 'old_rows'],
+      ] as const) {
         const fn = `fitwright_${table}_${operation.toLowerCase()}_changed`
         await queryRunner.query(`CREATE FUNCTION ${fn}() RETURNS trigger LANGUAGE plpgsql AS $$
           DECLARE change_id bigint;

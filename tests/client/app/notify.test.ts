@@ -54,7 +54,10 @@ describe('useNotify', () => {
 
 describe('AppRemoteState while loading', () => {
   it('announces its loading text with the spinner in the same status line', () => {
-    const wrapper = mount(AppRemoteState, { props: { isLoading: true, error: null, loadingText: 'Loading the graph…' }, global: { plugins: [PrimeVue] } })
+    const wrapper = mount(AppRemoteState, {
+      props: { isLoading: true, error: null, loadingText: 'Loading the graph…' },
+      global: { plugins: [PrimeVue] },
+    })
     const status = wrapper.get('[role="status"]')
     expect(status.text()).toBe('Loading the graph…')
     expect(status.find('.p-progressspinner').exists()).toBe(true)

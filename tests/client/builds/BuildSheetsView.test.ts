@@ -12,8 +12,14 @@ const stored = [
   { id: 1, name: 'Bench swap for bay 3', slots: { block: 'TM-BL-1800', head: 'TM-HD-2000' }, notes: '' },
   { id: 2, name: 'Race head', slots: { head: 'TM-HD-1800' }, notes: 'thin gasket' },
 ].map((sheet) => ({
-  ...sheet, targetPowerKw: null, fuelOctane: null, chassisModelYear: null, vin: null,
-  owner: { id: 1, name: 'A. Tech' }, createdAt: '2026-01-01T00:00:00.000Z', updatedAt: '2026-03-04T09:05:00.000Z',
+  ...sheet,
+  targetPowerKw: null,
+  fuelOctane: null,
+  chassisModelYear: null,
+  vin: null,
+  owner: { id: 1, name: 'A. Tech' },
+  createdAt: '2026-01-01T00:00:00.000Z',
+  updatedAt: '2026-03-04T09:05:00.000Z',
 }))
 
 async function mountList() {
@@ -28,7 +34,10 @@ async function mountList() {
     ],
   })
   await router.push('/builds')
-  const wrapper = mount(BuildSheetsView, { global: { plugins: [router, createPinia(), PrimeVue, ToastService, ConfirmationService] }, attachTo: document.body })
+  const wrapper = mount(BuildSheetsView, {
+    global: { plugins: [router, createPinia(), PrimeVue, ToastService, ConfirmationService] },
+    attachTo: document.body,
+  })
   await flushPromises()
   return wrapper
 }

@@ -5,8 +5,17 @@ import { filterSheets } from '@/lib/build-sheet-filter'
 
 function sheet(id: number, name: string, slots: Record<string, string>, notes = ''): BuildSheet {
   return {
-    id, name, slots, notes, targetPowerKw: null, fuelOctane: null, chassisModelYear: null, vin: null,
-    owner: { id: 1, name: 'A. Tech' }, createdAt: '2026-01-01T00:00:00.000Z', updatedAt: '2026-01-01T00:00:00.000Z',
+    id,
+    name,
+    slots,
+    notes,
+    targetPowerKw: null,
+    fuelOctane: null,
+    chassisModelYear: null,
+    vin: null,
+    owner: { id: 1, name: 'A. Tech' },
+    createdAt: '2026-01-01T00:00:00.000Z',
+    updatedAt: '2026-01-01T00:00:00.000Z',
   }
 }
 

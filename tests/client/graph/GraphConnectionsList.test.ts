@@ -4,16 +4,33 @@ import type { GraphEdge, GraphNode } from '@shared/schemas/graph'
 import GraphConnectionsList from '@/components/graph/GraphConnectionsList.vue'
 
 function makeAnswer(centre: string, edgeCount: number): { nodes: GraphNode[]; edges: GraphEdge[] } {
-  const node = (id: string, distance: number): GraphNode => ({ id, partNumber: id, name: `${id} name`, kind: 'head', family: 'TK18', distance })
+  const node = (id: string, distance: number): GraphNode => ({
+    id,
+    partNumber: id,
+    name: `${id} name`,
+    kind: 'head',
+    family: 'TK18',
+    distance,
+  })
   const others = Array.from({ length: edgeCount }, (_, index) => node(`${centre}-N${index}`, 1))
   return {
     nodes: [node(centre, 0), ...others],
-    edges: others.map((other, index) => ({ id: `e${index}`, source: centre, target: other.id, type: 'link', relation: 'fits', review: 'approved' })),
+    edges: others.map((other, index) => ({
+      id: `e${index}`,
+      source: centre,
+      target: other.id,
+      type: 'link',
+      relation: 'fits',
+      review: 'approved',
+    })),
   }
 }
 
 function mountList(answer: ReturnType<typeof makeAnswer>) {
-  return mount(GraphConnectionsList, { props: { ...answer, selected: null }, global: { stubs: { RouterLink: { template: '<a><slot /></a>' } } } })
+  return mount(GraphConnectionsList, {
+    props: { ...answer, selected: null },
+    global: { stubs: { RouterLink: { template: '<a><slot /></a>' } } },
+  })
 }
 
 describe('GraphConnectionsList', () => {

@@ -14,11 +14,13 @@ describe('field messages', () => {
   })
 
   it('keeps the first message of a field that has several', () => {
-    expect(fieldMessages([
-      { path: 'password', message: 'Use at least 10 characters.' },
-      { path: 'password', message: 'Use a letter and a digit.' },
-      { path: 'email', message: 'Enter a valid e-mail address.' },
-    ])).toEqual({ password: 'Use at least 10 characters.', email: 'Enter a valid e-mail address.' })
+    expect(
+      fieldMessages([
+        { path: 'password', message: 'Use at least 10 characters.' },
+        { path: 'password', message: 'Use a letter and a digit.' },
+        { path: 'email', message: 'Enter a valid e-mail address.' },
+      ]),
+    ).toEqual({ password: 'Use at least 10 characters.', email: 'Enter a valid e-mail address.' })
   })
 
   it('places messages by the fields a form shows and says when one has no field to sit beside', () => {
@@ -26,7 +28,13 @@ describe('field messages', () => {
       { path: 'email', message: 'A user with that e-mail exists already.' },
       { path: 'team', message: 'No such team.' },
     ]
-    expect(placeFieldMessages(errors, ['email', 'name'])).toEqual({ messages: { email: 'A user with that e-mail exists already.' }, unplaced: true })
-    expect(placeFieldMessages(errors.slice(0, 1), ['email', 'name'])).toEqual({ messages: { email: 'A user with that e-mail exists already.' }, unplaced: false })
+    expect(placeFieldMessages(errors, ['email', 'name'])).toEqual({
+      messages: { email: 'A user with that e-mail exists already.' },
+      unplaced: true,
+    })
+    expect(placeFieldMessages(errors.slice(0, 1), ['email', 'name'])).toEqual({
+      messages: { email: 'A user with that e-mail exists already.' },
+      unplaced: false,
+    })
   })
 })

@@ -3,7 +3,14 @@ import type { FitGroupPage } from '@shared/schemas/fitment'
 import { filterGroups, groupFits, kindsIn, relationCounts, withPage } from '@/lib/fit-groups'
 import { makeFit, makePart } from '../../helpers/client-factories'
 
-function group(kind: FitGroupPage['kind'], relation: FitGroupPage['relation'], source: FitGroupPage['source'], numbers: string[], total = numbers.length, offset = 0): FitGroupPage {
+function group(
+  kind: FitGroupPage['kind'],
+  relation: FitGroupPage['relation'],
+  source: FitGroupPage['source'],
+  numbers: string[],
+  total = numbers.length,
+  offset = 0,
+): FitGroupPage {
   const review = source === 'inferred' ? 'inferred' : 'approved'
   return { kind, relation, source, total, offset, results: numbers.map((n) => makeFit(makePart(n, kind), relation, review)) }
 }
@@ -53,7 +60,11 @@ describe('what fits, grouped and filtered', () => {
     const second = [group('block', 'fits', 'inferred', ['ZX-BL-40'], 40, 20)]
     const merged = withPage(groups, second)
     const blockFits = groupFits(merged)[0]!.relations[0]!
-    expect(blockFits.sections.map((s) => [s.source, s.offset, s.results.map((r) => r.part.partNumber)])).toEqual([['inferred', 20, ['ZX-BL-40']]])
-    expect(merged.filter((g) => g.kind !== 'block' || g.relation !== 'fits')).toEqual(groups.filter((g) => g.kind !== 'block' || g.relation !== 'fits'))
+    expect(blockFits.sections.map((s) => [s.source, s.offset, s.results.map((r) => r.part.partNumber)])).toEqual([
+      ['inferred', 20, ['ZX-BL-40']],
+    ])
+    expect(merged.filter((g) => g.kind !== 'block' || g.relation !== 'fits')).toEqual(
+      groups.filter((g) => g.kind !== 'block' || g.relation !== 'fits'),
+    )
   })
 })

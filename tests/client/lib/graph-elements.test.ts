@@ -7,7 +7,13 @@ import { FIT_LOOKS } from '@/lib/relations'
 function node(id: string, distance: number): GraphNode {
   return { id, partNumber: id, name: `${id} name`, kind: 'head', family: 'ZX', distance }
 }
-function link(id: string, source: string, target: string, relation: GraphEdge['relation'], review: GraphEdge['review'] = 'approved'): GraphEdge {
+function link(
+  id: string,
+  source: string,
+  target: string,
+  relation: GraphEdge['relation'],
+  review: GraphEdge['review'] = 'approved',
+): GraphEdge {
   return { id, source, target, type: 'link', relation, review, modifications: [] }
 }
 
@@ -66,7 +72,15 @@ describe('graph elements', () => {
   it('tells relations apart by line style and end marker, not only by colour', () => {
     const looks = Object.values(FIT_LOOKS).map((look) => `${look.line}/${look.marker}/${look.glyph}`)
     expect(new Set(looks).size).toBe(looks.length)
-    const palette = { text: '#000', surface: '#fff', border: '#777', node: '#eee', centre: '#fb0', centreText: '#000', looks: { fits: '#111', 'fits-with-modification': '#111', 'does-not-fit': '#111', unknown: '#111', identical: '#111' } }
+    const palette = {
+      text: '#000',
+      surface: '#fff',
+      border: '#777',
+      node: '#eee',
+      centre: '#fb0',
+      centreText: '#000',
+      looks: { fits: '#111', 'fits-with-modification': '#111', 'does-not-fit': '#111', unknown: '#111', identical: '#111' },
+    }
     const sheet = graphStylesheet(palette, false)
     const style = (selector: string) => sheet.find((block) => 'selector' in block && block.selector === selector)
     expect(style('edge.look-fits-with-modification')).toMatchObject({ style: { 'line-style': 'dashed', 'target-arrow-shape': 'diamond' } })
@@ -89,12 +103,20 @@ describe('graph elements', () => {
 
 describe('rings for a big neighbourhood', () => {
   it('puts the centre alone, then each distance in rings that grow outwards', () => {
-    const nodes = [{ id: 'C', distance: 0 }, ...Array.from({ length: 5 }, (_, i) => ({ id: `A${i}`, distance: 1 })), ...Array.from({ length: 9 }, (_, i) => ({ id: `B${i}`, distance: 2 }))]
+    const nodes = [
+      { id: 'C', distance: 0 },
+      ...Array.from({ length: 5 }, (_, i) => ({ id: `A${i}`, distance: 1 })),
+      ...Array.from({ length: 9 }, (_, i) => ({ id: `B${i}`, distance: 2 })),
+    ]
     const rings = ringIndex(nodes, 2, 1)
     expect(rings.C).toBe(0)
     // distance 1: rings of 2, then 3 parts
     expect(['A0', 'A1', 'A2', 'A3', 'A4'].map((id) => rings[id])).toEqual([1, 1, 2, 2, 2])
     // distance 2 starts a new ring even though the last one had room: rings of 2, 3, 4
-    expect(Object.entries(rings).filter(([id]) => id.startsWith('B')).map(([, ring]) => ring)).toEqual([3, 3, 4, 4, 4, 5, 5, 5, 5])
+    expect(
+      Object.entries(rings)
+        .filter(([id]) => id.startsWith('B'))
+        .map(([, ring]) => ring),
+    ).toEqual([3, 3, 4, 4, 4, 5, 5, 5, 5])
   })
 })

@@ -1,5 +1,14 @@
 import { describe, expect, it } from 'vitest'
-import { buildKey, evaluateBody, isEmptyBuild, plannerFromQuery, plannerToQuery, sameBuild, withContext, withSlots } from '@/lib/planner-query'
+import {
+  buildKey,
+  evaluateBody,
+  isEmptyBuild,
+  plannerFromQuery,
+  plannerToQuery,
+  sameBuild,
+  withContext,
+  withSlots,
+} from '@/lib/planner-query'
 
 describe('planner address', () => {
   it('reads slots and context from the query and writes the same query back', () => {
@@ -48,7 +57,11 @@ describe('planner address', () => {
 describe('changing a build', () => {
   it('sets a slot trimmed, replaces it, and clears it for an empty value, leaving the others', () => {
     const start = { slots: { block: 'ZX-BL-1', head: 'ZX-HD-2' }, context: { targetPowerKw: 90 } }
-    expect(withSlots(start, { head: ' ZX-HD-3 ', 'head-gasket': 'ZX-HG-1' }).slots).toEqual({ block: 'ZX-BL-1', head: 'ZX-HD-3', 'head-gasket': 'ZX-HG-1' })
+    expect(withSlots(start, { head: ' ZX-HD-3 ', 'head-gasket': 'ZX-HG-1' }).slots).toEqual({
+      block: 'ZX-BL-1',
+      head: 'ZX-HD-3',
+      'head-gasket': 'ZX-HG-1',
+    })
     expect(withSlots(start, { head: null, block: '  ' }).slots).toEqual({})
     expect(start.slots).toEqual({ block: 'ZX-BL-1', head: 'ZX-HD-2' })
   })
@@ -60,6 +73,8 @@ describe('changing a build', () => {
   })
 
   it('gives one key to the same build whatever order its address was written in', () => {
-    expect(buildKey(plannerFromQuery({ head: 'ZX-HD-2', block: 'ZX-BL-1' }))).toBe(buildKey(plannerFromQuery({ block: 'ZX-BL-1', head: 'ZX-HD-2' })))
+    expect(buildKey(plannerFromQuery({ head: 'ZX-HD-2', block: 'ZX-BL-1' }))).toBe(
+      buildKey(plannerFromQuery({ block: 'ZX-BL-1', head: 'ZX-HD-2' })),
+    )
   })
 })

@@ -9,9 +9,20 @@ describe('slot picker choices', () => {
   const other = makePart('ZX-HG-9', 'head-gasket')
 
   it('lists suggested parts first with their relation, then the other parts of the kind marked as not suggested', () => {
-    const groups = slotOptionGroups('head-gasket', '', [makeCandidate(fitting), makeCandidate(withMod, 'fits-with-modification')], [fitting, withMod, other])
+    const groups = slotOptionGroups(
+      'head-gasket',
+      '',
+      [makeCandidate(fitting), makeCandidate(withMod, 'fits-with-modification')],
+      [fitting, withMod, other],
+    )
     expect(groups.map((g) => [g.label, g.items.map((o) => [o.part.partNumber, o.suggested, o.relation])])).toEqual([
-      ['Fit the parts already chosen', [['ZX-HG-1', true, 'fits'], ['ZX-HG-2', true, 'fits-with-modification']]],
+      [
+        'Fit the parts already chosen',
+        [
+          ['ZX-HG-1', true, 'fits'],
+          ['ZX-HG-2', true, 'fits-with-modification'],
+        ],
+      ],
       ['Other head gasket parts: not suggested, checked once chosen', [['ZX-HG-9', false, undefined]]],
     ])
   })

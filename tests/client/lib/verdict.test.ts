@@ -33,7 +33,11 @@ describe('verdictHeadline', () => {
 
 describe('verdictDetail', () => {
   it('names only the pairs that do not fit when the build does not fit', () => {
-    const pairs = [makePair(['head', 'block'], 'fits', 'Head on block'), makePair(['cam-gear', 'head'], 'does-not-fit', 'Cam gear on head'), makePair(['injector', 'head'], 'does-not-fit', 'Injectors in head')]
+    const pairs = [
+      makePair(['head', 'block'], 'fits', 'Head on block'),
+      makePair(['cam-gear', 'head'], 'does-not-fit', 'Cam gear on head'),
+      makePair(['injector', 'head'], 'does-not-fit', 'Injectors in head'),
+    ]
     expect(verdictDetail(makeEvaluation({ verdict: 'does-not-fit', pairs }))).toBe('Does not fit: Cam gear on head; Injectors in head.')
   })
 
@@ -47,7 +51,9 @@ describe('verdictDetail', () => {
 
   it('names the pairs no link or rule covers when the verdict is unknown', () => {
     const pairs = [makePair(['head', 'block'], 'unknown', 'Head on block')]
-    expect(verdictDetail(makeEvaluation({ verdict: 'unknown', pairs }))).toBe('No catalogue link or rule covers Head on block: check by hand.')
+    expect(verdictDetail(makeEvaluation({ verdict: 'unknown', pairs }))).toBe(
+      'No catalogue link or rule covers Head on block: check by hand.',
+    )
   })
 
   it('asks for a mating part when the verdict is unknown because no pair was judged', () => {
@@ -72,7 +78,10 @@ describe('missingSlotLabels', () => {
 describe('fillGapsSummary', () => {
   it('counts the filled slots and names each still empty slot with the reason', () => {
     const summary = fillGapsSummary({
-      filled: [{ slot: 'head', partNumber: 'TK18-HD-0001' }, { slot: 'injector', partNumber: 'TK18-IN-0002' }],
+      filled: [
+        { slot: 'head', partNumber: 'TK18-HD-0001' },
+        { slot: 'injector', partNumber: 'TK18-IN-0002' },
+      ],
       unfilled: [{ slot: 'oil-restrictor', note: 'nothing in the catalogue fits the block' }],
     })
     expect(summary).toEqual({

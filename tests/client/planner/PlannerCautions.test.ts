@@ -34,7 +34,10 @@ describe('PlannerCautions', () => {
         ],
       },
     })
-    const texts = wrapper.get('ul').findAll('li').map((item) => item.text())
+    const texts = wrapper
+      .get('ul')
+      .findAll('li')
+      .map((item) => item.text())
     expect(texts).toEqual([
       'Note: Keep the old gasket for comparison.',
       'Warning: Torque-to-yield head bolts: fit new ones.',

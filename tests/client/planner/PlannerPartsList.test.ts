@@ -15,7 +15,10 @@ describe('PlannerPartsList', () => {
         ],
       },
     })
-    const rows = wrapper.get('table').findAll('tbody tr').map((row) => row.findAll('td').map((cell) => cell.text()))
+    const rows = wrapper
+      .get('table')
+      .findAll('tbody tr')
+      .map((row) => row.findAll('td').map((cell) => cell.text()))
     expect(rows).toEqual([
       ['ZX-IN-1', 'Injector', '4', 'piece', 'Chosen part', 'Chosen injectors.'],
       ['—', 'Injector O-rings', '4', 'pair', 'Consumable', 'Single-use.'],

@@ -44,7 +44,7 @@ describe('PlannerSlotPicker', () => {
   it('opens exactly the typed number on Enter when it arrived whole at focus and the focus list answered late', async () => {
     const server = heldServer()
     const wrapper = mount(PlannerSlotPicker, {
-      props: { slot: headSlot, build: () => ({ slots: { block: 'TM-BL-1800' }, context: {} }) },
+      props: { buildSlot: headSlot, build: () => ({ slots: { block: 'TM-BL-1800' }, context: {} }) },
       global: { plugins: [PrimeVue] },
       attachTo: document.body,
     })
@@ -65,7 +65,7 @@ describe('PlannerSlotPicker', () => {
     vi.useFakeTimers({ toFake: ['setTimeout', 'clearTimeout'] })
     const server = heldServer()
     const wrapper = mount(PlannerSlotPicker, {
-      props: { slot: headSlot, build: () => ({ slots: { block: 'TM-BL-1800' }, context: {} }) },
+      props: { buildSlot: headSlot, build: () => ({ slots: { block: 'TM-BL-1800' }, context: {} }) },
       global: { plugins: [PrimeVue] },
       attachTo: document.body,
     })

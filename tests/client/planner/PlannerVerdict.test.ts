@@ -24,7 +24,10 @@ describe('PlannerVerdict', () => {
   it('names the pairs that do not fit', () => {
     const evaluation = makeEvaluation({
       verdict: 'does-not-fit',
-      pairs: [makePair(['head', 'block'], 'fits', 'Head on block'), makePair(['intake-manifold', 'head'], 'does-not-fit', 'Intake manifold on head')],
+      pairs: [
+        makePair(['head', 'block'], 'fits', 'Head on block'),
+        makePair(['intake-manifold', 'head'], 'does-not-fit', 'Intake manifold on head'),
+      ],
     })
     const wrapper = mountVerdict({ evaluation, filledCount: 3, isLoading: false })
     expect(wrapper.text()).toContain('Does not fit: Intake manifold on head.')
@@ -32,7 +35,11 @@ describe('PlannerVerdict', () => {
   })
 
   it('lists the empty slots by their labels and says the verdict covers the chosen parts only', () => {
-    const wrapper = mountVerdict({ evaluation: makeEvaluation({ missingSlots: ['oil-restrictor', 'injector'] }), filledCount: 16, isLoading: false })
+    const wrapper = mountVerdict({
+      evaluation: makeEvaluation({ missingSlots: ['oil-restrictor', 'injector'] }),
+      filledCount: 16,
+      isLoading: false,
+    })
     expect(wrapper.get('h2').text()).toBe('The parts chosen so far fit')
     expect(wrapper.text()).toContain('2 of 18 slots empty: Oil feed restrictor, Injectors.')
     expect(wrapper.text()).toContain('covers the chosen parts only')

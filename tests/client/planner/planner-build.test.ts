@@ -85,7 +85,7 @@ describe('the planner build is the address', () => {
     expect(build().slots.value).toEqual({ block: 'ZX-BL-1' })
   })
 
-  it('adds a history entry for a context change and keeps the saved sheet\'s address', async () => {
+  it("adds a history entry for a context change and keeps the saved sheet's address", async () => {
     const { router, build } = await mountPlanner('/planner/7?block=ZX-BL-1')
     await build().setContext({ fuelOctane: 95 })
     expect(router.currentRoute.value.fullPath).toBe('/planner/7?block=ZX-BL-1&octane=95')
@@ -103,8 +103,17 @@ describe('the planner build is the address', () => {
   it('tells a build with edits apart from the sheet it came from', async () => {
     const { build, planner } = await mountPlanner('/planner/7?block=ZX-BL-1')
     planner.openSheet({
-      id: 7, name: 'Bay 3', slots: { block: 'ZX-BL-1' }, targetPowerKw: null, fuelOctane: null, chassisModelYear: null, vin: null,
-      notes: '', owner: { id: 1, name: 'A. Tech' }, createdAt: '2026-01-01T00:00:00.000Z', updatedAt: '2026-01-01T00:00:00.000Z',
+      id: 7,
+      name: 'Bay 3',
+      slots: { block: 'ZX-BL-1' },
+      targetPowerKw: null,
+      fuelOctane: null,
+      chassisModelYear: null,
+      vin: null,
+      notes: '',
+      owner: { id: 1, name: 'A. Tech' },
+      createdAt: '2026-01-01T00:00:00.000Z',
+      updatedAt: '2026-01-01T00:00:00.000Z',
     })
     expect(build().isDirty.value).toBe(false)
     await build().setSlot('head', 'ZX-HD-2')
@@ -140,11 +149,23 @@ describe('the live verdict', () => {
 
 describe('the planner address beyond the build', () => {
   const saved = {
-    id: 7, name: 'Bay 3', slots: { block: 'ZX-BL-1', head: 'ZX-HD-2' }, targetPowerKw: 110, fuelOctane: null, chassisModelYear: null, vin: null,
-    notes: '', owner: { id: 1, name: 'A. Tech' }, createdAt: '2026-01-01T00:00:00.000Z', updatedAt: '2026-01-01T00:00:00.000Z',
+    id: 7,
+    name: 'Bay 3',
+    slots: { block: 'ZX-BL-1', head: 'ZX-HD-2' },
+    targetPowerKw: 110,
+    fuelOctane: null,
+    chassisModelYear: null,
+    vin: null,
+    notes: '',
+    owner: { id: 1, name: 'A. Tech' },
+    createdAt: '2026-01-01T00:00:00.000Z',
+    updatedAt: '2026-01-01T00:00:00.000Z',
   }
   const stubSheet = () =>
-    vi.stubGlobal('fetch', async () => new Response(JSON.stringify(saved), { status: 200, headers: { 'Content-Type': 'application/json' } }))
+    vi.stubGlobal(
+      'fetch',
+      async () => new Response(JSON.stringify(saved), { status: 200, headers: { 'Content-Type': 'application/json' } }),
+    )
 
   it('opens a saved sheet by filling its empty address with the sheet, in place of the entry', async () => {
     stubSheet()
@@ -173,12 +194,24 @@ describe('the planner address beyond the build', () => {
 })
 
 describe('opening a sheet that was open before', () => {
-  it('shows it as saved when opened again by its plain address (the list\'s Open)', async () => {
+  it("shows it as saved when opened again by its plain address (the list's Open)", async () => {
     const saved = {
-      id: 7, name: 'Bay 3, renamed', slots: { block: 'ZX-BL-1' }, targetPowerKw: null, fuelOctane: null, chassisModelYear: null, vin: null,
-      notes: '', owner: { id: 1, name: 'A. Tech' }, createdAt: '2026-01-01T00:00:00.000Z', updatedAt: '2026-01-02T00:00:00.000Z',
+      id: 7,
+      name: 'Bay 3, renamed',
+      slots: { block: 'ZX-BL-1' },
+      targetPowerKw: null,
+      fuelOctane: null,
+      chassisModelYear: null,
+      vin: null,
+      notes: '',
+      owner: { id: 1, name: 'A. Tech' },
+      createdAt: '2026-01-01T00:00:00.000Z',
+      updatedAt: '2026-01-02T00:00:00.000Z',
     }
-    vi.stubGlobal('fetch', async () => new Response(JSON.stringify(saved), { status: 200, headers: { 'Content-Type': 'application/json' } }))
+    vi.stubGlobal(
+      'fetch',
+      async () => new Response(JSON.stringify(saved), { status: 200, headers: { 'Content-Type': 'application/json' } }),
+    )
     const { router, planner } = await mountPlanner('/planner/7', { route: true })
     await flushPromises()
     await router.push('/parts')
@@ -192,10 +225,22 @@ describe('opening a sheet that was open before', () => {
 describe('emptying the build of an open sheet', () => {
   it('leaves it empty (an edit) instead of filling it from the sheet again', async () => {
     const saved = {
-      id: 7, name: 'Bay 3', slots: { block: 'ZX-BL-1' }, targetPowerKw: null, fuelOctane: null, chassisModelYear: null, vin: null,
-      notes: '', owner: { id: 1, name: 'A. Tech' }, createdAt: '2026-01-01T00:00:00.000Z', updatedAt: '2026-01-02T00:00:00.000Z',
+      id: 7,
+      name: 'Bay 3',
+      slots: { block: 'ZX-BL-1' },
+      targetPowerKw: null,
+      fuelOctane: null,
+      chassisModelYear: null,
+      vin: null,
+      notes: '',
+      owner: { id: 1, name: 'A. Tech' },
+      createdAt: '2026-01-01T00:00:00.000Z',
+      updatedAt: '2026-01-02T00:00:00.000Z',
     }
-    vi.stubGlobal('fetch', async () => new Response(JSON.stringify(saved), { status: 200, headers: { 'Content-Type': 'application/json' } }))
+    vi.stubGlobal(
+      'fetch',
+      async () => new Response(JSON.stringify(saved), { status: 200, headers: { 'Content-Type': 'application/json' } }),
+    )
     const { router, build } = await mountPlanner('/planner/7', { route: true })
     await flushPromises()
     await build().setSlot('block', null)

@@ -37,7 +37,7 @@ describe('planner store', () => {
   beforeEach(() => setActivePinia(createPinia()))
   afterEach(() => vi.unstubAllGlobals())
 
-  it('gives a saved sheet\'s build as the address holds it, leaving out empty context', () => {
+  it("gives a saved sheet's build as the address holds it, leaving out empty context", () => {
     expect(plannerToQuery(sheetState(sheet()))).toEqual({ block: 'ZY-BL-1', head: 'ZX-HD-2', power: '110' })
   })
 
@@ -51,10 +51,15 @@ describe('planner store', () => {
       chassisModelYear: null,
       vin: null,
     })
-    expect(planner.sheetInput(state, 'Copy', 'n')).toEqual({ slots: { block: 'ZY-BL-1', head: 'ZX-HD-2' }, targetPowerKw: 110, name: 'Copy', notes: 'n' })
+    expect(planner.sheetInput(state, 'Copy', 'n')).toEqual({
+      slots: { block: 'ZY-BL-1', head: 'ZX-HD-2' },
+      targetPowerKw: 110,
+      name: 'Copy',
+      notes: 'n',
+    })
   })
 
-  it('puts the server\'s field messages next to the slot or field they name', () => {
+  it("puts the server's field messages next to the slot or field they name", () => {
     const planner = usePlannerStore()
     planner.evaluationError = new ApiError(400, 'bad_request', 'Bad build', [
       { path: 'slots.head', message: 'ZY-BL-1 is a cylinder block, not a cylinder head.' },

@@ -33,7 +33,10 @@ function errorAnswer(status: number, code: string, message: string, details?: { 
 /** The view as the layout shows it: with the app's one Toast beside it. */
 async function mountView() {
   const Host = defineComponent({ render: () => [h(Toast), h(UsersView)] })
-  const wrapper = mount(Host, { global: { plugins: [PrimeVue, ToastService, ConfirmationService], stubs: { DataTable: true, Column: true } }, attachTo: document.body })
+  const wrapper = mount(Host, {
+    global: { plugins: [PrimeVue, ToastService, ConfirmationService], stubs: { DataTable: true, Column: true } },
+    attachTo: document.body,
+  })
   await flushPromises()
   return wrapper
 }
@@ -77,8 +80,12 @@ describe('UsersView, adding a user', () => {
     wrapper.unmount()
   })
 
-  it('puts the server\'s field message next to its field and nothing in the toast', async () => {
-    stubServer(() => errorAnswer(409, 'conflict', 'A user with e-mail new.tech@fitwright.test exists already.', [{ path: 'email', message: 'This e-mail is taken.' }]))
+  it("puts the server's field message next to its field and nothing in the toast", async () => {
+    stubServer(() =>
+      errorAnswer(409, 'conflict', 'A user with e-mail new.tech@fitwright.test exists already.', [
+        { path: 'email', message: 'This e-mail is taken.' },
+      ]),
+    )
     const wrapper = await mountView()
 
     await addUser(wrapper)
@@ -109,7 +116,12 @@ describe('UsersView, adding a user', () => {
     await addUser(wrapper)
 
     const post = calls.find((call) => call.method === 'POST')
-    expect(post?.body).toEqual({ email: 'new.tech@fitwright.test', name: 'New Tech', role: 'counter', password: 'a-long-enough-passphrase-9' })
+    expect(post?.body).toEqual({
+      email: 'new.tech@fitwright.test',
+      name: 'New Tech',
+      role: 'counter',
+      password: 'a-long-enough-passphrase-9',
+    })
     expect(document.body.textContent).toContain('Added New Tech')
     expect((wrapper.get('#new-user-email').element as HTMLInputElement).value).toBe('')
     expect(calls.filter((call) => call.method === 'GET')).toHaveLength(2)
@@ -145,7 +157,9 @@ describe('UsersView, changing a role', () => {
   }
 
   const roleSelect = (wrapper: Awaited<ReturnType<typeof mountWithDialogs>>, name: string) =>
-    wrapper.findAllComponents(Select).find((select) => select.attributes('aria-label') === `Role of ${name}` || select.props('ariaLabel') === `Role of ${name}`)!
+    wrapper
+      .findAllComponents(Select)
+      .find((select) => select.attributes('aria-label') === `Role of ${name}` || select.props('ariaLabel') === `Role of ${name}`)!
 
   async function chooseRole(wrapper: Awaited<ReturnType<typeof mountWithDialogs>>, name: string, role: string) {
     roleSelect(wrapper, name).vm.$emit('update:modelValue', role)
@@ -153,7 +167,9 @@ describe('UsersView, changing a role', () => {
   }
 
   const dialogButton = (label: string) =>
-    [...document.body.querySelectorAll<HTMLButtonElement>('[role="alertdialog"] button')].find((button) => button.textContent?.trim() === label)
+    [...document.body.querySelectorAll<HTMLButtonElement>('[role="alertdialog"] button')].find(
+      (button) => button.textContent?.trim() === label,
+    )
 
   it('asks before changing a role and changes nothing when kept', async () => {
     const patches = stubUsers(() => new Response('{}', { status: 200 }))

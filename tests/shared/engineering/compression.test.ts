@@ -66,9 +66,13 @@ describe(`staticCompressionRatio (${HEYWOOD})`, () => {
   it.each([
     ['45 cc chamber, 1.2 mm gasket, 5 cc dish', 9.569, bottomEnd()],
     ['52 cc chamber (another head)', 8.651, bottomEnd({ chamberCc: 52 })],
-    ['52 cc chamber with a 0.7 mm gasket: a gasket cannot fully make up for the head', 9.016, bottomEnd({ chamberCc: 52, gasketThicknessMm: 0.7 })],
+    [
+      '52 cc chamber with a 0.7 mm gasket: a gasket cannot fully make up for the head',
+      9.016,
+      bottomEnd({ chamberCc: 52, gasketThicknessMm: 0.7 }),
+    ],
     ['45 cc chamber with a 5 cc dome instead of the dish', 11.344, bottomEnd({ pistonVolumeCc: -5 })],
-    ['45 cc chamber, 5 cc dish, 0.7 mm gasket', 10.030, bottomEnd({ gasketThicknessMm: 0.7 })],
+    ['45 cc chamber, 5 cc dish, 0.7 mm gasket', 10.03, bottomEnd({ gasketThicknessMm: 0.7 })],
     ['45 cc chamber, 5 cc dish, 1.6 mm gasket', 9.234, bottomEnd({ gasketThicknessMm: 1.6 })],
     ['inch build: 4.000 × 3.480 in, 64 cc, 4.100 × 0.041 in gasket, 0.025 in deck, 5 cc reliefs', 9.632, inchBuild],
   ])('%s gives %f:1', (_label, expected, input) => {
@@ -77,15 +81,11 @@ describe(`staticCompressionRatio (${HEYWOOD})`, () => {
 
   it('falls as the gasket gets thicker', () => {
     fc.assert(
-      fc.property(
-        fc.double({ min: 0, max: 3, noNaN: true }),
-        fc.double({ min: 0.01, max: 2, noNaN: true }),
-        (thin, extra) => {
-          const thinner = staticCompressionRatio(bottomEnd({ gasketThicknessMm: thin })).ratio
-          const thicker = staticCompressionRatio(bottomEnd({ gasketThicknessMm: thin + extra })).ratio
-          expect(thicker).toBeLessThan(thinner)
-        },
-      ),
+      fc.property(fc.double({ min: 0, max: 3, noNaN: true }), fc.double({ min: 0.01, max: 2, noNaN: true }), (thin, extra) => {
+        const thinner = staticCompressionRatio(bottomEnd({ gasketThicknessMm: thin })).ratio
+        const thicker = staticCompressionRatio(bottomEnd({ gasketThicknessMm: thin + extra })).ratio
+        expect(thicker).toBeLessThan(thinner)
+      }),
     )
   })
 
@@ -132,7 +132,7 @@ describe(`chamberForRatio (${HEYWOOD})`, () => {
     within(chamberForRatio(rest, 10.0), 42.211, CC_TOLERANCE)
   })
 
-  it('inverts staticCompressionRatio: the chamber that gives a build\'s ratio is that build\'s chamber', () => {
+  it("inverts staticCompressionRatio: the chamber that gives a build's ratio is that build's chamber", () => {
     fc.assert(
       fc.property(
         fc.double({ min: 60, max: 110, noNaN: true }),
@@ -142,7 +142,14 @@ describe(`chamberForRatio (${HEYWOOD})`, () => {
         fc.double({ min: -5, max: 15, noNaN: true }),
         fc.double({ min: 20, max: 90, noNaN: true }),
         (bore, stroke, gasket, deck, piston, chamberCc) => {
-          const rest = { boreMm: bore, strokeMm: stroke, gasketBoreMm: bore + 1, gasketThicknessMm: gasket, deckClearanceMm: deck, pistonVolumeCc: piston }
+          const rest = {
+            boreMm: bore,
+            strokeMm: stroke,
+            gasketBoreMm: bore + 1,
+            gasketThicknessMm: gasket,
+            deckClearanceMm: deck,
+            pistonVolumeCc: piston,
+          }
           const { ratio } = staticCompressionRatio({ ...rest, chamberCc })
           within(chamberForRatio(rest, ratio), chamberCc, 1e-9)
         },

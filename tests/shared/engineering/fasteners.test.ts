@@ -195,7 +195,7 @@ describe('spacerFix (common practice; ordinary bolts only)', () => {
     expect(spacerFix(m10IntoAluminium({ boltLengthMm }), [1, 2, 5, 7, 10])).toBeNull()
   })
 
-  it('does not reorder the caller\'s options', () => {
+  it("does not reorder the caller's options", () => {
     const options = [10, 2, 7]
     spacerFix(m10IntoAluminium(), options)
     expect(options).toEqual([10, 2, 7])

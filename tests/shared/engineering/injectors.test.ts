@@ -67,7 +67,7 @@ describe('injector sizing (common practice formula)', () => {
 describe('mass flow to volume flow (common practice)', () => {
   // The trade's shortcut "lb/h × 10.5 = cc/min" (common practice) is 453.59237 / (60 · 0.72) = 10.49982
   // by hand, so the default density is the one behind it; the tolerance is tighter than the section's.
-  it('the default density reproduces the trade\'s × 10.5 shortcut: 1 lb/h is 10.4998 cc/min', () => {
+  it("the default density reproduces the trade's × 10.5 shortcut: 1 lb/h is 10.4998 cc/min", () => {
     within(lbPerHourToCcPerMin(1), 10.4998, 0.00005)
   })
 

@@ -66,10 +66,15 @@ describe(`vinCheckDigit and validateVin (${CHECK_DIGIT_RULE})`, () => {
 
   it('catches any single mistyped character that changes its value', () => {
     fc.assert(
-      fc.property(anyVin, fc.integer({ min: 0, max: 16 }).filter((i) => i !== 8), fc.constantFrom(...ALLOWED), (vin, index, char) => {
-        fc.pre(valueOf(char) !== valueOf(vin.charAt(index)))
-        expect(validateVin(replaceAt(vin, index, char)).checkDigitOk).toBe(false)
-      }),
+      fc.property(
+        anyVin,
+        fc.integer({ min: 0, max: 16 }).filter((i) => i !== 8),
+        fc.constantFrom(...ALLOWED),
+        (vin, index, char) => {
+          fc.pre(valueOf(char) !== valueOf(vin.charAt(index)))
+          expect(validateVin(replaceAt(vin, index, char)).checkDigitOk).toBe(false)
+        },
+      ),
     )
   })
 })
