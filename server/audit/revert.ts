@@ -4,6 +4,7 @@ import { AppError } from '../errors/app-error'
 import type { ImportRecordType } from './import-change.entity'
 import { SQL_NOW, type PreviousRows } from './change-log'
 import { rewritePartWords } from '../catalogue/part-word-writer'
+import type { CatalogueChanges } from '../fitment/fit-graph'
 
 type ChangeRow = { recordType: ImportRecordType; recordId: number; action: 'updated' | 'deleted'; previousValues: string }
 type Blocker = { batchId: number | null; fileName: string | null; what: string }
@@ -87,9 +88,10 @@ function restorer(db: Database.Database) {
 /**
  * Puts back the catalogue as it was before the batch: records it updated get
  * their previous rows, records it created go, records it deleted return (with
- * their ids). Synchronous, for the caller's transaction.
+ * their ids). Synchronous, for the caller's transaction. Answers the parts,
+ * links and identities it touched, for the fit graph index.
  */
-export function revertBatch(db: Database.Database, batchId: number, userName: string) {
+export function revertBatch(db: Database.Database, batchId: number, userName: string): Required<CatalogueChanges> {
   const batch = db.prepare('SELECT status FROM import_batch WHERE id = ?').get(batchId) as { status: string } | undefined
   if (!batch) throw AppError.notFound(`No import batch ${batchId}.`)
   if (batch.status === 'reverted') throw new AppError(409, 'already_reverted', `Batch ${batchId} is already reverted.`)
@@ -120,13 +122,19 @@ export function revertBatch(db: Database.Database, batchId: number, userName: st
       `The records this batch replaced point at ${missing.join(', ')}, removed since by another revert, so they cannot be put back exactly.`,
     )
   }
+  const ids = (table: string) =>
+    (db.prepare(`SELECT id FROM ${table} WHERE batchId = ?`).all(batchId) as { id: number }[]).map((row) => row.id)
+  const changed = (type: ImportRecordType) => changes.filter((change) => change.type === type).map((change) => change.recordId)
+  const touched = {
+    parts: [...ids('part'), ...changed('part')],
+    links: [...ids('link'), ...changed('link')],
+    identities: [...ids('part_identity'), ...changed('identity')],
+  }
   const restore = restorer(db)
   for (const change of changes) if (change.action === 'updated') restore(change.type, change.recordId, 'updated', change.rows)
   for (const table of ['link', 'part_identity', 'part', 'modification']) db.prepare(`DELETE FROM ${table} WHERE batchId = ?`).run(batchId)
   for (const change of changes) if (change.action === 'deleted') restore(change.type, change.recordId, 'deleted', change.rows)
-  rewritePartWords(
-    db,
-    changes.filter((change) => change.type === 'part').map((change) => change.recordId),
-  )
+  rewritePartWords(db, changed('part'))
   db.prepare(`UPDATE import_batch SET status = 'reverted', revertedAt = ${SQL_NOW}, revertedByName = ? WHERE id = ?`).run(userName, batchId)
+  return touched
 }

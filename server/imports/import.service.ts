@@ -14,7 +14,7 @@ import { CsvFileError, readCsvStream, type CsvReadSummary } from './csv/csv-stre
 import { inTransaction, sqliteConnection } from '../db/sqlite-connection'
 import { ImportBatchEntity } from '../audit/import-batch.entity'
 import { AppError } from '../errors/app-error'
-import type { FitGraphIndex } from '../fitment/fit-graph'
+import type { CatalogueChanges, FitGraphIndex } from '../fitment/fit-graph'
 import { insertBatch } from '../audit/change-log'
 import { LISTED, type ChangeList } from './import-change-list'
 import { issueDetails } from './import-issues'
@@ -40,7 +40,7 @@ export type ImportRun = {
   onProgress?: (progress: ImportProgress) => void
 }
 
-type Planned = { changes: ChangeList; errors: ImportIssue[]; write: (batchId: number) => void }
+type Planned = { changes: ChangeList; errors: ImportIssue[]; write: (batchId: number) => CatalogueChanges }
 
 type Work = { rows: PartRows | LinkRows; plan: (db: Database.Database) => Planned }
 
@@ -51,7 +51,7 @@ function job(type: ImportType): Work {
       rows,
       plan: (db: Database.Database): Planned => {
         const plan = planParts(db, rows)
-        return { changes: plan.changes, errors: plan.issues, write: (batchId) => writeParts(db, plan, batchId) }
+        return { changes: plan.changes, errors: plan.issues, write: (batchId) => ({ parts: writeParts(db, plan, batchId) }) }
       },
     }
   }
@@ -165,13 +165,12 @@ export class ImportService {
         counts,
         validRowsOnly: rejected > 0,
       })
-      planned.write(batchId)
-      return result(planned, batchId)
+      return { answer: result(planned, batchId), touched: planned.write(batchId) }
     })
     this.previews.drop(userId, input.type)
-    await this.graphIndex.invalidate()
+    await this.graphIndex.applyChanges(committed.touched)
     report('write', summary.rows, summary.rows)
-    return committed
+    return committed.answer
   }
 
   async list(): Promise<ImportBatch[]> {
@@ -181,8 +180,8 @@ export class ImportService {
 
   /** Restores the catalogue as it was before the batch, or says which later write stands in the way. */
   async revert(batchId: number, user: ImportUser): Promise<ImportBatch> {
-    await inTransaction(this.dataSource, (db) => revertBatch(db, batchId, user.name))
-    await this.graphIndex.invalidate()
+    const touched = await inTransaction(this.dataSource, (db) => revertBatch(db, batchId, user.name))
+    await this.graphIndex.applyChanges(touched)
     return toImportBatch(await this.dataSource.getRepository(ImportBatchEntity).findOneByOrFail({ id: batchId }))
   }
 }

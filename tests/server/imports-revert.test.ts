@@ -122,3 +122,36 @@ describe('GET /api/imports', () => {
     expect(response.body[0].id).toBeGreaterThan(response.body[1].id)
   })
 })
+
+describe('imports and reverts reach the fit graph by the rows they touched', () => {
+  it('shows a committed links batch in what fits and path, and takes it back on revert, without loading the graph again', async () => {
+    const parts = await commit('part_number,kind,name\nTM-X-71,other,Spacer ring\nTM-X-72,other,Dowel sleeve\n', 'parts')
+    const loads = t.services.graphIndex.loads
+    const links = await commit(
+      `${LINKS}\nTM-X-71,TM-HD-2000,fits,,Ring seats in the head's dowel bore.,\nTM-X-72,TM-X-71,fits,,,\nTM-X-72,TM-BL-2000,does-not-fit,,Sleeve too long for the block.,\n`,
+      'links',
+    )
+    const fits = async (part: string) =>
+      fitResults((await editor.get(`/api/parts/${part}/fits?inferred=0&pageSize=200`)).body) as {
+        part: { partNumber: string }
+        relation: string
+      }[]
+    expect((await fits('TM-HD-2000')).map((r) => r.part.partNumber)).toContain('TM-X-71')
+    // TM-BL-2001 is the same block as TM-BL-2000 in the demo, so it answers too.
+    expect((await fits('TM-X-72')).map((r) => [r.part.partNumber, r.relation]).sort()).toEqual([
+      ['TM-BL-2000', 'does-not-fit'],
+      ['TM-BL-2001', 'does-not-fit'],
+      ['TM-X-71', 'fits'],
+    ])
+    expect((await editor.get('/api/graph/path?from=TM-X-72&to=TM-HD-2000')).body.found).toBe(true)
+
+    expect((await editor.post(`/api/imports/${links}/revert`)).status).toBe(200)
+    expect((await fits('TM-HD-2000')).map((r) => r.part.partNumber)).not.toContain('TM-X-71')
+    expect(await fits('TM-X-72')).toEqual([])
+    expect((await editor.get('/api/graph/path?from=TM-X-72&to=TM-HD-2000')).body.found).toBe(false)
+
+    expect((await editor.post(`/api/imports/${parts}/revert`)).status).toBe(200)
+    expect((await editor.get('/api/parts/TM-X-71/fits')).status).toBe(404)
+    expect(t.services.graphIndex.loads).toBe(loads)
+  })
+})

@@ -2,9 +2,16 @@ import type Database from 'better-sqlite3'
 import { SQL_NOW, changeRecorder } from '../../audit/change-log'
 import type { LinksPlan } from './link-plan'
 import { proposedModificationInserter } from '../../fitment/link-rows'
+import type { CatalogueChanges } from '../../fitment/fit-graph'
 
-/** Writes a links plan with prepared statements; the caller holds the transaction. */
-export function writeLinks(db: Database.Database, plan: LinksPlan, batchId: number) {
+/** Writes a links plan with prepared statements; the caller holds the transaction. Answers the links and identities it touched. */
+export function writeLinks(
+  db: Database.Database,
+  plan: LinksPlan,
+  batchId: number,
+): Required<Pick<CatalogueChanges, 'links' | 'identities'>> {
+  const links: number[] = []
+  const identities: number[] = []
   const insertModification = proposedModificationInserter(db, 'import')
   const insertLink = db.prepare(
     "INSERT INTO link (partAId, partBId, relation, note, source, status, batchId) VALUES (?, ?, ?, ?, ?, 'approved', ?)",
@@ -31,15 +38,18 @@ export function writeLinks(db: Database.Database, plan: LinksPlan, batchId: numb
   for (const stored of plan.linkDeletes) {
     record('link', stored.record.id, 'deleted', stored.record.batchId, { link: [stored.record], link_modification: stored.mods })
     deleteLink.run(stored.record.id)
+    links.push(stored.record.id)
   }
   for (const stored of plan.identityDeletes) {
     record('identity', stored.id, 'deleted', stored.batchId, { part_identity: [stored] })
     deleteIdentity.run(stored.id)
+    identities.push(stored.id)
   }
   for (const { stored, values } of plan.linkUpdates) {
     const { id } = stored.record
     record('link', id, 'updated', stored.record.batchId, { link: [stored.record], link_modification: stored.mods })
     updateLink.run(values.relation, values.note, values.source, batchId, id)
+    links.push(id)
     if (stored.names.join('\n') !== values.modifications.join('\n')) {
       deleteLinkMods.run(id)
       linkMods(id, values.modifications)
@@ -48,10 +58,15 @@ export function writeLinks(db: Database.Database, plan: LinksPlan, batchId: numb
   for (const { stored, note, source } of plan.identityUpdates) {
     record('identity', stored.id, 'updated', stored.batchId, { part_identity: [stored] })
     updateIdentity.run(note, source, batchId, stored.id)
+    identities.push(stored.id)
   }
   for (const { a, b, values } of plan.linkCreates) {
     const linkId = Number(insertLink.run(a, b, values.relation, values.note, values.source, batchId).lastInsertRowid)
     linkMods(linkId, values.modifications)
+    links.push(linkId)
   }
-  for (const { a, b, note, source } of plan.identityCreates) insertIdentity.run(a, b, note, source, batchId)
+  for (const { a, b, note, source } of plan.identityCreates) {
+    identities.push(Number(insertIdentity.run(a, b, note, source, batchId).lastInsertRowid))
+  }
+  return { links, identities }
 }

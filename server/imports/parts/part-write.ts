@@ -5,8 +5,8 @@ import type { PartsPlan } from './part-plan'
 import { markRows, partColumns } from '../../catalogue/part-writer'
 import { rewritePartWords } from '../../catalogue/part-word-writer'
 
-/** Writes a parts plan with prepared statements; the caller holds the transaction. */
-export function writeParts(db: Database.Database, plan: PartsPlan, batchId: number) {
+/** Writes a parts plan with prepared statements; the caller holds the transaction. Answers the ids of the parts written. */
+export function writeParts(db: Database.Database, plan: PartsPlan, batchId: number): number[] {
   const insertPart = db.prepare(
     'INSERT INTO part (partNumber, partKey, kind, name, family, yearFrom, yearTo, notes, attributes, batchId) VALUES (?, ?, ?, ?, ?, ?, ?, ?, ?, ?)',
   )
@@ -48,4 +48,5 @@ export function writeParts(db: Database.Database, plan: PartsPlan, batchId: numb
     writeMarks(id, part)
   }
   rewritePartWords(db, written)
+  return written
 }
