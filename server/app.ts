@@ -15,6 +15,7 @@ import { buildRoutes } from './builds/builds.routes'
 import { fitmentRoutes } from './fitment/fitment.routes'
 import { linkRoutes } from './fitment/links.routes'
 import { importRoutes } from './imports/imports.routes'
+import { fieldReportRoutes } from './field-reports/field-reports.routes'
 import type { Services } from './services'
 
 export type AppOptions = {
@@ -45,6 +46,7 @@ export async function createApp({ config, dataSource, services, version, clientD
   api.use(linkRoutes(services.links))
   api.use(userRoutes(services.users))
   api.use(importRoutes(services, config))
+  api.use(fieldReportRoutes(services.fieldReports, { photoMaxBytes: config.photoMaxBytes }))
   api.use(requireSignIn, notFoundApi)
   app.use('/api', api)
 

@@ -46,6 +46,8 @@ export async function prepareDatabase(config: AppConfig): Promise<Prepared> {
   if (config.firstAdmin && (await services.users.count()) === 0) {
     await services.users.create({ ...config.firstAdmin, name: 'Administrator', role: 'admin' })
   }
+  // A crash mid-upload leaves temporary photo files behind; nothing refers to them.
+  await services.photos.removeStaleTemporaries()
   // The fit graph is read once, here, before the app answers; writes then apply to it as deltas.
   await services.graphIndex.load()
   return { dataSource, rules, services, seeded }

@@ -15,6 +15,10 @@ import { ImportService } from './imports/import.service'
 import { ModificationService } from './catalogue/modification.service'
 import { PartService } from './catalogue/part.service'
 import { UserService } from './users/user.service'
+import { FieldReportRepository } from './field-reports/field-report.repository'
+import { FieldReportService } from './field-reports/field-report.service'
+import { PhotoStorage } from './field-reports/photo-storage'
+import { databaseOf } from './db/sqlite-connection'
 
 /** Every service, built once per app around one data source and one rule book. */
 export function createServices(dataSource: DataSource, config: AppConfig, rules: RuleBook) {
@@ -22,6 +26,7 @@ export function createServices(dataSource: DataSource, config: AppConfig, rules:
   const graphIndex = new FitGraphIndex(dataSource)
   const modifications = new ModificationService(dataSource)
   const evaluation = new BuildEvaluationService(dataSource, parts, graphIndex, rules, modifications)
+  const photos = new PhotoStorage(config.uploadDir)
   const completion = new BuildCompletionService(dataSource, parts, graphIndex, evaluation, modifications)
   return {
     rules,
@@ -38,6 +43,8 @@ export function createServices(dataSource: DataSource, config: AppConfig, rules:
     links: new LinkService(dataSource, parts, graphIndex),
     imports: new ImportService(dataSource, { maxRows: config.importMaxRows }, graphIndex),
     exports: new ExportService(dataSource),
+    photos,
+    fieldReports: new FieldReportService(new FieldReportRepository(databaseOf(dataSource)), parts, photos),
   }
 }
 export type Services = ReturnType<typeof createServices>

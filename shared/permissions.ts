@@ -12,6 +12,8 @@ export const PERMISSIONS = {
   'catalogue.edit': ['admin', 'editor'],
   'imports.manage': ['admin', 'editor'],
   'users.manage': ['admin'],
+  'field-reports.file': ['admin', 'editor', 'tech'],
+  'field-reports.review': ['admin', 'editor'],
 } as const satisfies Record<string, readonly Role[]>
 
 export type Permission = keyof typeof PERMISSIONS

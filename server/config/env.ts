@@ -24,6 +24,12 @@ const envSchema = z.object({
     .positive()
     .default(50 * 1024 * 1024),
   FITWRIGHT_IMPORT_MAX_ROWS: z.coerce.number().int().positive().default(500_000),
+  FITWRIGHT_UPLOAD_DIR: z.string().min(1).default('data/uploads'),
+  FITWRIGHT_PHOTO_MAX_BYTES: z.coerce
+    .number()
+    .int()
+    .positive()
+    .default(10 * 1024 * 1024),
 })
 
 export type AppConfig = {
@@ -37,6 +43,9 @@ export type AppConfig = {
   sessionSecret?: string
   importMaxBytes: number
   importMaxRows: number
+  /** Field-report photos (re-encoded) are kept here. */
+  uploadDir: string
+  photoMaxBytes: number
   /** Failed sign-ins allowed per address and e-mail in 15 minutes. */
   loginAttempts: number
   /** First administrator, created when the database has no users (for use without the demo). */
@@ -61,6 +70,8 @@ export function loadConfig(env: NodeJS.ProcessEnv = process.env): AppConfig {
     sessionSecret: value.FITWRIGHT_SESSION_SECRET,
     importMaxBytes: value.FITWRIGHT_IMPORT_MAX_BYTES,
     importMaxRows: value.FITWRIGHT_IMPORT_MAX_ROWS,
+    uploadDir: value.FITWRIGHT_UPLOAD_DIR,
+    photoMaxBytes: value.FITWRIGHT_PHOTO_MAX_BYTES,
     loginAttempts: value.FITWRIGHT_LOGIN_ATTEMPTS,
     firstAdmin:
       value.FITWRIGHT_ADMIN_EMAIL && value.FITWRIGHT_ADMIN_PASSWORD

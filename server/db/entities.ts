@@ -10,6 +10,8 @@ import { PartEntity } from '../catalogue/part.entity'
 import { PartWordEntity } from '../catalogue/part-word.entity'
 import { SessionEntity } from '../auth/session.entity'
 import { UserEntity } from '../users/user.entity'
+import { FieldReportEntity } from '../field-reports/field-report.entity'
+import { FieldReportPhotoEntity } from '../field-reports/field-report-photo.entity'
 
 export const entities = [
   UserEntity,
@@ -24,4 +26,6 @@ export const entities = [
   BuildSheetEntity,
   ImportBatchEntity,
   ImportChangeEntity,
+  FieldReportEntity,
+  FieldReportPhotoEntity,
 ]

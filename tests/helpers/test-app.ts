@@ -49,6 +49,7 @@ export async function createTestApp(options: { demo?: boolean; env?: Record<stri
     NODE_ENV: 'test',
     FITWRIGHT_DB_PATH: path.join(dir, 'test.sqlite'),
     FITWRIGHT_DEMO: options.demo === false ? '0' : '1',
+    FITWRIGHT_UPLOAD_DIR: path.join(dir, 'uploads'),
     ...options.env,
   })
   const { dataSource, services } = await prepareDatabase(config)

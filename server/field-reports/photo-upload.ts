@@ -1,0 +1,43 @@
+import { mkdirSync } from 'node:fs'
+import { rm } from 'node:fs/promises'
+import { tmpdir } from 'node:os'
+import path from 'node:path'
+import type { NextFunction, Request, RequestHandler, Response } from 'express'
+import multer from 'multer'
+import { FIELD_REPORT_MAX_PHOTOS } from '../../shared/schemas/field-reports'
+import { AppError } from '../errors/app-error'
+
+function uploadError(error: unknown, maxBytes: number): unknown {
+  if (!(error instanceof multer.MulterError)) return error
+  const mb = Math.round((maxBytes / 1024 / 1024) * 10) / 10
+  const messages: Partial<Record<multer.ErrorCode, [number, string]>> = {
+    LIMIT_FILE_SIZE: [413, `A photo is larger than ${mb} MB, the most one photo may be.`],
+    LIMIT_FILE_COUNT: [400, `Send at most ${FIELD_REPORT_MAX_PHOTOS} photos with one report.`],
+    LIMIT_UNEXPECTED_FILE: [400, 'Send photos in the form field "photos" and the report as the field "report".'],
+    LIMIT_FIELD_VALUE: [413, 'The report field is too long.'],
+  }
+  const [status, message] = messages[error.code] ?? [400, `The upload was not understood: ${error.message}.`]
+  return new AppError(status, 'bad_upload', message)
+}
+
+/**
+ * A report as multipart: the `report` JSON field and up to eight `photos`,
+ * each streamed to a temporary file; the files go when the answer has been sent.
+ */
+export function photoUpload(maxBytes: number): RequestHandler {
+  const dir = path.join(tmpdir(), 'fitwright-uploads')
+  mkdirSync(dir, { recursive: true })
+  const fields = multer({
+    dest: dir,
+    defParamCharset: 'utf8',
+    limits: { fileSize: maxBytes, files: FIELD_REPORT_MAX_PHOTOS, fields: 2, fieldSize: 256 * 1024 },
+  }).array('photos', FIELD_REPORT_MAX_PHOTOS)
+  return (req: Request, res: Response, next: NextFunction) => {
+    const cleanUp = () => {
+      const files = (req.files as Express.Multer.File[] | undefined) ?? []
+      void Promise.all(files.map((file) => rm(file.path, { force: true })))
+    }
+    res.on('close', cleanUp)
+    fields(req, res, (error?: unknown) => next(error ? uploadError(error, maxBytes) : undefined))
+  }
+}
