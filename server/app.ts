@@ -46,7 +46,7 @@ export async function createApp({ config, dataSource, services, version, clientD
   api.use(linkRoutes(services.links))
   api.use(userRoutes(services.users))
   api.use(importRoutes(services, config))
-  api.use(fieldReportRoutes(services.fieldReports, { photoMaxBytes: config.photoMaxBytes }))
+  api.use(fieldReportRoutes(services, { photoMaxBytes: config.photoMaxBytes }))
   api.use(requireSignIn, notFoundApi)
   app.use('/api', api)
 

@@ -18,6 +18,8 @@ import { UserService } from './users/user.service'
 import { FieldReportRepository } from './field-reports/field-report.repository'
 import { FieldReportService } from './field-reports/field-report.service'
 import { PhotoStorage } from './field-reports/photo-storage'
+import { FieldReportEvidence } from './field-reports/field-report-evidence'
+import { FieldReportReviewService } from './field-reports/field-report-review.service'
 import { databaseOf } from './db/sqlite-connection'
 
 /** Every service, built once per app around one data source and one rule book. */
@@ -27,6 +29,7 @@ export function createServices(dataSource: DataSource, config: AppConfig, rules:
   const modifications = new ModificationService(dataSource)
   const evaluation = new BuildEvaluationService(dataSource, parts, graphIndex, rules, modifications)
   const photos = new PhotoStorage(config.uploadDir)
+  const fieldReports = new FieldReportService(new FieldReportRepository(databaseOf(dataSource)), parts, photos)
   const completion = new BuildCompletionService(dataSource, parts, graphIndex, evaluation, modifications)
   return {
     rules,
@@ -34,7 +37,13 @@ export function createServices(dataSource: DataSource, config: AppConfig, rules:
     parts,
     graphIndex,
     modifications,
-    fitment: new FitmentService(parts, graphIndex, new InferredFits(dataSource, rules), modifications),
+    fitment: new FitmentService(
+      parts,
+      graphIndex,
+      new InferredFits(dataSource, rules),
+      modifications,
+      new FieldReportEvidence(databaseOf(dataSource)),
+    ),
     graph: new GraphService(parts, graphIndex),
     evaluation,
     completion,
@@ -44,7 +53,8 @@ export function createServices(dataSource: DataSource, config: AppConfig, rules:
     imports: new ImportService(dataSource, { maxRows: config.importMaxRows }, graphIndex),
     exports: new ExportService(dataSource),
     photos,
-    fieldReports: new FieldReportService(new FieldReportRepository(databaseOf(dataSource)), parts, photos),
+    fieldReports,
+    fieldReportReview: new FieldReportReviewService(dataSource, fieldReports, graphIndex),
   }
 }
 export type Services = ReturnType<typeof createServices>

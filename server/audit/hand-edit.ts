@@ -9,10 +9,16 @@ export type Editor = { id: number; name: string }
  * in the batch history, can be reverted, and blocks the revert of an earlier
  * batch whose records it changed (so no revert silently undoes it).
  */
-export function handEdit(db: Database.Database, editor: Editor, counts: { created: number; updated: number }) {
+export function handEdit(
+  db: Database.Database,
+  editor: Editor,
+  counts: { created: number; updated: number },
+  /** What the batch list shows in place of a file name. */
+  label = 'changed by hand',
+) {
   const batchId = insertBatch(db, {
     type: 'links',
-    fileName: 'changed by hand',
+    fileName: label,
     fileHash: 'hand edit',
     user: editor,
     counts: { ...counts, unchanged: 0, rejected: 0 },

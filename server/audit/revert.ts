@@ -31,7 +31,9 @@ function findBlockers(db: Database.Database, batchId: number): Blocker[] {
       WHERE ${outside('i')} AND (i.partAId IN (${created('part', 'part')}) OR i.partBId IN (${created('part', 'part')}))
     UNION SELECT l.batchId, 'uses modifications this batch proposed' FROM link_modification lm
       JOIN link l ON l.id = lm.linkId JOIN modification m ON m.id = lm.modificationId
-      WHERE m.batchId = @batch AND ${outside('l')}`
+      WHERE m.batchId = @batch AND ${outside('l')}
+    UNION SELECT e.batchId, 'counts field reports on links this batch added' FROM field_report_link e
+      WHERE e.batchId != @batch AND e.linkId IN (${created('link', 'link')})`
   const rows = db
     .prepare(`SELECT x.batchId, x.what, b.fileName FROM (${sql}) x LEFT JOIN import_batch b ON b.id = x.batchId`)
     .all({ batch: batchId }) as Blocker[]
@@ -132,6 +134,11 @@ export function revertBatch(db: Database.Database, batchId: number, userName: st
   }
   const restore = restorer(db)
   for (const change of changes) if (change.action === 'updated') restore(change.type, change.recordId, 'updated', change.rows)
+  // A field report's approval goes back to the queue with the links it wrote or confirmed.
+  db.prepare('DELETE FROM field_report_link WHERE "batchId" = ?').run(batchId)
+  db.prepare(
+    `UPDATE field_report SET "status" = 'submitted', "batchId" = NULL, "decidedByName" = NULL, "decidedAt" = NULL, "decisionNote" = '' WHERE "batchId" = ?`,
+  ).run(batchId)
   for (const table of ['link', 'part_identity', 'part', 'modification']) db.prepare(`DELETE FROM ${table} WHERE batchId = ?`).run(batchId)
   for (const change of changes) if (change.action === 'deleted') restore(change.type, change.recordId, 'deleted', change.rows)
   rewritePartWords(db, changed('part'))

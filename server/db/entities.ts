@@ -12,6 +12,7 @@ import { SessionEntity } from '../auth/session.entity'
 import { UserEntity } from '../users/user.entity'
 import { FieldReportEntity } from '../field-reports/field-report.entity'
 import { FieldReportPhotoEntity } from '../field-reports/field-report-photo.entity'
+import { FieldReportLinkEntity } from '../field-reports/field-report-link.entity'
 
 export const entities = [
   UserEntity,
@@ -28,4 +29,5 @@ export const entities = [
   ImportChangeEntity,
   FieldReportEntity,
   FieldReportPhotoEntity,
+  FieldReportLinkEntity,
 ]

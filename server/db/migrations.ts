@@ -1,11 +1,11 @@
+import { FieldReports1796211781089 } from '../migrations/1796211781089-FieldReports'
+import { FieldReports1796211781982 as PostgresFieldReports1796211781982 } from '../migrations/postgres/1796211781982-FieldReports'
 import { CatalogueChangeFeed1796197600000 } from '../migrations/postgres/1796197600000-CatalogueChangeFeed'
 import { Foundation1796197547678 as PostgresFoundation1796197547678 } from '../migrations/postgres/1796197547678-Foundation'
 import { CsvImport1796154117731 } from '../migrations/1796154117731-CsvImport'
 import { FitmentGraph1796151639561 } from '../migrations/1796151639561-FitmentGraph'
 import { Foundation1796150879975 } from '../migrations/1796150879975-Foundation'
 import { PartWords1796197875848 } from '../migrations/1796197875848-PartWords'
-import { FieldReports1796211590388 as PostgresFieldReports1796211590388 } from '../migrations/postgres/1796211590388-FieldReports'
-import { FieldReports1796211580517 } from '../migrations/1796211580517-FieldReports'
 
 /** SQLite's, in the order they run. */
 export const migrations = [
@@ -13,8 +13,8 @@ export const migrations = [
   FitmentGraph1796151639561,
   CsvImport1796154117731,
   PartWords1796197875848,
-  FieldReports1796211580517,
+  FieldReports1796211781089,
 ]
 
 /** PostgreSQL's, generated from the same entities (`npx tsx server/db/generate-migration.ts Name --postgres`). */
-export const postgresMigrations = [PostgresFoundation1796197547678, CatalogueChangeFeed1796197600000, PostgresFieldReports1796211590388]
+export const postgresMigrations = [PostgresFoundation1796197547678, CatalogueChangeFeed1796197600000, PostgresFieldReports1796211781982]

@@ -42,6 +42,10 @@ export class FieldReportEntity {
   @Column({ type: 'text', default: '' })
   decisionNote!: string
 
+  /** The batch the approval wrote; reverting it sends the report back to the queue. */
+  @Column({ type: 'integer', nullable: true })
+  batchId!: number | null
+
   @CreateDateColumn()
   createdAt!: Date
 }

@@ -9,6 +9,7 @@ import type { InferredFits } from './inferred-fits'
 import { reviewedFits, type ReviewedFit } from './graph-search'
 import type { ModificationService } from '../catalogue/modification.service'
 import type { PartService } from '../catalogue/part.service'
+import type { LinkEvidence } from '../field-reports/field-report-evidence'
 
 export type { FitsQuery }
 
@@ -21,6 +22,7 @@ export class FitmentService {
     private readonly graphIndex: FitGraphIndex,
     private readonly inferred: InferredFits,
     private readonly modifications: ModificationService,
+    private readonly evidence: { forLinks(linkIds: readonly number[]): Promise<Map<number, LinkEvidence>> },
   ) {}
 
   /**
@@ -68,6 +70,7 @@ export class FitmentService {
     groups.sort(compareGroups)
 
     const details = await loadChainDetails(graph, [...chains.values()])
+    const evidence = await this.evidence.forLinks([...chains.values()].map((chain) => chain.link.id))
     for (const [found, chain] of chains) {
       found.modificationNames = details.links.get(chain.link.id)?.modifications ?? []
       found.explanation = chainSteps(graph, chain, details)
@@ -91,6 +94,7 @@ export class FitmentService {
           ruleIds: found.ruleIds,
           modifications: found.modificationNames.flatMap((name) => mods.get(name) ?? []),
           explanation: found.explanation,
+          fieldReports: evidence.get(chains.get(found)?.link.id ?? -1) ?? { confirmed: 0, contradicted: 0 },
         },
       ]
     }

@@ -80,6 +80,8 @@ export const fitResultSchema = z.object({
   ruleIds: z.array(z.string()),
   modifications: z.array(modificationSchema),
   explanation: z.array(explanationStepSchema),
+  /** Approved field reports that found the same on a car, or found otherwise (the link is then worth a second look). */
+  fieldReports: z.object({ confirmed: z.number().int(), contradicted: z.number().int() }).default({ confirmed: 0, contradicted: 0 }),
 })
 export type FitResult = z.infer<typeof fitResultSchema>
 

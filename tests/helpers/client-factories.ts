@@ -20,7 +20,16 @@ export function makePart(partNumber: string, kind: PartKind, overrides: Partial<
 }
 
 export function makeFit(part: Part, relation: FitResult['relation'], review: FitResult['review'] = 'approved'): FitResult {
-  return { part, relation, decidedBy: review === 'inferred' ? 'rule' : 'link', review, ruleIds: [], modifications: [], explanation: [] }
+  return {
+    part,
+    relation,
+    decidedBy: review === 'inferred' ? 'rule' : 'link',
+    review,
+    ruleIds: [],
+    modifications: [],
+    explanation: [],
+    fieldReports: { confirmed: 0, contradicted: 0 },
+  }
 }
 
 export function makeCandidate(part: Part, relation: Candidate['relation'] = 'fits'): Candidate {
