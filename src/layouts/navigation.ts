@@ -19,6 +19,13 @@ export const NAVIGATION: NavigationLink[] = [
   { name: 'graph-home', label: 'Fit graph', icon: 'pi-sitemap', permission: 'catalogue.read', area: ['graph', 'graph-path'] },
   { name: 'planner', label: 'Build planner', icon: 'pi-wrench', permission: 'builds.evaluate', area: ['planner-sheet'] },
   { name: 'builds', label: 'Build sheets', icon: 'pi-folder-open', permission: 'builds.save' },
+  {
+    name: 'field-reports',
+    label: 'Field reports',
+    icon: 'pi-camera',
+    permission: 'field-reports.file',
+    area: ['field-report', 'field-report-new'],
+  },
   { name: 'users', label: 'Users', icon: 'pi-users', permission: 'users.manage' },
 ]
 

@@ -82,6 +82,24 @@ const router = createRouter({
           meta: { permission: 'catalogue.edit', title: 'Review proposed links' },
         },
         {
+          path: 'field-reports',
+          name: 'field-reports',
+          component: () => import('@/views/FieldReportsView.vue'),
+          meta: { permission: 'field-reports.file', title: 'Field reports' },
+        },
+        {
+          path: 'field-reports/new',
+          name: 'field-report-new',
+          component: () => import('@/views/FieldReportNewView.vue'),
+          meta: { permission: 'field-reports.file', title: 'Report a fit' },
+        },
+        {
+          path: 'field-reports/:id(\\d+)',
+          name: 'field-report',
+          component: () => import('@/views/FieldReportView.vue'),
+          meta: { permission: 'field-reports.file', title: 'Field report' },
+        },
+        {
           path: 'imports',
           name: 'imports',
           component: () => import('@/views/ImportsView.vue'),
