@@ -62,7 +62,7 @@ describe.skipIf(!run)('a tech reports a fit with a photo, an editor approves it,
     const row = page.locator('[data-part="TM-BL-2000"]').first()
     await expect.poll(() => row.textContent(), within).toContain('confirmed by 1 field report')
     await saveScreenshot(page, 'field-report-part-page')
-    expect(consoleErrors, consoleErrors.join("\n")).toEqual([])
+    expect(consoleErrors, consoleErrors.join('\n')).toEqual([])
   })
 
   it('fits the report form on a 768 px tablet', async () => {
