@@ -16,6 +16,7 @@ import { fitmentRoutes } from './fitment/fitment.routes'
 import { linkRoutes } from './fitment/links.routes'
 import { importRoutes } from './imports/imports.routes'
 import { fieldReportRoutes } from './field-reports/field-reports.routes'
+import { mailRoutes } from './mail/mail.routes'
 import type { Services } from './services'
 
 export type AppOptions = {
@@ -47,6 +48,7 @@ export async function createApp({ config, dataSource, services, version, clientD
   api.use(userRoutes(services.users))
   api.use(importRoutes(services, config))
   api.use(fieldReportRoutes(services, { photoMaxBytes: config.photoMaxBytes }))
+  api.use(mailRoutes(services.outbox))
   api.use(requireSignIn, notFoundApi)
   app.use('/api', api)
 

@@ -40,7 +40,11 @@ export async function prepareDatabase(config: AppConfig): Promise<Prepared> {
   const dataSource = await openDatabase(
     config.databaseUrl ? { type: 'postgres', url: config.databaseUrl } : { type: 'sqlite', path: dbPath },
   )
-  const services = createServices(dataSource, { ...config, uploadDir: path.resolve(projectRoot, config.uploadDir) }, rules)
+  const services = createServices(
+    dataSource,
+    { ...config, uploadDir: path.resolve(projectRoot, config.uploadDir), mailDir: path.resolve(projectRoot, config.mailDir) },
+    rules,
+  )
   await services.modifications.syncShipped(rules.loaded.modifications)
   const seeded = config.demo ? await seedDemo(dataSource, services, path.join(projectRoot, 'data', 'demo')) : false
   if (config.firstAdmin && (await services.users.count()) === 0) {

@@ -28,9 +28,15 @@ const server = app.listen(config.port, config.host, () => {
   console.log(`${where} at http://localhost:${port}/`)
 })
 
+// Mail goes out apart from requests; editors' digest of waiting reports is checked on the same beat.
+services.outbox.start(5_000, () => services.fieldReportNotices.digest().then(() => undefined))
+
 function shutdown() {
   server.close(() => {
-    void dataSource.destroy().finally(() => process.exit(0))
+    void services.outbox
+      .stop()
+      .then(() => dataSource.destroy())
+      .finally(() => process.exit(0))
   })
 }
 process.on('SIGINT', shutdown)

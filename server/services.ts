@@ -18,6 +18,10 @@ import { UserService } from './users/user.service'
 import { FieldReportRepository } from './field-reports/field-report.repository'
 import { FieldReportService } from './field-reports/field-report.service'
 import { PhotoStorage } from './field-reports/photo-storage'
+import { FieldReportNotices } from './field-reports/field-report-notices'
+import { Mailer } from './mail/mailer'
+import { OutboxRepository } from './mail/outbox.repository'
+import { OutboxService } from './mail/outbox.service'
 import { FieldReportEvidence } from './field-reports/field-report-evidence'
 import { FieldReportReviewService } from './field-reports/field-report-review.service'
 import { databaseOf } from './db/sqlite-connection'
@@ -29,11 +33,17 @@ export function createServices(dataSource: DataSource, config: AppConfig, rules:
   const modifications = new ModificationService(dataSource)
   const evaluation = new BuildEvaluationService(dataSource, parts, graphIndex, rules, modifications)
   const photos = new PhotoStorage(config.uploadDir)
+  const users = new UserService(dataSource)
+  const outboxRows = new OutboxRepository(databaseOf(dataSource))
+  const outbox = new OutboxService(outboxRows, new Mailer({ smtpUrl: config.smtpUrl, mailDir: config.mailDir, from: config.mailFrom }))
   const fieldReports = new FieldReportService(new FieldReportRepository(databaseOf(dataSource)), parts, photos)
+  const fieldReportNotices = new FieldReportNotices(outbox, outboxRows, users, fieldReports, config.publicUrl)
   const completion = new BuildCompletionService(dataSource, parts, graphIndex, evaluation, modifications)
   return {
     rules,
-    users: new UserService(dataSource),
+    users,
+    outbox,
+    fieldReportNotices,
     parts,
     graphIndex,
     modifications,
@@ -54,7 +64,7 @@ export function createServices(dataSource: DataSource, config: AppConfig, rules:
     exports: new ExportService(dataSource),
     photos,
     fieldReports,
-    fieldReportReview: new FieldReportReviewService(dataSource, fieldReports, graphIndex),
+    fieldReportReview: new FieldReportReviewService(dataSource, fieldReports, graphIndex, fieldReportNotices),
   }
 }
 export type Services = ReturnType<typeof createServices>

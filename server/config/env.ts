@@ -24,6 +24,13 @@ const envSchema = z.object({
     .positive()
     .default(50 * 1024 * 1024),
   FITWRIGHT_IMPORT_MAX_ROWS: z.coerce.number().int().positive().default(500_000),
+  FITWRIGHT_SMTP_URL: z
+    .string()
+    .regex(/^smtps?:\/\//, 'Use an smtp:// or smtps:// address, or leave it unset for the local mail fake.')
+    .optional(),
+  FITWRIGHT_MAIL_DIR: z.string().min(1).default('data/mail'),
+  FITWRIGHT_MAIL_FROM: z.string().min(3).default('Fitwright <fitwright@localhost>'),
+  FITWRIGHT_PUBLIC_URL: z.url('Use the address people open Fitwright at, like https://parts.example.test.').optional(),
   FITWRIGHT_UPLOAD_DIR: z.string().min(1).default('data/uploads'),
   FITWRIGHT_PHOTO_MAX_BYTES: z.coerce
     .number()
@@ -43,6 +50,12 @@ export type AppConfig = {
   sessionSecret?: string
   importMaxBytes: number
   importMaxRows: number
+  /** SMTP server for mail; unset: the local fake, keeping each message as a file in mailDir. */
+  smtpUrl?: string
+  mailDir: string
+  mailFrom: string
+  /** Where links in mail point. */
+  publicUrl: string
   /** Field-report photos (re-encoded) are kept here. */
   uploadDir: string
   photoMaxBytes: number
@@ -70,6 +83,10 @@ export function loadConfig(env: NodeJS.ProcessEnv = process.env): AppConfig {
     sessionSecret: value.FITWRIGHT_SESSION_SECRET,
     importMaxBytes: value.FITWRIGHT_IMPORT_MAX_BYTES,
     importMaxRows: value.FITWRIGHT_IMPORT_MAX_ROWS,
+    smtpUrl: value.FITWRIGHT_SMTP_URL,
+    mailDir: value.FITWRIGHT_MAIL_DIR,
+    mailFrom: value.FITWRIGHT_MAIL_FROM,
+    publicUrl: (value.FITWRIGHT_PUBLIC_URL ?? `http://localhost:${value.PORT || 3000}`).replace(/\/$/, ''),
     uploadDir: value.FITWRIGHT_UPLOAD_DIR,
     photoMaxBytes: value.FITWRIGHT_PHOTO_MAX_BYTES,
     loginAttempts: value.FITWRIGHT_LOGIN_ATTEMPTS,

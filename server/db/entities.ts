@@ -13,6 +13,7 @@ import { UserEntity } from '../users/user.entity'
 import { FieldReportEntity } from '../field-reports/field-report.entity'
 import { FieldReportPhotoEntity } from '../field-reports/field-report-photo.entity'
 import { FieldReportLinkEntity } from '../field-reports/field-report-link.entity'
+import { MailOutboxEntity } from '../mail/mail-outbox.entity'
 
 export const entities = [
   UserEntity,
@@ -30,4 +31,5 @@ export const entities = [
   FieldReportEntity,
   FieldReportPhotoEntity,
   FieldReportLinkEntity,
+  MailOutboxEntity,
 ]

@@ -1,3 +1,5 @@
+import { MailOutbox1796212721111 } from '../migrations/1796212721111-MailOutbox'
+import { MailOutbox1796212722016 as PostgresMailOutbox1796212722016 } from '../migrations/postgres/1796212722016-MailOutbox'
 import { FieldReports1796211781089 } from '../migrations/1796211781089-FieldReports'
 import { FieldReports1796211781982 as PostgresFieldReports1796211781982 } from '../migrations/postgres/1796211781982-FieldReports'
 import { CatalogueChangeFeed1796197600000 } from '../migrations/postgres/1796197600000-CatalogueChangeFeed'
@@ -14,7 +16,13 @@ export const migrations = [
   CsvImport1796154117731,
   PartWords1796197875848,
   FieldReports1796211781089,
+  MailOutbox1796212721111,
 ]
 
 /** PostgreSQL's, generated from the same entities (`npx tsx server/db/generate-migration.ts Name --postgres`). */
-export const postgresMigrations = [PostgresFoundation1796197547678, CatalogueChangeFeed1796197600000, PostgresFieldReports1796211781982]
+export const postgresMigrations = [
+  PostgresFoundation1796197547678,
+  CatalogueChangeFeed1796197600000,
+  PostgresFieldReports1796211781982,
+  PostgresMailOutbox1796212722016,
+]

@@ -8,6 +8,7 @@ import { AppError } from '../errors/app-error'
 import type { FitGraphIndex } from '../fitment/fit-graph'
 import { approvePairs, type ApprovalOutcome } from './field-report-review'
 import type { FieldReportService } from './field-report.service'
+import type { FieldReportNotices } from './field-report-notices'
 
 const OPEN = ['submitted', 'needs-more']
 
@@ -17,6 +18,7 @@ export class FieldReportReviewService {
     private readonly dataSource: DataSource,
     private readonly reports: FieldReportService,
     private readonly graphIndex: FitGraphIndex,
+    private readonly notices: FieldReportNotices,
   ) {}
 
   async approve(
@@ -32,19 +34,28 @@ export class FieldReportReviewService {
     })
     await this.graphIndex.applyChanges({ links: [...outcome.created, ...outcome.confirmed] })
     const { batchId, ...links } = outcome
-    return { report: await this.reports.get(id, editor), links, batchId }
+    return { report: await this.told(id, 'approved', note, editor), links, batchId }
   }
 
   async reject(id: number, reason: string, editor: User): Promise<FieldReport> {
     await this.open(id, editor)
     await inTransaction(this.dataSource, (db) => this.decide(db, id, 'rejected', reason, editor, null))
-    return this.reports.get(id, editor)
+    return this.told(id, 'rejected', reason, editor)
   }
 
   async ask(id: number, question: string, editor: User): Promise<FieldReport> {
     await this.open(id, editor)
     await inTransaction(this.dataSource, (db) => this.decide(db, id, 'needs-more', question, editor, null))
-    return this.reports.get(id, editor)
+    return this.told(id, 'needs-more', question, editor)
+  }
+
+  /** The decided report, after queueing the reporter's mail (a mail problem never undoes the decision). */
+  private async told(id: number, status: 'approved' | 'rejected' | 'needs-more', note: string, editor: User): Promise<FieldReport> {
+    const report = await this.reports.get(id, editor)
+    await this.notices
+      .decided(report, status, note)
+      .catch((error: unknown) => console.error(`Queueing mail for report ${id} failed:`, error))
+    return report
   }
 
   private async open(id: number, editor: User): Promise<FieldReport> {

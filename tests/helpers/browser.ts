@@ -56,6 +56,7 @@ export async function startServer(env: Record<string, string> = {}): Promise<Run
       HOST: '127.0.0.1',
       FITWRIGHT_DB_PATH: path.join(dir, 'e2e.sqlite'),
       FITWRIGHT_UPLOAD_DIR: path.join(dir, 'uploads'),
+      FITWRIGHT_MAIL_DIR: path.join(dir, 'mail'),
       ...env,
     },
     stdio: ['ignore', 'pipe', 'pipe'],

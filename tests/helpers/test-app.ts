@@ -50,6 +50,7 @@ export async function createTestApp(options: { demo?: boolean; env?: Record<stri
     FITWRIGHT_DB_PATH: path.join(dir, 'test.sqlite'),
     FITWRIGHT_DEMO: options.demo === false ? '0' : '1',
     FITWRIGHT_UPLOAD_DIR: path.join(dir, 'uploads'),
+    FITWRIGHT_MAIL_DIR: path.join(dir, 'mail'),
     ...options.env,
   })
   const { dataSource, services } = await prepareDatabase(config)
@@ -66,6 +67,7 @@ export async function createTestApp(options: { demo?: boolean; env?: Record<stri
       return agent
     },
     async close() {
+      await services.outbox.stop()
       await dataSource.destroy()
       rmSync(dir, { recursive: true, force: true })
     },

@@ -1,0 +1,62 @@
+import type { Database } from '../db/database'
+import type { OutboxStatus } from './mail-outbox.entity'
+
+export type OutboxRow = {
+  id: number
+  kind: string
+  recipient: string
+  subject: string
+  text: string
+  html: string
+  status: OutboxStatus
+  attempts: number
+  lastError: string
+  nextAttemptAt: unknown
+  sentAt: unknown
+  createdAt: unknown
+}
+export type NewMessage = { kind: string; recipient: string; subject: string; text: string; html: string }
+
+const COLUMNS =
+  'SELECT "id", "kind", "recipient", "subject", "text", "html", "status", "attempts", "lastError", "nextAttemptAt", "sentAt", "createdAt" FROM mail_outbox'
+
+/** The mail_outbox table. */
+export class OutboxRepository {
+  constructor(private readonly db: Database) {}
+
+  enqueue(message: NewMessage, now: Date): Promise<number> {
+    return this.db.insert(
+      'INSERT INTO mail_outbox ("kind", "recipient", "subject", "text", "html", "status", "attempts", "lastError", "nextAttemptAt", "createdAt") VALUES (?, ?, ?, ?, ?, \'queued\', 0, \'\', ?, ?) RETURNING "id"',
+      [message.kind, message.recipient, message.subject, message.text, message.html, now, now],
+    )
+  }
+
+  due(now: Date, limit: number): Promise<OutboxRow[]> {
+    return this.db.all<OutboxRow>(`${COLUMNS} WHERE "status" = 'queued' AND "nextAttemptAt" <= ? ORDER BY "id" LIMIT ?`, [now, limit])
+  }
+
+  async markSent(id: number, now: Date): Promise<void> {
+    await this.db.run(
+      'UPDATE mail_outbox SET "status" = \'sent\', "sentAt" = ?, "attempts" = "attempts" + 1, "lastError" = \'\' WHERE "id" = ?',
+      [now, id],
+    )
+  }
+
+  async markFailed(id: number, error: string, next: Date | null): Promise<void> {
+    await this.db.run(
+      'UPDATE mail_outbox SET "status" = ?, "attempts" = "attempts" + 1, "lastError" = ?, "nextAttemptAt" = COALESCE(?, "nextAttemptAt") WHERE "id" = ?',
+      [next ? 'queued' : 'failed', error.slice(0, 500), next, id],
+    )
+  }
+
+  /** When a message of this kind was last queued, to keep digests to one an hour. */
+  async lastQueued(kind: string): Promise<unknown> {
+    return (await this.db.get<{ at: unknown }>('SELECT MAX("createdAt") AS "at" FROM mail_outbox WHERE "kind" = ?', [kind]))?.at ?? null
+  }
+
+  async page(offset: number, limit: number) {
+    const rows = await this.db.all<OutboxRow>(`${COLUMNS} ORDER BY "id" DESC LIMIT ? OFFSET ?`, [limit, offset])
+    const total = await this.db.get<{ total: number }>('SELECT CAST(COUNT(*) AS INTEGER) AS "total" FROM mail_outbox')
+    return { rows, total: total?.total ?? 0 }
+  }
+}
