@@ -53,7 +53,7 @@ export class FieldReportRepository {
   }
 
   /** Newest first; `reporterId` narrows to one reporter's own. */
-  async page(filter: { status?: FieldReportStatus; reporterId?: number }, offset: number, limit: number) {
+  async page(filter: { status?: FieldReportStatus; reporterId?: number; pair?: [number, number] }, offset: number, limit: number) {
     const where: string[] = []
     const params: (string | number)[] = []
     if (filter.status) {
@@ -63,6 +63,12 @@ export class FieldReportRepository {
     if (filter.reporterId !== undefined) {
       where.push('"reporterId" = ?')
       params.push(filter.reporterId)
+    }
+    if (filter.pair) {
+      where.push(
+        '"id" IN (SELECT e."reportId" FROM field_report_link e JOIN link l ON l."id" = e."linkId" WHERE l."partAId" = ? AND l."partBId" = ?)',
+      )
+      params.push(...filter.pair)
     }
     const clause = where.length ? ` WHERE ${where.join(' AND ')}` : ''
     const rows = await this.db.all<FieldReportRow>(`${COLUMNS}${clause} ORDER BY "id" DESC LIMIT ? OFFSET ?`, [...params, limit, offset])

@@ -9,6 +9,7 @@ import { AppError } from '../errors/app-error'
 import type { PartService } from '../catalogue/part.service'
 import type { FieldReportPhotoRow, FieldReportRepository, FieldReportRow, NewPhoto } from './field-report.repository'
 import { processPhoto } from './photo-processing'
+import { orderedPair } from '../fitment/link-rows'
 import type { PhotoStorage } from './photo-storage'
 
 export type UploadedPhoto = { path: string; originalName: string }
@@ -67,10 +68,14 @@ export class FieldReportService {
     }
   }
 
-  async list(query: { status?: FieldReportStatus; page: number; pageSize: number }, user: User): Promise<FieldReportList> {
+  async list(
+    query: { status?: FieldReportStatus; from?: string; to?: string; page: number; pageSize: number },
+    user: User,
+  ): Promise<FieldReportList> {
     const reporterId = can(user.role, 'field-reports.review') ? undefined : user.id
+    const pair = await this.pairFilter(query.from, query.to)
     const { rows, total } = await this.repository.page(
-      { status: query.status, reporterId },
+      { status: query.status, reporterId, pair },
       (query.page - 1) * query.pageSize,
       query.pageSize,
     )
@@ -120,6 +125,16 @@ export class FieldReportService {
     }
     if (problems.length) throw AppError.badRequest(problems[0]!.message, problems.slice(0, 20))
     return resolved
+  }
+
+  private async pairFilter(from: string | undefined, to: string | undefined): Promise<[number, number] | undefined> {
+    if (from === undefined && to === undefined) return undefined
+    if (!from || !to) {
+      throw AppError.badRequest('Give both parts of the pair, from and to.', [
+        { path: from ? 'to' : 'from', message: 'Give both parts of the pair.' },
+      ])
+    }
+    return orderedPair([await this.parts.requireId(from, 'from'), await this.parts.requireId(to, 'to')])
   }
 
   private vinWarnings(vin: string | undefined): string[] {

@@ -85,6 +85,9 @@ export type FieldReport = z.infer<typeof fieldReportSchema>
 
 export const fieldReportListQuerySchema = z.object({
   status: fieldReportStatusSchema.optional(),
+  /** Reports counted on the link between these two parts (both or neither). */
+  from: z.string().trim().min(1).max(100).optional(),
+  to: z.string().trim().min(1).max(100).optional(),
   page: z.coerce.number().int().min(1).max(100_000).default(1),
   pageSize: z.coerce.number().int().min(1).max(100).default(25),
 })

@@ -17,7 +17,7 @@ export const fieldReportsApi = {
     for (const photo of photos) form.append('photos', photo, photo.name)
     return request('POST', '/field-reports', fieldReportSchema, { body: form })
   },
-  list: (query: { status?: FieldReportStatus; page?: number; pageSize?: number }, signal?: AbortSignal) =>
+  list: (query: { status?: FieldReportStatus; from?: string; to?: string; page?: number; pageSize?: number }, signal?: AbortSignal) =>
     request('GET', '/field-reports', fieldReportListSchema, { query, signal }),
   get: (id: number, signal?: AbortSignal) => request('GET', `/field-reports/${id}`, fieldReportSchema, { signal }),
   approve: (id: number, note: string) => request('POST', `/field-reports/${id}/approve`, approvalSchema, { body: { note } }),

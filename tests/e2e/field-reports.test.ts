@@ -62,6 +62,9 @@ describe.skipIf(!run)('a tech reports a fit with a photo, an editor approves it,
     const row = page.locator('[data-part="TM-BL-2000"]').first()
     await expect.poll(() => row.textContent(), within).toContain('confirmed by 1 field report')
     await saveScreenshot(page, 'field-report-part-page')
+    await row.getByRole('link', { name: 'confirmed by 1 field report' }).click()
+    await page.waitForURL(/\/field-reports\?from=TM-HD-1810&to=TM-BL-2000/)
+    await expect.poll(() => page.getByRole('table', { name: 'Field reports' }).textContent(), within).toContain('Approved')
     expect(consoleErrors, consoleErrors.join('\n')).toEqual([])
   })
 

@@ -66,6 +66,12 @@ describe('approving a field report', () => {
     const proposed = (await editor.get('/api/modifications')).body as { name: string; status?: string }[]
     expect(proposed.find((m) => m.name === 'bolt-spacer-shim')).toBeDefined()
 
+    // The reports behind a line, either way round; only those counted on that link.
+    const behind = (await editor.get('/api/field-reports?from=TM-BL-2000&to=TM-HD-1810')).body
+    expect(behind.items.map((r: { id: number }) => r.id)).toEqual([id])
+    expect((await editor.get('/api/field-reports?from=TM-HD-2000&to=TM-BL-2000')).body.total).toBe(0)
+    expect((await editor.get('/api/field-reports?from=TM-HD-2000')).status).toBe(400)
+
     const batches = (await editor.get('/api/imports')).body as { id: number; fileName: string }[]
     expect(batches[0]).toMatchObject({ id: approved.body.batchId, fileName: `field report #${id}` })
 
