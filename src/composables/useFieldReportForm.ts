@@ -4,11 +4,12 @@ import type { Relation } from '@shared/schemas/fitment'
 import { ApiError } from '@/api/http'
 import { fieldReportsApi } from '@/api/fieldReports'
 import { fieldMessages, issuesAsFieldErrors } from '@/lib/field-errors'
+import type { StartingReport } from '@/lib/field-report-query'
 
 export type PairDraft = { from: string; to: string; relation: Relation; modifications: string; note: string }
 export type MeasurementDraft = { name: string; value: string; unit: string }
 
-const blankPair = (from = '', to = ''): PairDraft => ({ from, to, relation: 'fits', modifications: '', note: '' })
+const blankPair = (from = '', to = '', relation: Relation = 'fits'): PairDraft => ({ from, to, relation, modifications: '', note: '' })
 const optionalNumber = (text: string) => (text.trim() === '' ? undefined : Number(text))
 
 /**
@@ -16,9 +17,9 @@ const optionalNumber = (text: string) => (text.trim() === '' ? undefined : Numbe
  * field path) and sending it with the photos. Starts from the pairs the page
  * it was opened from knows (a what-fits line, a build sheet).
  */
-export function useFieldReportForm(initialPairs: { from: string; to: string }[]) {
-  const pairs = ref<PairDraft[]>(initialPairs.length ? initialPairs.map((p) => blankPair(p.from, p.to)) : [blankPair()])
-  const vehicle = reactive({ modelYear: '', vin: '', mileageKm: '' })
+export function useFieldReportForm(start: StartingReport) {
+  const pairs = ref<PairDraft[]>(start.pairs.length ? start.pairs.map((p) => blankPair(p.from, p.to, p.relation)) : [blankPair()])
+  const vehicle = reactive({ modelYear: start.modelYear ?? '', vin: start.vin ?? '', mileageKm: '' })
   const measurements = ref<MeasurementDraft[]>([])
   const notes = ref('')
   const photos = ref<File[]>([])

@@ -68,6 +68,21 @@ describe.skipIf(!run)('a tech reports a fit with a photo, an editor approves it,
     expect(consoleErrors, consoleErrors.join('\n')).toEqual([])
   })
 
+  it('starts a report from a saved build sheet with its pairs and verdicts', async () => {
+    await page.goto(`${server.url}/builds`)
+    await page
+      .getByRole('link', { name: /TK20V head on a TK18 block/i })
+      .first()
+      .click()
+    const report = page.getByRole('link', { name: 'Report how this build went' })
+    await report.waitFor(within)
+    await report.click()
+    await page.waitForURL(/\/field-reports\/new\?/)
+    const pairs = page.getByRole('group', { name: /^Pair \d+$/ })
+    await expect.poll(() => pairs.count(), within).toBeGreaterThan(2)
+    expect(await page.getByRole('group', { name: 'Pair 1' }).getByLabel('Part', { exact: true }).inputValue()).toMatch(/^TM-/)
+  })
+
   it('fits the report form on a 768 px tablet', async () => {
     await page.setViewportSize({ width: 768, height: 1024 })
     await page.goto(`${server.url}/field-reports/new?from=TM-HD-2000&to=TM-BL-1800`)

@@ -1,10 +1,11 @@
 import { afterEach, describe, expect, it, vi } from 'vitest'
 import { useFieldReportForm } from '@/composables/useFieldReportForm'
-import { queryPairs } from '@/lib/field-report-query'
+import { buildReportQuery, startingReport } from '@/lib/field-report-query'
+import { makePair } from '../../helpers/client-factories'
 
 afterEach(() => vi.unstubAllGlobals())
 
-describe('queryPairs', () => {
+describe('startingReport', () => {
   it.each([
     [{ from: 'TM-HD-2000', to: 'TM-BL-1800' }, [{ from: 'TM-HD-2000', to: 'TM-BL-1800' }]],
     [
@@ -17,7 +18,23 @@ describe('queryPairs', () => {
     [{ pair: 'broken' }, []],
     [{}, []],
   ])('reads %j as the pairs to start from', (query, expected) => {
-    expect(queryPairs(query)).toEqual(expected)
+    expect(startingReport(query).pairs).toEqual(expected.map((pair) => expect.objectContaining(pair)))
+  })
+
+  it('round-trips a build sheet: its pairs with their verdicts, the model year and the VIN', () => {
+    const pairs = [makePair(['head', 'block'], 'fits-with-modification'), makePair(['distributor', 'head'], 'unknown')]
+    pairs[0]!.partNumbers = ['TM-HD-2000', 'TM-BL-1800']
+    pairs[1]!.partNumbers = ['TM-DS-2000', 'TM-HD-2000']
+    const query = buildReportQuery(pairs, { chassisModelYear: 1996, vin: '1G4AH59H45G118341' })
+    const start = startingReport(query as Parameters<typeof startingReport>[0])
+    expect(start).toEqual({
+      pairs: [
+        { from: 'TM-HD-2000', to: 'TM-BL-1800', relation: 'fits-with-modification' },
+        { from: 'TM-DS-2000', to: 'TM-HD-2000', relation: undefined },
+      ],
+      modelYear: '1996',
+      vin: '1G4AH59H45G118341',
+    })
   })
 })
 
@@ -25,7 +42,7 @@ describe('useFieldReportForm', () => {
   it('names each wrong field by its path before sending anything', async () => {
     const fetch = vi.fn()
     vi.stubGlobal('fetch', fetch)
-    const form = useFieldReportForm([{ from: 'TM-HD-2000', to: '' }])
+    const form = useFieldReportForm({ pairs: [{ from: 'TM-HD-2000', to: '' }] })
     form.pairs.value[0]!.relation = 'fits-with-modification'
     form.vehicle.modelYear = '1890'
     expect(await form.submit()).toBeNull()
@@ -58,7 +75,7 @@ describe('useFieldReportForm', () => {
         )
       }),
     )
-    const form = useFieldReportForm([{ from: 'TM-HD-2000', to: 'TM-X' }])
+    const form = useFieldReportForm({ pairs: [{ from: 'TM-HD-2000', to: 'TM-X' }] })
     form.pairs.value[0]!.relation = 'fits-with-modification'
     form.pairs.value[0]!.modifications = 'hardened-washer-stack, oil-restrictor-fit'
     form.photos.value = [new File([new Uint8Array([0xff, 0xd8, 0xff])], 'boss.jpg', { type: 'image/jpeg' })]
