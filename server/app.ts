@@ -35,7 +35,7 @@ export async function createApp({ config, dataSource, services, version, clientD
   app.disable('x-powered-by')
   app.set('trust proxy', 'loopback')
   app.use(express.json({ limit: '1mb' }))
-  app.use('/api', await createSessionMiddleware(dataSource, { secret: config.sessionSecret }))
+  app.use('/api', await createSessionMiddleware(dataSource, { secret: config.sessionSecret, maxAgeMs: config.sessionMaxAgeMs }))
   app.use('/api', auth.initialize(), auth.session())
 
   const api = express.Router()

@@ -11,6 +11,7 @@ declare global {
       email: string
       name: string
       role: Role
+      disabled: boolean
     }
   }
 }

@@ -1,11 +1,12 @@
 import { randomBytes } from 'node:crypto'
-import { TypeormStore } from 'connect-typeorm'
 import session from 'express-session'
 import type { DataSource } from 'typeorm'
+import { databaseOf } from '../db/sqlite-connection'
 import { AppSettingEntity } from '../settings/app-setting.entity'
-import { SessionEntity } from './session.entity'
+import { DatabaseSessionStore } from './session-store'
+import { SessionRepository } from './session.repository'
 
-const EIGHT_HOURS_S = 8 * 60 * 60
+const EIGHT_HOURS_MS = 8 * 60 * 60 * 1000
 
 /** The configured secret, or one generated on first start and kept in the database. */
 async function sessionSecret(dataSource: DataSource, configured?: string): Promise<string> {
@@ -18,8 +19,13 @@ async function sessionSecret(dataSource: DataSource, configured?: string): Promi
   return value
 }
 
-export async function createSessionMiddleware(dataSource: DataSource, options: { secret?: string }) {
-  const store = new TypeormStore({ cleanupLimit: 2, ttl: EIGHT_HOURS_S }).connect(dataSource.getRepository(SessionEntity))
+/** Sessions end after eight idle hours, or `maxAgeMs` after sign-in, whichever comes first. */
+export async function createSessionMiddleware(dataSource: DataSource, options: { secret?: string; maxAgeMs: number; now?: () => number }) {
+  const store = new DatabaseSessionStore(new SessionRepository(databaseOf(dataSource)), {
+    idleMs: EIGHT_HOURS_MS,
+    maxAgeMs: options.maxAgeMs,
+    now: options.now,
+  })
   return session({
     name: 'fitwright.sid',
     secret: await sessionSecret(dataSource, options.secret),
@@ -27,6 +33,6 @@ export async function createSessionMiddleware(dataSource: DataSource, options: {
     resave: false,
     saveUninitialized: false,
     rolling: true,
-    cookie: { httpOnly: true, sameSite: 'lax', secure: 'auto', maxAge: EIGHT_HOURS_S * 1000 },
+    cookie: { httpOnly: true, sameSite: 'lax', secure: 'auto', maxAge: EIGHT_HOURS_MS },
   })
 }

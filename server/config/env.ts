@@ -17,6 +17,7 @@ const envSchema = z.object({
   FITWRIGHT_SESSION_SECRET: z.string().min(16, 'Use at least 16 characters.').optional(),
   FITWRIGHT_ADMIN_EMAIL: z.email().optional(),
   FITWRIGHT_ADMIN_PASSWORD: z.string().min(10, 'Use at least 10 characters.').optional(),
+  FITWRIGHT_SESSION_MAX_AGE_DAYS: z.coerce.number().positive('Use a number of days above 0.').max(366).default(7),
   FITWRIGHT_LOGIN_ATTEMPTS: z.coerce.number().int().positive().default(10),
   FITWRIGHT_IMPORT_MAX_BYTES: z.coerce
     .number()
@@ -48,6 +49,8 @@ export type AppConfig = {
   databaseUrl?: string
   demo: boolean
   sessionSecret?: string
+  /** A session ends this long after sign-in however often it is used (the idle end is eight hours). */
+  sessionMaxAgeMs: number
   importMaxBytes: number
   importMaxRows: number
   /** SMTP server for mail; unset: the local fake, keeping each message as a file in mailDir. */
@@ -81,6 +84,7 @@ export function loadConfig(env: NodeJS.ProcessEnv = process.env): AppConfig {
     databaseUrl: value.FITWRIGHT_DATABASE_URL,
     demo: value.FITWRIGHT_DEMO,
     sessionSecret: value.FITWRIGHT_SESSION_SECRET,
+    sessionMaxAgeMs: Math.round(value.FITWRIGHT_SESSION_MAX_AGE_DAYS * 24 * 60 * 60 * 1000),
     importMaxBytes: value.FITWRIGHT_IMPORT_MAX_BYTES,
     importMaxRows: value.FITWRIGHT_IMPORT_MAX_ROWS,
     smtpUrl: value.FITWRIGHT_SMTP_URL,

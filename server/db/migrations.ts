@@ -8,6 +8,8 @@ import { CsvImport1796154117731 } from '../migrations/1796154117731-CsvImport'
 import { FitmentGraph1796151639561 } from '../migrations/1796151639561-FitmentGraph'
 import { Foundation1796150879975 } from '../migrations/1796150879975-Foundation'
 import { PartWords1796197875848 } from '../migrations/1796197875848-PartWords'
+import { SessionsByUser1796212625077 } from '../migrations/1796212625077-SessionsByUser'
+import { SessionsByUser1796212625998 as PostgresSessionsByUser1796212625998 } from '../migrations/postgres/1796212625998-SessionsByUser'
 
 /** SQLite's, in the order they run. */
 export const migrations = [
@@ -16,6 +18,7 @@ export const migrations = [
   CsvImport1796154117731,
   PartWords1796197875848,
   FieldReports1796211781089,
+  SessionsByUser1796212625077,
   MailOutbox1796212721111,
 ]
 
@@ -24,5 +27,6 @@ export const postgresMigrations = [
   PostgresFoundation1796197547678,
   CatalogueChangeFeed1796197600000,
   PostgresFieldReports1796211781982,
+  PostgresSessionsByUser1796212625998,
   PostgresMailOutbox1796212722016,
 ]

@@ -18,6 +18,10 @@ export class UserEntity {
   @Column({ type: 'text' })
   passwordHash!: string
 
+  /** Set while an administrator has barred the account: it cannot sign in and its sessions are ended. */
+  @Column({ type: Date, nullable: true })
+  disabledAt!: Date | null
+
   @CreateDateColumn()
   createdAt!: Date
 }

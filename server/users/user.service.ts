@@ -4,31 +4,40 @@ import { inTransaction } from '../db/sqlite-connection'
 import type { Role, User, UserUpdateInput } from '../../shared/schemas/auth'
 import { UserEntity } from './user.entity'
 import { AppError } from '../errors/app-error'
+import { SessionRepository } from '../auth/session.repository'
+import { databaseOf } from '../db/sqlite-connection'
+import { sqliteTime } from '../db/sqlite-database'
 
 const BCRYPT_ROUNDS = 10
 // Compared against when the e-mail is unknown, so both failures take the same time.
 const NO_SUCH_USER_HASH = bcrypt.hashSync('no such user', BCRYPT_ROUNDS)
 
 export function toUser(entity: UserEntity): User {
-  return { id: entity.id, email: entity.email, name: entity.name, role: entity.role }
+  return { id: entity.id, email: entity.email, name: entity.name, role: entity.role, disabled: entity.disabledAt !== null }
 }
 
 export class UserService {
   private readonly users: Repository<UserEntity>
+  private readonly sessions: SessionRepository
 
   constructor(private readonly dataSource: DataSource) {
     this.users = dataSource.getRepository(UserEntity)
+    this.sessions = new SessionRepository(databaseOf(dataSource))
   }
 
+  /** The user for a right e-mail and password; a disabled account is refused with its own message once the password is right. */
   async verifyCredentials(email: string, password: string): Promise<User | null> {
     const entity = await this.users.findOneBy({ email: email.trim().toLowerCase() })
     const matches = await bcrypt.compare(password, entity?.passwordHash ?? NO_SUCH_USER_HASH)
-    return entity && matches ? toUser(entity) : null
+    if (!entity || !matches) return null
+    if (entity.disabledAt) throw new AppError(403, 'account_disabled', 'This account is disabled. Ask an administrator to enable it.')
+    return toUser(entity)
   }
 
+  /** The signed-in user behind a session; a disabled one no longer counts as signed in. */
   async findById(id: number): Promise<User | null> {
     const entity = await this.users.findOneBy({ id })
-    return entity ? toUser(entity) : null
+    return entity && !entity.disabledAt ? toUser(entity) : null
   }
 
   async list(): Promise<User[]> {
@@ -49,25 +58,39 @@ export class UserService {
   }
 
   /**
-   * Changes name, role or password; the last administrator cannot lose the
-   * role. The hash is made first: the check and the write then run as one
-   * synchronous transaction, with no other request in between.
+   * Changes name, role, password or whether the account is disabled; the last
+   * enabled administrator cannot lose the role or be disabled. The hash is made
+   * first: the check and the write then run as one synchronous transaction,
+   * with no other request in between. A new password or a disabled account
+   * ends the user's sessions (but the acting one, when it is their own).
    */
-  async update(id: number, change: UserUpdateInput, actingUserId: number): Promise<User> {
+  async update(id: number, change: UserUpdateInput, acting: { userId: number; sessionId?: string }): Promise<User> {
     const passwordHash = change.password ? await bcrypt.hash(change.password, BCRYPT_ROUNDS) : null
     await inTransaction(this.dataSource, (db) => {
       const current = db.prepare('SELECT role FROM user WHERE id = ?').get(id) as { role: Role } | undefined
       if (!current) throw AppError.notFound(`No user with id ${id}.`)
-      if (change.role && change.role !== 'admin' && current.role === 'admin') {
-        const { admins } = db.prepare("SELECT COUNT(*) AS admins FROM user WHERE role = 'admin'").get() as { admins: number }
+      const losesAdmin = current.role === 'admin' && ((change.role && change.role !== 'admin') || change.disabled === true)
+      if (losesAdmin) {
+        const { admins } = db.prepare("SELECT COUNT(*) AS admins FROM user WHERE role = 'admin' AND disabledAt IS NULL").get() as {
+          admins: number
+        }
         if (admins <= 1) throw AppError.conflict('Fitwright needs at least one administrator; make another one first.')
-        if (id === actingUserId) throw AppError.conflict('You cannot take the administrator role from yourself.')
       }
+      if (id === acting.userId && change.disabled === true) throw AppError.conflict('You cannot disable your own account.')
+      if (id === acting.userId && change.role && change.role !== 'admin' && current.role === 'admin') {
+        throw AppError.conflict('You cannot take the administrator role from yourself.')
+      }
+      const disabledAt = change.disabled === undefined ? undefined : change.disabled ? sqliteTime(new Date()) : null
       db.prepare(
-        'UPDATE user SET name = COALESCE(?, name), role = COALESCE(?, role), passwordHash = COALESCE(?, passwordHash) WHERE id = ?',
-      ).run(change.name ?? null, change.role ?? null, passwordHash, id)
+        `UPDATE user SET name = COALESCE(?, name), role = COALESCE(?, role), passwordHash = COALESCE(?, passwordHash)${
+          disabledAt === undefined ? '' : ', disabledAt = ?'
+        } WHERE id = ?`,
+      ).run(change.name ?? null, change.role ?? null, passwordHash, ...(disabledAt === undefined ? [] : [disabledAt]), id)
     })
-    return (await this.findById(id))!
+    if (passwordHash || change.disabled === true) {
+      await this.sessions.removeForUser(id, id === acting.userId ? acting.sessionId : undefined)
+    }
+    return toUser(await this.users.findOneByOrFail({ id }))
   }
 
   async count(): Promise<number> {

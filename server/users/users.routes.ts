@@ -19,7 +19,7 @@ export function userRoutes(users: UserService): Router {
   })
   router.patch('/users/:id', adminOnly, async (req, res) => {
     const { id } = parseParams(idParamsSchema, req)
-    res.json(await users.update(id, parseBody(userUpdateSchema, req), req.user!.id))
+    res.json(await users.update(id, parseBody(userUpdateSchema, req), { userId: req.user!.id, sessionId: req.sessionID }))
   })
   return router
 }

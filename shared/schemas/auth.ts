@@ -15,6 +15,8 @@ export const userSchema = z.object({
   email: z.string(),
   name: z.string(),
   role: roleSchema,
+  /** A disabled account cannot sign in; an administrator can enable it again. */
+  disabled: z.boolean(),
 })
 export type User = z.infer<typeof userSchema>
 
@@ -40,8 +42,9 @@ export const userUpdateSchema = z
     name: z.string().trim().min(1, 'Name is required.').max(120).optional(),
     role: roleSchema.optional(),
     password: password.optional(),
+    disabled: z.boolean().optional(),
   })
-  .refine((value) => Object.keys(value).length > 0, 'Change at least one of name, role or password.')
+  .refine((value) => Object.keys(value).length > 0, 'Change at least one of name, role, password or disabled.')
 export type UserUpdateInput = z.infer<typeof userUpdateSchema>
 
 export const userListSchema = z.array(userSchema)

@@ -15,7 +15,7 @@ const DRAFT_FIELDS = ['email', 'name', 'role', 'password'] as const
 const ROLE_OPTIONS = ROLES.map((role) => ({ value: role, label: ROLE_LABELS[role] }))
 
 /**
- * The users screen: the list, adding a user and changing a role. Every failure
+ * The users screen: the list, adding a user, changing a role, disabling and enabling. Every failure
  * is said: a field's message beside the field, anything else in the toast.
  */
 export function useUsers() {
@@ -90,6 +90,30 @@ export function useUsers() {
     })
   }
 
+  async function setDisabled(user: User, disabled: boolean) {
+    try {
+      await usersApi.update(user.id, { disabled })
+      notify.success(disabled ? `${user.name} is disabled` : `${user.name} can sign in again`)
+    } catch (error) {
+      notify.failure(disabled ? 'User not disabled' : 'User not enabled', error)
+    }
+    await load()
+  }
+
+  /** Disabling signs the user out everywhere at once, so it is confirmed first. */
+  function askDisabledChange(user: User) {
+    const disabling = !user.disabled
+    confirm.require({
+      header: disabling ? `Disable ${user.name}?` : `Enable ${user.name}?`,
+      message: disabling
+        ? `${user.name} is signed out everywhere now and cannot sign in until an administrator enables the account again.`
+        : `${user.name} can sign in again with their current password.`,
+      acceptProps: { label: disabling ? 'Disable' : 'Enable', severity: disabling ? 'danger' : undefined },
+      rejectProps: { label: 'Cancel', severity: 'secondary', outlined: true },
+      accept: () => void setDisabled(user, disabling),
+    })
+  }
+
   return {
     users: list.data,
     isLoading: list.isLoading,
@@ -102,5 +126,6 @@ export function useUsers() {
     create,
     roleShown,
     askRoleChange,
+    askDisabledChange,
   }
 }

@@ -6,7 +6,7 @@ import router from '@/router'
 import { useSessionStore } from '@/stores/session'
 import SignInView from '@/views/SignInView.vue'
 
-const counter = { id: 3, email: 'counter@fitwright.test', name: 'Counter Person', role: 'counter' }
+const counter = { id: 3, email: 'counter@fitwright.test', name: 'Counter Person', role: 'counter', disabled: false }
 
 function answer(status: number, body: unknown) {
   return new Response(JSON.stringify(body), { status, headers: { 'Content-Type': 'application/json' } })

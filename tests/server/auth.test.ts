@@ -24,7 +24,7 @@ describe('POST /api/auth/login', () => {
       .send({ email: `${role}@fitwright.test`, password: DEMO_PASSWORD })
     expect(response.status).toBe(200)
     expect(response.body).toMatchObject({ email: `${role}@fitwright.test`, role })
-    expect(Object.keys(response.body).sort()).toEqual(['email', 'id', 'name', 'role'])
+    expect(Object.keys(response.body).sort()).toEqual(['disabled', 'email', 'id', 'name', 'role'])
     expect(response.headers['set-cookie']?.[0]).toMatch(/^fitwright\.sid=.*HttpOnly/)
   })
 
@@ -94,7 +94,7 @@ describe('sessions', () => {
 
   it('keeps sessions in SQLite, not in memory', async () => {
     await t.signIn('counter')
-    const [{ count }] = await t.dataSource.query('SELECT COUNT(*) AS count FROM session WHERE destroyedAt IS NULL')
+    const [{ count }] = await t.dataSource.query('SELECT COUNT(*) AS count FROM user_session')
     expect(count).toBeGreaterThan(0)
   })
 

@@ -9,7 +9,7 @@ import { afterEach, describe, expect, it, vi } from 'vitest'
 import { defineComponent, h } from 'vue'
 import UsersView from '@/views/UsersView.vue'
 
-const admin = { id: 1, email: 'admin@fitwright.test', name: 'Admin Person', role: 'admin' }
+const admin = { id: 1, email: 'admin@fitwright.test', name: 'Admin Person', role: 'admin', disabled: false }
 
 type Call = { method: string; path: string; body: unknown }
 
@@ -109,7 +109,7 @@ describe('UsersView, adding a user', () => {
   })
 
   it('adds the user, says so, clears the form and loads the list again', async () => {
-    const created = { id: 9, email: 'new.tech@fitwright.test', name: 'New Tech', role: 'counter' }
+    const created = { id: 9, email: 'new.tech@fitwright.test', name: 'New Tech', role: 'counter', disabled: false }
     const calls = stubServer(() => new Response(JSON.stringify(created), { status: 201, headers: { 'Content-Type': 'application/json' } }))
     const wrapper = await mountView()
 
@@ -130,7 +130,7 @@ describe('UsersView, adding a user', () => {
 })
 
 describe('UsersView, changing a role', () => {
-  const tech = { id: 2, email: 'tech@fitwright.test', name: 'Tech Person', role: 'tech' }
+  const tech = { id: 2, email: 'tech@fitwright.test', name: 'Tech Person', role: 'tech', disabled: false }
 
   /** GET answers the stored list; PATCH answers `onUpdate` and, when it succeeds, changes the stored role. */
   function stubUsers(onUpdate: () => Response) {
@@ -138,10 +138,10 @@ describe('UsersView, changing a role', () => {
     const patches: unknown[] = []
     vi.stubGlobal('fetch', async (url: string, init: RequestInit) => {
       if (init.method === 'PATCH') {
-        const body = JSON.parse(String(init.body)) as { role: string }
+        const body = JSON.parse(String(init.body)) as { role?: string; disabled?: boolean }
         patches.push(body)
         const answer = onUpdate()
-        if (answer.ok) stored = stored.map((user) => (url.endsWith(`/${user.id}`) ? { ...user, role: body.role } : user))
+        if (answer.ok) stored = stored.map((user) => (url.endsWith(`/${user.id}`) ? { ...user, ...body } : user))
         return answer
       }
       return new Response(JSON.stringify(stored), { status: 200, headers: { 'Content-Type': 'application/json' } })
@@ -214,6 +214,42 @@ describe('UsersView, changing a role', () => {
 
     expect(document.body.textContent).toContain('Tech Person is now Catalogue editor')
     expect(roleSelect(wrapper, 'Tech Person').props('modelValue')).toBe('editor')
+    wrapper.unmount()
+  })
+
+  const pageButton = (label: string) =>
+    [...document.body.querySelectorAll<HTMLButtonElement>('button')].find((button) => button.getAttribute('aria-label') === label)
+
+  it('disables a user only once confirmed, then shows the account as disabled with Enable', async () => {
+    const patches = stubUsers(
+      () => new Response(JSON.stringify({ ...tech, disabled: true }), { status: 200, headers: { 'Content-Type': 'application/json' } }),
+    )
+    const wrapper = await mountWithDialogs()
+
+    pageButton('Disable Tech Person')!.click()
+    await flushPromises()
+    expect(document.body.querySelector('[role="alertdialog"]')?.textContent).toContain('signed out everywhere')
+    expect(patches).toEqual([])
+    dialogButton('Disable')!.click()
+    await flushPromises()
+
+    expect(patches).toEqual([{ disabled: true }])
+    expect(document.body.textContent).toContain('Tech Person is disabled')
+    expect(pageButton('Enable Tech Person')).toBeDefined()
+    wrapper.unmount()
+  })
+
+  it('sends nothing when disabling is cancelled', async () => {
+    const patches = stubUsers(() => new Response('{}', { status: 200 }))
+    const wrapper = await mountWithDialogs()
+
+    pageButton('Disable Tech Person')!.click()
+    await flushPromises()
+    dialogButton('Cancel')!.click()
+    await flushPromises()
+
+    expect(patches).toEqual([])
+    expect(pageButton('Disable Tech Person')).toBeDefined()
     wrapper.unmount()
   })
 })

@@ -1,0 +1,83 @@
+import session from 'express-session'
+import type { SessionRepository } from './session.repository'
+
+export type SessionLifetimes = {
+  /** Ends a session nobody used for this long. */
+  idleMs: number
+  /** Ends a session this long after sign-in, however often it is used. */
+  maxAgeMs: number
+  /** The clock, injectable so tests can jump past a lifetime. */
+  now?: () => number
+}
+
+type Done = (error?: unknown, value?: session.SessionData | null) => void
+
+function userIdOf(data: session.SessionData): number | null {
+  const user = (data as { passport?: { user?: unknown } }).passport?.user
+  return typeof user === 'number' ? user : null
+}
+
+/** express-session's store on our data port, with a user id per row and an absolute end. */
+export class DatabaseSessionStore extends session.Store {
+  private readonly now: () => number
+  private writes = 0
+
+  constructor(
+    private readonly sessions: SessionRepository,
+    private readonly lifetimes: SessionLifetimes,
+  ) {
+    super()
+    this.now = lifetimes.now ?? Date.now
+  }
+
+  private settle(work: Promise<session.SessionData | null | void>, done?: Done) {
+    work.then((value) => done?.(null, value ?? null)).catch((error: unknown) => done?.(error))
+  }
+
+  private async sweepNowAndThen(now: number) {
+    // Ended rows are removed every hundred writes, so the table stays small without a timer.
+    this.writes += 1
+    if (this.writes % 100 === 0) await this.sessions.removeEnded(now, now - this.lifetimes.maxAgeMs)
+  }
+
+  override get(sid: string, done: Done): void {
+    this.settle(
+      (async () => {
+        const row = await this.sessions.find(sid)
+        const now = this.now()
+        if (!row) return null
+        if (row.expiresAt <= now || row.startedAt + this.lifetimes.maxAgeMs <= now) {
+          await this.sessions.remove(sid)
+          return null
+        }
+        return JSON.parse(row.data) as session.SessionData
+      })(),
+      done,
+    )
+  }
+
+  override set(sid: string, data: session.SessionData, done?: (error?: unknown) => void): void {
+    const now = this.now()
+    this.settle(
+      (async () => {
+        await this.sessions.save({
+          id: sid,
+          userId: userIdOf(data),
+          data: JSON.stringify(data),
+          expiresAt: now + this.lifetimes.idleMs,
+          startedAt: now,
+        })
+        await this.sweepNowAndThen(now)
+      })(),
+      done,
+    )
+  }
+
+  override touch(sid: string, _data: session.SessionData, done?: (error?: unknown) => void): void {
+    this.settle(this.sessions.touch(sid, this.now() + this.lifetimes.idleMs), done)
+  }
+
+  override destroy(sid: string, done?: (error?: unknown) => void): void {
+    this.settle(this.sessions.remove(sid), done)
+  }
+}
