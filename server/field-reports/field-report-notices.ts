@@ -1,4 +1,3 @@
-import type { User } from '../../shared/schemas/auth'
 import type { FieldReport } from '../../shared/schemas/field-reports'
 import { can } from '../../shared/permissions'
 import { toIsoTime } from '../db/database'
@@ -38,11 +37,10 @@ export class FieldReportNotices {
     const last = await this.outboxRows.lastQueued(DIGEST)
     const lastAt = last ? new Date(toIsoTime(last)).getTime() : 0
     if (this.clock().getTime() - lastAt < HOUR) return 0
-    const admin: User = { id: 0, email: '', name: 'digest', role: 'admin' }
-    const waiting = (await this.reports.list({ status: 'submitted', page: 1, pageSize: 100 }, admin)).items
+    const waiting = await this.reports.waitingForReview(100)
     const fresh = waiting.filter((report) => new Date(report.createdAt).getTime() > lastAt)
     if (fresh.length === 0) return 0
-    const reviewers = (await this.users.list()).filter((user) => can(user.role, 'field-reports.review'))
+    const reviewers = (await this.users.list()).filter((user) => !user.disabled && can(user.role, 'field-reports.review'))
     for (const reviewer of reviewers) {
       await this.outbox.enqueue({
         kind: DIGEST,

@@ -91,6 +91,13 @@ export class FieldReportService {
     }
   }
 
+  /** The newest reports no editor has decided yet, whoever filed them (for the editors' digest). */
+  async waitingForReview(limit: number): Promise<FieldReport[]> {
+    const { rows } = await this.repository.page({ status: 'submitted' }, 0, limit)
+    const photos = await this.repository.photosOf(rows.map((row) => row.id))
+    return rows.map((row) => toReport(row, photos.filter((photo) => photo.reportId === row.id)))
+  }
+
   async get(id: number, user: User): Promise<FieldReport> {
     const row = await this.visible(id, user)
     return toReport(row, await this.repository.photosOf([id]))
