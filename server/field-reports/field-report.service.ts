@@ -95,7 +95,12 @@ export class FieldReportService {
   async waitingForReview(limit: number): Promise<FieldReport[]> {
     const { rows } = await this.repository.page({ status: 'submitted' }, 0, limit)
     const photos = await this.repository.photosOf(rows.map((row) => row.id))
-    return rows.map((row) => toReport(row, photos.filter((photo) => photo.reportId === row.id)))
+    return rows.map((row) =>
+      toReport(
+        row,
+        photos.filter((photo) => photo.reportId === row.id),
+      ),
+    )
   }
 
   async get(id: number, user: User): Promise<FieldReport> {
