@@ -17,6 +17,7 @@ import { linkRoutes } from './fitment/links.routes'
 import { importRoutes } from './imports/imports.routes'
 import { fieldReportRoutes } from './field-reports/field-reports.routes'
 import { mailRoutes } from './mail/mail.routes'
+import { stockRoutes } from './stock/stock.routes'
 import type { Services } from './services'
 
 export type AppOptions = {
@@ -49,6 +50,7 @@ export async function createApp({ config, dataSource, services, version, clientD
   api.use(importRoutes(services, config))
   api.use(fieldReportRoutes(services, { photoMaxBytes: config.photoMaxBytes }))
   api.use(mailRoutes(services.outbox))
+  api.use(stockRoutes(services.stock))
   api.use(requireSignIn, notFoundApi)
   app.use('/api', api)
 

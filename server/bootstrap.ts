@@ -54,5 +54,6 @@ export async function prepareDatabase(config: AppConfig): Promise<Prepared> {
   await services.photos.removeStaleTemporaries()
   // The fit graph is read once, here, before the app answers; writes then apply to it as deltas.
   await services.graphIndex.load()
+  await services.stockIndex.load()
   return { dataSource, rules, services, seeded }
 }

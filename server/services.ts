@@ -20,6 +20,9 @@ import { FieldReportService } from './field-reports/field-report.service'
 import { PhotoStorage } from './field-reports/photo-storage'
 import { FieldReportNotices } from './field-reports/field-report-notices'
 import { Mailer } from './mail/mailer'
+import { StockIndex } from './stock/stock-index'
+import { StockRepository } from './stock/stock.repository'
+import { StockService } from './stock/stock.service'
 import { OutboxRepository } from './mail/outbox.repository'
 import { OutboxService } from './mail/outbox.service'
 import { FieldReportEvidence } from './field-reports/field-report-evidence'
@@ -33,6 +36,8 @@ export function createServices(dataSource: DataSource, config: AppConfig, rules:
   const modifications = new ModificationService(dataSource)
   const evaluation = new BuildEvaluationService(dataSource, parts, graphIndex, rules, modifications)
   const photos = new PhotoStorage(config.uploadDir)
+  const stockRows = new StockRepository(databaseOf(dataSource))
+  const stockIndex = new StockIndex(stockRows)
   const users = new UserService(dataSource)
   const outboxRows = new OutboxRepository(databaseOf(dataSource))
   const outbox = new OutboxService(outboxRows, new Mailer({ smtpUrl: config.smtpUrl, mailDir: config.mailDir, from: config.mailFrom }))
@@ -53,6 +58,7 @@ export function createServices(dataSource: DataSource, config: AppConfig, rules:
       new InferredFits(dataSource, rules),
       modifications,
       new FieldReportEvidence(databaseOf(dataSource)),
+      stockIndex,
     ),
     graph: new GraphService(parts, graphIndex),
     evaluation,
@@ -63,6 +69,8 @@ export function createServices(dataSource: DataSource, config: AppConfig, rules:
     imports: new ImportService(dataSource, { maxRows: config.importMaxRows }, graphIndex),
     exports: new ExportService(dataSource),
     photos,
+    stockIndex,
+    stock: new StockService(stockRows, parts, stockIndex),
     fieldReports,
     fieldReportReview: new FieldReportReviewService(dataSource, fieldReports, graphIndex, fieldReportNotices),
   }

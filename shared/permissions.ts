@@ -14,6 +14,7 @@ export const PERMISSIONS = {
   'users.manage': ['admin'],
   'field-reports.file': ['admin', 'editor', 'tech'],
   'field-reports.review': ['admin', 'editor'],
+  'stock.manage': ['admin', 'editor', 'counter'],
 } as const satisfies Record<string, readonly Role[]>
 
 export type Permission = keyof typeof PERMISSIONS

@@ -14,6 +14,8 @@ import { FieldReportEntity } from '../field-reports/field-report.entity'
 import { FieldReportPhotoEntity } from '../field-reports/field-report-photo.entity'
 import { FieldReportLinkEntity } from '../field-reports/field-report-link.entity'
 import { MailOutboxEntity } from '../mail/mail-outbox.entity'
+import { SiteEntity } from '../stock/site.entity'
+import { StockItemEntity } from '../stock/stock-item.entity'
 
 export const entities = [
   UserEntity,
@@ -32,4 +34,6 @@ export const entities = [
   FieldReportPhotoEntity,
   FieldReportLinkEntity,
   MailOutboxEntity,
+  SiteEntity,
+  StockItemEntity,
 ]

@@ -1,3 +1,5 @@
+import { Stock1796213287641 } from '../migrations/1796213287641-Stock'
+import { Stock1796213288773 as PostgresStock1796213288773 } from '../migrations/postgres/1796213288773-Stock'
 import { MailOutbox1796212721111 } from '../migrations/1796212721111-MailOutbox'
 import { MailOutbox1796212722016 as PostgresMailOutbox1796212722016 } from '../migrations/postgres/1796212722016-MailOutbox'
 import { FieldReports1796211781089 } from '../migrations/1796211781089-FieldReports'
@@ -20,6 +22,7 @@ export const migrations = [
   FieldReports1796211781089,
   SessionsByUser1796212625077,
   MailOutbox1796212721111,
+  Stock1796213287641,
 ]
 
 /** PostgreSQL's, generated from the same entities (`npx tsx server/db/generate-migration.ts Name --postgres`). */
@@ -29,4 +32,5 @@ export const postgresMigrations = [
   PostgresFieldReports1796211781982,
   PostgresSessionsByUser1796212625998,
   PostgresMailOutbox1796212722016,
+  PostgresStock1796213288773,
 ]

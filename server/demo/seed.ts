@@ -1,3 +1,4 @@
+import { siteInputSchema, stockInputSchema } from '../../shared/schemas/stock'
 import { readdirSync, readFileSync, statSync } from 'node:fs'
 import path from 'node:path'
 import type Database from 'better-sqlite3'
@@ -97,9 +98,16 @@ const SEEDED_KEY = 'demo-seeded'
  * reported at the next start rather than silently left half-filled.
  * Returns whether it seeded.
  */
+/** The demo sites and units on their shelves: every condition and status appears. */
+async function seedStock(stock: Services['stock'], file: string) {
+  const demo = JSON.parse(readFileSync(file, 'utf8')) as { sites: unknown[]; units: unknown[] }
+  for (const site of demo.sites) await stock.createSite(siteInputSchema.parse(site))
+  for (const unit of demo.units) await stock.create(stockInputSchema.parse(unit))
+}
+
 export async function seedDemo(
   dataSource: DataSource,
-  services: Pick<Services, 'users' | 'imports' | 'graphIndex'>,
+  services: Pick<Services, 'users' | 'imports' | 'graphIndex' | 'stock'>,
   demoDir: string,
 ): Promise<boolean> {
   const { users, imports } = services
@@ -135,6 +143,7 @@ export async function seedDemo(
     .sort()
   for (const file of partFiles) await importDemoFile(imports, demoDir, `parts/${file}`, 'parts', editor)
   await importDemoFile(imports, demoDir, 'links.csv', 'links', editor)
+  await seedStock(services.stock, path.join(demoDir, 'stock.json'))
   await inTransaction(dataSource, (db) => {
     seedProposedLinks(db, path.join(demoDir, 'proposed-links.csv'))
     seedBuilds(db, path.join(demoDir, 'builds.json'), tech.id)

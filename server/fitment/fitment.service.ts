@@ -10,6 +10,7 @@ import { reviewedFits, type ReviewedFit } from './graph-search'
 import type { ModificationService } from '../catalogue/modification.service'
 import type { PartService } from '../catalogue/part.service'
 import type { LinkEvidence } from '../field-reports/field-report-evidence'
+import type { StockIndex } from '../stock/stock-index'
 
 export type { FitsQuery }
 
@@ -23,6 +24,7 @@ export class FitmentService {
     private readonly inferred: InferredFits,
     private readonly modifications: ModificationService,
     private readonly evidence: { forLinks(linkIds: readonly number[]): Promise<Map<number, LinkEvidence>> },
+    private readonly stock: Pick<StockIndex, 'has' | 'of'>,
   ) {}
 
   /**
@@ -41,7 +43,8 @@ export class FitmentService {
     const offset = (query.page - 1) * query.pageSize
     const groups: PageGroup[] = []
     const chains = new Map<Found, Chain>()
-    for (const group of groupReviewed(graph, reviewed, query)) {
+    const only = query.inStock ? (partId: number) => this.stock.has(partId) : undefined
+    for (const group of groupReviewed(graph, reviewed, query, only)) {
       const byTarget = new Map(group.fits.map((fit) => [fit.target, fit]))
       const page = pageByNumber([...byTarget.keys()], (id) => graph.partNumberOf(id), offset, query.pageSize)
       const pageChains = page.map((target) => {
@@ -61,6 +64,7 @@ export class FitmentService {
         kind: query.kind,
         offset,
         limit: query.pageSize,
+        only,
       })
       for (const { kind, relation, total } of answer.groups) {
         const found = answer.found.filter((item) => item.relation === relation && graph.kindOf(item.partId) === kind)
@@ -95,6 +99,7 @@ export class FitmentService {
           modifications: found.modificationNames.flatMap((name) => mods.get(name) ?? []),
           explanation: found.explanation,
           fieldReports: evidence.get(chains.get(found)?.link.id ?? -1) ?? { confirmed: 0, contradicted: 0 },
+          stock: this.stock.of(found.partId),
         },
       ]
     }
@@ -116,12 +121,18 @@ export class FitmentService {
 }
 
 /** Reviewed fits by kind and relation, under the query's filters. */
-function groupReviewed(graph: FitGraph, reviewed: Map<number, ReviewedFit>, query: Pick<FitsQuery, 'kind' | 'relation'>): ReviewedGroup[] {
+function groupReviewed(
+  graph: FitGraph,
+  reviewed: Map<number, ReviewedFit>,
+  query: Pick<FitsQuery, 'kind' | 'relation'>,
+  only?: (partId: number) => boolean,
+): ReviewedGroup[] {
   const groups = new Map<string, ReviewedGroup>()
   for (const fit of reviewed.values()) {
     const kind = graph.kindOf(fit.target)
     const relation = RELATIONS[graph.links.relation[fit.slot]!]!
     if ((query.kind && kind !== query.kind) || (query.relation && relation !== query.relation)) continue
+    if (only && !only(fit.target)) continue
     const key = `${kind}|${relation}`
     let group = groups.get(key)
     if (!group) groups.set(key, (group = { kind, relation, source: 'reviewed', fits: [] }))

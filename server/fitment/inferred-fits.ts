@@ -11,7 +11,7 @@ import type { Found } from './found'
 
 type RuleCandidate = { id: number; kind: PartKind; attributes: string; yearTo: number | null }
 /** One page of each (kind, relation) group: the items at [offset, offset + limit) in part-number order. */
-export type InferredQuery = { relation?: Relation; kind?: PartKind; offset: number; limit: number }
+export type InferredQuery = { relation?: Relation; kind?: PartKind; offset: number; limit: number; only?: (partId: number) => boolean }
 /** The page's answers, and every group's honest total (parts in `exclude` never count). */
 export type InferredAnswer = { found: Found[]; groups: { kind: SlotId; relation: Relation; total: number }[] }
 
@@ -45,7 +45,7 @@ export class InferredFits {
     const counts = new Map<string, number>()
     const found: Found[] = []
     for (const candidate of candidates) {
-      if (exclude.has(candidate.id)) continue
+      if (exclude.has(candidate.id) || (query.only && !query.only(candidate.id))) continue
       const otherKind = candidate.kind as SlotId
       const memoKey = `${otherKind}|${candidate.yearTo}|${candidate.attributes}`
       let summary = judged.get(memoKey)

@@ -1,3 +1,4 @@
+import { availabilitySchema, NO_STOCK } from './stock'
 import { z } from 'zod'
 import { partSchema } from './part'
 import { partKindSchema } from './part-kinds'
@@ -82,6 +83,8 @@ export const fitResultSchema = z.object({
   explanation: z.array(explanationStepSchema),
   /** Approved field reports that found the same on a car, or found otherwise (the link is then worth a second look). */
   fieldReports: z.object({ confirmed: z.number().int(), contradicted: z.number().int() }).default({ confirmed: 0, contradicted: 0 }),
+  /** What is on the shelf of this part. */
+  stock: availabilitySchema.default(NO_STOCK),
 })
 export type FitResult = z.infer<typeof fitResultSchema>
 
@@ -103,6 +106,11 @@ export const fitsQuerySchema = z.object({
     .enum(['0', '1', 'true', 'false'], { error: () => 'Inferred must be 0 or 1.' })
     .optional()
     .transform((value) => value !== '0' && value !== 'false'),
+  /** Only parts with a unit available on a shelf. */
+  inStock: z
+    .enum(['0', '1', 'true', 'false'], { error: () => 'In stock must be 0 or 1.' })
+    .optional()
+    .transform((value) => value === '1' || value === 'true'),
   /** The page of every group, from 1; each group says how many answers it holds in all. */
   page: wholeNumber('Page', 1, 100_000).default(1),
   pageSize: wholeNumber('Page size', 1, FIT_PAGE_SIZE_MAX).default(FIT_PAGE_SIZE_DEFAULT),

@@ -3,13 +3,14 @@ import type { PartKind } from '@shared/schemas/part-kinds'
 import { request } from './http'
 
 /** Which groups and which page of them; with kind and relation both given the answer is that one group. */
-export type FitsRequest = { relation?: Relation; kind?: PartKind; inferred?: boolean; page?: number; pageSize?: number }
+export type FitsRequest = { relation?: Relation; kind?: PartKind; inferred?: boolean; inStock?: boolean; page?: number; pageSize?: number }
 
-function fitsQuery({ relation, kind, inferred = true, page, pageSize }: FitsRequest): string {
+function fitsQuery({ relation, kind, inferred = true, inStock = false, page, pageSize }: FitsRequest): string {
   const query = new URLSearchParams()
   if (relation) query.set('relation', relation)
   if (kind) query.set('kind', kind)
   if (!inferred) query.set('inferred', '0')
+  if (inStock) query.set('inStock', '1')
   if (page && page > 1) query.set('page', String(page))
   if (pageSize) query.set('pageSize', String(pageSize))
   const text = query.toString()

@@ -10,7 +10,7 @@ import { useRemote } from './useRemote'
 /**
  * The part page: the part, its identical numbers and what fits it. The server
  * answers every group's total and its first page; the filters and the page of
- * one group live in the address (`?kind=block&relation=fits&page=2&inferred=0`)
+ * one group live in the address (`?kind=block&relation=fits&page=2&inferred=0&stock=1`)
  * so a counter can send exactly this view. Filtering the overview is done here
  * so every filter can show how many answers it holds.
  */
@@ -24,12 +24,13 @@ export function usePartFits(partNumber: Ref<string>) {
     relation: queryOneOf(route.query.relation, RELATIONS),
     kind: queryKind(route.query.kind),
     inferred: queryText(route.query.inferred) !== '0',
+    inStock: queryText(route.query.stock) === '1',
     page: Math.max(1, queryInt(route.query.page) ?? 1),
   }))
   /** A page beyond the first is of one group: kind and relation both chosen. */
   const pagedGroup = computed(() => {
-    const { kind, relation, page, inferred } = filters.value
-    return kind && relation && page > 1 ? { kind, relation, page, inferred } : null
+    const { kind, relation, page, inferred, inStock } = filters.value
+    return kind && relation && page > 1 ? { kind, relation, page, inferred, inStock } : null
   })
 
   function setFilters(change: Partial<FitFilters>) {
@@ -39,6 +40,7 @@ export function usePartFits(partNumber: Ref<string>) {
         ...(next.relation ? { relation: next.relation } : {}),
         ...(next.kind ? { kind: next.kind } : {}),
         ...(next.inferred ? {} : { inferred: '0' }),
+        ...(next.inStock ? { stock: '1' } : {}),
         ...(next.page > 1 ? { page: String(next.page) } : {}),
       },
     })
@@ -49,8 +51,9 @@ export function usePartFits(partNumber: Ref<string>) {
     setFilters({ kind, relation, page })
   }
 
-  const load = () => remote.run((signal) => fitmentApi.fits(partNumber.value, { inferred: filters.value.inferred }, signal))
-  watch([partNumber, () => filters.value.inferred], load, { immediate: true })
+  const load = () =>
+    remote.run((signal) => fitmentApi.fits(partNumber.value, { inferred: filters.value.inferred, inStock: filters.value.inStock }, signal))
+  watch([partNumber, () => filters.value.inferred, () => filters.value.inStock], load, { immediate: true })
   const loadPage = () => {
     const group = pagedGroup.value
     if (group) void paged.run((signal) => fitmentApi.fits(partNumber.value, group, signal))

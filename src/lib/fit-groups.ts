@@ -2,7 +2,7 @@ import type { FitGroupPage, Relation } from '@shared/schemas/fitment'
 import { PART_KINDS, type PartKind } from '@shared/schemas/part-kinds'
 import { RELATIONS } from '@shared/schemas/fitment'
 
-export type FitFilters = { relation?: Relation; kind?: PartKind; inferred: boolean; page: number }
+export type FitFilters = { relation?: Relation; kind?: PartKind; inferred: boolean; inStock?: boolean; page: number }
 
 /** One kind of answers, by relation; each relation holds its reviewed and its inferred page. */
 export type FitGroup = {

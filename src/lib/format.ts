@@ -46,3 +46,8 @@ export function formatDuration(minutes: number, options: FormatOptions = {}): st
     unit(rest, 'minute', options.locale),
   ])
 }
+
+/** Money held in integer cents, shown with two decimals in the browser's locale. */
+export function formatCents(cents: number, options: FormatOptions = {}): string {
+  return formatDecimal(cents / 100, 2, options)
+}

@@ -1,6 +1,7 @@
 import type { Candidate, Evaluation, PairJudgement } from '../../shared/schemas/build'
 import type { FitResult } from '../../shared/schemas/fitment'
 import type { Part } from '../../shared/schemas/part'
+import { NO_STOCK } from '../../shared/schemas/stock'
 import type { PartKind } from '../../shared/schemas/part-kinds'
 
 /** A part with only what a test names; the rest is plain filler. */
@@ -29,6 +30,7 @@ export function makeFit(part: Part, relation: FitResult['relation'], review: Fit
     modifications: [],
     explanation: [],
     fieldReports: { confirmed: 0, contradicted: 0 },
+    stock: { ...NO_STOCK },
   }
 }
 

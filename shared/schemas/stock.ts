@@ -1,0 +1,110 @@
+import { z } from 'zod'
+
+export const STOCK_CONDITIONS = ['new', 'remanufactured', 'used', 'core'] as const
+export const stockConditionSchema = z.enum(STOCK_CONDITIONS, { error: () => `Condition is one of ${STOCK_CONDITIONS.join(', ')}.` })
+export type StockCondition = z.infer<typeof stockConditionSchema>
+
+export const USED_GRADES = ['A', 'B', 'C'] as const
+export const STOCK_STATUSES = ['available', 'reserved', 'sold'] as const
+export const stockStatusSchema = z.enum(STOCK_STATUSES, { error: () => `Status is one of ${STOCK_STATUSES.join(', ')}.` })
+export type StockStatus = z.infer<typeof stockStatusSchema>
+
+const cents = (what: string) =>
+  z
+    .number({ error: `${what} is a number of cents.` })
+    .int(`${what} is a whole number of cents.`)
+    .min(0, `${what} cannot be negative.`)
+    .max(100_000_000, `${what} is more than a million.`)
+
+export const siteInputSchema = z.strictObject({
+  name: z.string().trim().min(1, 'Name the site.').max(100, 'Keep the site name under 100 characters.'),
+  address: z.string().trim().max(300, 'Keep the address under 300 characters.').default(''),
+})
+export type SiteInput = z.infer<typeof siteInputSchema>
+export const siteSchema = z.object({ id: z.number().int(), name: z.string(), address: z.string() })
+export type Site = z.infer<typeof siteSchema>
+
+const stockFields = {
+  condition: stockConditionSchema,
+  /** For used parts: A (like new) to C (worn but serviceable). */
+  grade: z
+    .enum(USED_GRADES, { error: () => 'Grade is A, B or C.' })
+    .nullable()
+    .default(null),
+  mileageKm: z.number().int().min(0, 'Mileage cannot be negative.').max(5_000_000).nullable().default(null),
+  donorVin: z.string().trim().toUpperCase().max(17, 'A VIN has 17 characters.').nullable().default(null),
+  donorYear: z.number().int().min(1950).max(2100).nullable().default(null),
+  damageNotes: z.string().trim().max(2000).default(''),
+  /** Where on the site: shelf, bin, rack. */
+  location: z.string().trim().max(100).default(''),
+  priceCents: cents('Price'),
+  coreChargeCents: cents('Core charge').default(0),
+  status: stockStatusSchema.default('available'),
+  /** The code on the unit's label, scanned at the counter. */
+  label: z.string().trim().min(1).max(60).nullable().default(null),
+}
+
+export const stockInputSchema = z
+  .strictObject({
+    partNumber: z.string().trim().min(1, 'Give a part number.').max(100),
+    site: z.string().trim().min(1, 'Name the site.').max(100),
+    ...stockFields,
+  })
+  .superRefine((item, ctx) => {
+    if (item.grade && item.condition !== 'used')
+      ctx.addIssue({ code: 'custom', path: ['grade'], message: 'Only used parts carry a grade.' })
+  })
+export type StockInput = z.infer<typeof stockInputSchema>
+
+export const stockUpdateSchema = z
+  .strictObject({
+    site: z.string().trim().min(1).max(100).optional(),
+    location: stockFields.location.optional(),
+    priceCents: cents('Price').optional(),
+    coreChargeCents: cents('Core charge').optional(),
+    status: stockStatusSchema.optional(),
+    damageNotes: stockFields.damageNotes.optional(),
+    grade: stockFields.grade.optional(),
+  })
+  .refine((value) => Object.keys(value).length > 0, 'Change at least one field.')
+export type StockUpdate = z.infer<typeof stockUpdateSchema>
+
+export const stockItemSchema = z.object({
+  id: z.number().int(),
+  partNumber: z.string(),
+  site: siteSchema,
+  condition: stockConditionSchema,
+  grade: z.enum(USED_GRADES).nullable(),
+  mileageKm: z.number().nullable(),
+  donorVin: z.string().nullable(),
+  donorYear: z.number().nullable(),
+  damageNotes: z.string(),
+  location: z.string(),
+  priceCents: z.number().int(),
+  coreChargeCents: z.number().int(),
+  status: stockStatusSchema,
+  label: z.string().nullable(),
+  updatedAt: z.string(),
+})
+export type StockItem = z.infer<typeof stockItemSchema>
+
+export const stockListQuerySchema = z.object({
+  part: z.string().trim().max(100).optional(),
+  site: z.string().trim().max(100).optional(),
+  status: stockStatusSchema.optional(),
+  page: z.coerce.number().int().min(1).max(100_000).default(1),
+  pageSize: z.coerce.number().int().min(1).max(200).default(50),
+})
+export const stockListSchema = z.object({ items: z.array(stockItemSchema), total: z.number().int() })
+export type StockList = z.infer<typeof stockListSchema>
+
+/** What a what-fits line or a slot suggestion says about the shelf: available units of the part. */
+export const availabilitySchema = z.object({
+  available: z.number().int(),
+  bestCondition: stockConditionSchema.nullable(),
+  minPriceCents: z.number().int().nullable(),
+  maxPriceCents: z.number().int().nullable(),
+  sites: z.array(z.string()),
+})
+export type Availability = z.infer<typeof availabilitySchema>
+export const NO_STOCK: Availability = { available: 0, bestCondition: null, minPriceCents: null, maxPriceCents: null, sites: [] }
