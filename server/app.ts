@@ -18,6 +18,7 @@ import { importRoutes } from './imports/imports.routes'
 import { fieldReportRoutes } from './field-reports/field-reports.routes'
 import { mailRoutes } from './mail/mail.routes'
 import { stockRoutes } from './stock/stock.routes'
+import { vehicleRoutes } from './vehicles/vehicles.routes'
 import type { Services } from './services'
 
 export type AppOptions = {
@@ -51,6 +52,7 @@ export async function createApp({ config, dataSource, services, version, clientD
   api.use(fieldReportRoutes(services, { photoMaxBytes: config.photoMaxBytes }))
   api.use(mailRoutes(services.outbox))
   api.use(stockRoutes(services.stock))
+  api.use(vehicleRoutes(services.vehicles))
   api.use(requireSignIn, notFoundApi)
   app.use('/api', api)
 

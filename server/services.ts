@@ -23,6 +23,8 @@ import { Mailer } from './mail/mailer'
 import { StockIndex } from './stock/stock-index'
 import { StockRepository } from './stock/stock.repository'
 import { StockService } from './stock/stock.service'
+import { VehicleRepository } from './vehicles/vehicle.repository'
+import { VehicleService } from './vehicles/vehicle.service'
 import { OutboxRepository } from './mail/outbox.repository'
 import { OutboxService } from './mail/outbox.service'
 import { FieldReportEvidence } from './field-reports/field-report-evidence'
@@ -71,6 +73,7 @@ export function createServices(dataSource: DataSource, config: AppConfig, rules:
     photos,
     stockIndex,
     stock: new StockService(stockRows, parts, stockIndex),
+    vehicles: new VehicleService(new VehicleRepository(databaseOf(dataSource)), parts),
     fieldReports,
     fieldReportReview: new FieldReportReviewService(dataSource, fieldReports, graphIndex, fieldReportNotices),
   }

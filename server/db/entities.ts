@@ -16,6 +16,8 @@ import { FieldReportLinkEntity } from '../field-reports/field-report-link.entity
 import { MailOutboxEntity } from '../mail/mail-outbox.entity'
 import { SiteEntity } from '../stock/site.entity'
 import { StockItemEntity } from '../stock/stock-item.entity'
+import { VehicleApplicationEntity } from '../vehicles/vehicle-application.entity'
+import { VehicleOriginalEntity } from '../vehicles/vehicle-original.entity'
 
 export const entities = [
   UserEntity,
@@ -36,4 +38,6 @@ export const entities = [
   MailOutboxEntity,
   SiteEntity,
   StockItemEntity,
+  VehicleApplicationEntity,
+  VehicleOriginalEntity,
 ]

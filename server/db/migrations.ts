@@ -1,3 +1,5 @@
+import { Vehicles1796213931900 } from '../migrations/1796213931900-Vehicles'
+import { Vehicles1796213933784 as PostgresVehicles1796213933784 } from '../migrations/postgres/1796213933784-Vehicles'
 import { Stock1796213287641 } from '../migrations/1796213287641-Stock'
 import { Stock1796213288773 as PostgresStock1796213288773 } from '../migrations/postgres/1796213288773-Stock'
 import { MailOutbox1796212721111 } from '../migrations/1796212721111-MailOutbox'
@@ -23,6 +25,7 @@ export const migrations = [
   SessionsByUser1796212625077,
   MailOutbox1796212721111,
   Stock1796213287641,
+  Vehicles1796213931900,
 ]
 
 /** PostgreSQL's, generated from the same entities (`npx tsx server/db/generate-migration.ts Name --postgres`). */
@@ -33,4 +36,5 @@ export const postgresMigrations = [
   PostgresSessionsByUser1796212625998,
   PostgresMailOutbox1796212722016,
   PostgresStock1796213288773,
+  PostgresVehicles1796213933784,
 ]

@@ -1,4 +1,5 @@
 import { siteInputSchema, stockInputSchema } from '../../shared/schemas/stock'
+import { vehicleInputSchema } from '../../shared/schemas/vehicles'
 import { readdirSync, readFileSync, statSync } from 'node:fs'
 import path from 'node:path'
 import type Database from 'better-sqlite3'
@@ -107,7 +108,7 @@ async function seedStock(stock: Services['stock'], file: string) {
 
 export async function seedDemo(
   dataSource: DataSource,
-  services: Pick<Services, 'users' | 'imports' | 'graphIndex' | 'stock'>,
+  services: Pick<Services, 'users' | 'imports' | 'graphIndex' | 'stock' | 'vehicles'>,
   demoDir: string,
 ): Promise<boolean> {
   const { users, imports } = services
@@ -144,6 +145,9 @@ export async function seedDemo(
   for (const file of partFiles) await importDemoFile(imports, demoDir, `parts/${file}`, 'parts', editor)
   await importDemoFile(imports, demoDir, 'links.csv', 'links', editor)
   await seedStock(services.stock, path.join(demoDir, 'stock.json'))
+  for (const vehicle of JSON.parse(readFileSync(path.join(demoDir, 'vehicles.json'), 'utf8')) as unknown[]) {
+    await services.vehicles.create(vehicleInputSchema.parse(vehicle))
+  }
   await inTransaction(dataSource, (db) => {
     seedProposedLinks(db, path.join(demoDir, 'proposed-links.csv'))
     seedBuilds(db, path.join(demoDir, 'builds.json'), tech.id)

@@ -82,6 +82,18 @@ const router = createRouter({
           meta: { permission: 'catalogue.edit', title: 'Review proposed links' },
         },
         {
+          path: 'vehicles',
+          name: 'vehicles',
+          component: () => import('@/views/VehiclesView.vue'),
+          meta: { permission: 'catalogue.read', title: 'Start from the vehicle' },
+        },
+        {
+          path: 'vehicles/:id(\\d+)',
+          name: 'vehicle',
+          component: () => import('@/views/VehicleView.vue'),
+          meta: { permission: 'catalogue.read', title: 'Vehicle' },
+        },
+        {
           path: 'field-reports',
           name: 'field-reports',
           component: () => import('@/views/FieldReportsView.vue'),
