@@ -39,7 +39,7 @@ export async function createApp({ config, dataSource, services, version, clientD
   const api = express.Router()
   api.use(healthRoutes(version))
   api.use(authRoutes(auth, { loginAttempts: config.loginAttempts }))
-  api.use(partRoutes(services.parts))
+  api.use(partRoutes(services.parts, services.partLookup))
   api.use(fitmentRoutes(services))
   api.use(buildRoutes(services))
   api.use(linkRoutes(services.links))

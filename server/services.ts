@@ -14,6 +14,7 @@ import { LinkService } from './fitment/link.service'
 import { ImportService } from './imports/import.service'
 import { ModificationService } from './catalogue/modification.service'
 import { PartService } from './catalogue/part.service'
+import { PartLookupService } from './catalogue/part-lookup.service'
 import { UserService } from './users/user.service'
 
 /** Every service, built once per app around one data source and one rule book. */
@@ -27,6 +28,7 @@ export function createServices(dataSource: DataSource, config: AppConfig, rules:
     rules,
     users: new UserService(dataSource),
     parts,
+    partLookup: new PartLookupService(dataSource, parts),
     graphIndex,
     modifications,
     fitment: new FitmentService(parts, graphIndex, new InferredFits(dataSource, rules), modifications),

@@ -1,4 +1,5 @@
 import { z } from 'zod'
+import { resolvedFromSchema } from './part-lookup'
 import { partSchema } from './part'
 import { partKindSchema } from './part-kinds'
 
@@ -125,6 +126,8 @@ export type FitGroupPage = z.infer<typeof fitGroupSchema>
 
 export const fitsResponseSchema = z.object({
   part: partSchema,
+  /** The mark the address named, when it was not the part's own number (a superseded number says so). */
+  resolvedFrom: resolvedFromSchema.nullable(),
   identical: z.array(partSchema),
   page: z.number().int(),
   pageSize: z.number().int(),
