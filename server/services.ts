@@ -8,6 +8,7 @@ import { BuildSheetService } from './builds/build-sheet.service'
 import { ExportService } from './imports/export.service'
 import { FitGraphIndex } from './fitment/fit-graph'
 import { FitmentService } from './fitment/fitment.service'
+import { SubstitutesService } from './fitment/substitutes.service'
 import { InferredFits } from './fitment/inferred-fits'
 import { GraphService } from './fitment/graph.service'
 import { LinkService } from './fitment/link.service'
@@ -33,6 +34,7 @@ export function createServices(dataSource: DataSource, config: AppConfig, rules:
     modifications,
     fitment: new FitmentService(parts, graphIndex, new InferredFits(dataSource, rules), modifications),
     graph: new GraphService(parts, graphIndex),
+    substitutes: new SubstitutesService(parts, graphIndex),
     evaluation,
     completion,
     fill: new BuildFillService(graphIndex, evaluation, completion),
