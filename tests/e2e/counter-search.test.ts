@@ -70,6 +70,20 @@ describe.skipIf(!run)('counter: the next customer from the part page', () => {
     await expect.poll(heading, within).toContain('TM-BL-2000')
   })
 
+  it('opens the heads that can replace this one from the part page, with what differs side by side', async () => {
+    await page.goto(`${server.url}/parts/TM-HD-1810`)
+    await page.getByRole('link', { name: 'Other cylinder heads that can replace this one' }).click()
+    await page.waitForURL(/\/parts\/TM-HD-1810\/substitutes$/)
+    const early = page.getByRole('article', { name: /TM-HD-1800/ })
+    await expect.poll(() => early.count(), within).toBe(1)
+    expect(await early.textContent()).toContain('TM-BL-1800')
+    expect(await early.getByRole('row', { name: /Chamber \(cc\)/ }).textContent()).toMatch(/46.*48/)
+    await saveScreenshot(page, 'counter-substitutes')
+    await page.setViewportSize({ width: 768, height: 1024 })
+    await saveScreenshot(page, 'counter-substitutes-768')
+    await page.setViewportSize({ width: 1366, height: 900 })
+  })
+
   it('keeps the top-bar search usable on a 768 px tablet, light and dark', async () => {
     await page.setViewportSize({ width: 768, height: 1024 })
     await page.goto(`${server.url}/parts/TM-BL-2010`)
@@ -85,6 +99,9 @@ describe.skipIf(!run)('counter: the next customer from the part page', () => {
     await page.goto(`${server.url}/parts/TM-BL-1999`)
     await expect.poll(() => page.getByRole('status').filter({ hasText: 'superseded' }).count(), within).toBe(1)
     await saveScreenshot(page, 'counter-superseded-dark')
+    await page.goto(`${server.url}/parts/TM-HD-1810/substitutes`)
+    await expect.poll(() => page.getByRole('article').count(), within).toBeGreaterThan(0)
+    await saveScreenshot(page, 'counter-substitutes-dark')
     await page.getByRole('button', { name: 'Use light theme' }).click()
   })
 })
