@@ -13,6 +13,7 @@ import { partRoutes } from './catalogue/parts.routes'
 import { userRoutes } from './users/users.routes'
 import { buildRoutes } from './builds/builds.routes'
 import { fitmentRoutes } from './fitment/fitment.routes'
+import { substituteRoutes } from './fitment/substitutes.routes'
 import { linkRoutes } from './fitment/links.routes'
 import { importRoutes } from './imports/imports.routes'
 import { fieldReportRoutes } from './field-reports/field-reports.routes'
@@ -43,8 +44,9 @@ export async function createApp({ config, dataSource, services, version, clientD
   const api = express.Router()
   api.use(healthRoutes(version))
   api.use(authRoutes(auth, { loginAttempts: config.loginAttempts }))
-  api.use(partRoutes(services.parts))
+  api.use(partRoutes(services.parts, services.partLookup))
   api.use(fitmentRoutes(services))
+  api.use(substituteRoutes(services.substitutes))
   api.use(buildRoutes(services))
   api.use(linkRoutes(services.links))
   api.use(userRoutes(services.users))

@@ -8,12 +8,14 @@ import { BuildSheetService } from './builds/build-sheet.service'
 import { ExportService } from './imports/export.service'
 import { FitGraphIndex } from './fitment/fit-graph'
 import { FitmentService } from './fitment/fitment.service'
+import { SubstitutesService } from './fitment/substitutes.service'
 import { InferredFits } from './fitment/inferred-fits'
 import { GraphService } from './fitment/graph.service'
 import { LinkService } from './fitment/link.service'
 import { ImportService } from './imports/import.service'
 import { ModificationService } from './catalogue/modification.service'
 import { PartService } from './catalogue/part.service'
+import { PartLookupService } from './catalogue/part-lookup.service'
 import { UserService } from './users/user.service'
 import { FieldReportRepository } from './field-reports/field-report.repository'
 import { FieldReportService } from './field-reports/field-report.service'
@@ -52,6 +54,7 @@ export function createServices(dataSource: DataSource, config: AppConfig, rules:
     outbox,
     fieldReportNotices,
     parts,
+    partLookup: new PartLookupService(dataSource, parts),
     graphIndex,
     modifications,
     fitment: new FitmentService(
@@ -63,6 +66,7 @@ export function createServices(dataSource: DataSource, config: AppConfig, rules:
       stockIndex,
     ),
     graph: new GraphService(parts, graphIndex),
+    substitutes: new SubstitutesService(parts, graphIndex),
     evaluation,
     completion,
     fill: new BuildFillService(graphIndex, evaluation, completion),

@@ -1,6 +1,7 @@
 import type { DataSource } from 'typeorm'
 import type { Part, PartList, PartListQuery } from '../../shared/schemas/part'
 import { normalisePartCode } from '../../shared/schemas/part'
+import type { ResolvedFrom } from '../../shared/schemas/part-lookup'
 import { databaseOf } from '../db/sqlite-connection'
 import { AppError } from '../errors/app-error'
 import { PartRepository, toPart, type PartRecord } from './part.repository'
@@ -37,6 +38,11 @@ export class PartService {
     return (await this.repository.byIds(ids)).map(toPart)
   }
 
+  /** Parts by id with their row ids, in the order of the ids given. */
+  async byIdsWithId(ids: number[]): Promise<PartRecord[]> {
+    return this.repository.byIds(ids)
+  }
+
   /** A part by its number, any of its marks or a superseded number, as typed at the counter. */
   async findEntity(code: string): Promise<PartRecord | null> {
     const exact = await this.repository.byNumber(code)
@@ -45,6 +51,26 @@ export class PartService {
     if (!key) return null
     // A mark can sit on several parts (a casting shared by identical numbers): the first catalogued wins.
     return (await this.repository.byKey(key)) ?? (await this.repository.byMarkKey(key)) ?? null
+  }
+
+  /**
+   * The part with the mark it was found by, when the code was not its own
+   * number: so a superseded number can say so instead of quietly opening the current part.
+   */
+  async resolve(code: string): Promise<{ entity: PartRecord; resolvedFrom: ResolvedFrom | null } | null> {
+    const entity = await this.findEntity(code)
+    if (!entity) return null
+    const key = normalisePartCode(code)
+    if (entity.partNumber === code || normalisePartCode(entity.partNumber) === key) return { entity, resolvedFrom: null }
+    const mark = entity.marks.find((candidate) => normalisePartCode(candidate.value) === key)
+    return { entity, resolvedFrom: mark ? { type: mark.type, value: mark.value } : null }
+  }
+
+  /** The part with the mark it was found by, or 404. */
+  async requireResolved(code: string): Promise<{ entity: PartRecord; resolvedFrom: ResolvedFrom | null }> {
+    const resolved = await this.resolve(code)
+    if (!resolved) throw AppError.notFound(`No part with number or mark "${code}".`)
+    return resolved
   }
 
   /** The part, or 404: for a part named in the address. */

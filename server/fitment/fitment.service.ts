@@ -36,7 +36,7 @@ export class FitmentService {
    * link details and modifications are read for the page only.
    */
   async fitsFor(code: string, query: FitsQuery): Promise<FitsResponse> {
-    const entity = await this.parts.requireEntity(code)
+    const { entity, resolvedFrom } = await this.parts.requireResolved(code)
     const graph = await this.graphIndex.snapshot()
     const members = graph.classOf(entity.id)
     const reviewed = reviewedFits(graph, entity.id)
@@ -105,6 +105,7 @@ export class FitmentService {
     }
     return {
       part: byNumber.get(entity.partNumber)!,
+      resolvedFrom,
       identical: identical.flatMap((id) => partOf(id) ?? []),
       page: query.page,
       pageSize: query.pageSize,

@@ -1,5 +1,6 @@
 import { availabilitySchema, NO_STOCK } from './stock'
 import { z } from 'zod'
+import { resolvedFromSchema } from './part-lookup'
 import { partSchema } from './part'
 import { partKindSchema } from './part-kinds'
 
@@ -135,6 +136,8 @@ export type FitGroupPage = z.infer<typeof fitGroupSchema>
 
 export const fitsResponseSchema = z.object({
   part: partSchema,
+  /** The mark the address named, when it was not the part's own number (a superseded number says so). */
+  resolvedFrom: resolvedFromSchema.nullable(),
   identical: z.array(partSchema),
   page: z.number().int(),
   pageSize: z.number().int(),

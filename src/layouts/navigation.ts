@@ -12,7 +12,7 @@ export type NavigationLink = {
 
 /** The app's main areas, each shown only to roles that may use it. */
 export const NAVIGATION: NavigationLink[] = [
-  { name: 'lookup', label: 'Look up', icon: 'pi-search', permission: 'catalogue.read', area: ['part'] },
+  { name: 'lookup', label: 'Look up', icon: 'pi-search', permission: 'catalogue.read', area: ['part', 'part-substitutes'] },
   { name: 'vehicles', label: 'Vehicles', icon: 'pi-car', permission: 'catalogue.read', area: ['vehicle'] },
   { name: 'parts', label: 'Catalogue', icon: 'pi-list', permission: 'catalogue.read' },
   { name: 'review', label: 'Review', icon: 'pi-check-square', permission: 'catalogue.edit' },

@@ -40,6 +40,12 @@ const router = createRouter({
           meta: { permission: 'catalogue.read', title: 'Part' },
         },
         {
+          path: 'parts/:partNumber/substitutes',
+          name: 'part-substitutes',
+          component: () => import('@/views/SubstitutesView.vue'),
+          meta: { permission: 'catalogue.read', title: 'Substitutes' },
+        },
+        {
           path: 'graph',
           name: 'graph-home',
           component: () => import('@/views/GraphView.vue'),

@@ -9,7 +9,7 @@ describe('quote arithmetic in cents', () => {
     [{ kind: 'labour' as const, quantity: 0.25, unitPriceCents: 8450 }, 2113, '0.25 h × 84.50 = 21.125, half up to 21.13'],
     [{ kind: 'labour' as const, quantity: 1 / 3, minutes: 20, unitPriceCents: 9000 }, 3000, '20 min at 90.00 an hour = 30.00'],
     [{ kind: 'labour' as const, quantity: 7 / 60, minutes: 7, unitPriceCents: 8450 }, 986, '7 min at 84.50 an hour = 9.8583, to 9.86'],
-  ])('prices %j as %i cents (%s)', (line, cents) => {
+  ])('prices %j as %i cents (%s)', (line: Parameters<typeof lineCents>[0], cents: number, _working: string) => {
     expect(lineCents(line)).toBe(cents)
   })
 
