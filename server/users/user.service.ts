@@ -7,10 +7,12 @@ import { AppError } from '../errors/app-error'
 import { SessionRepository } from '../auth/session.repository'
 import { databaseOf } from '../db/sqlite-connection'
 import { sqliteTime } from '../db/sqlite-database'
+import { BCRYPT_ROUNDS, checkNewPassword, hashPassword, needsRehash } from '../auth/password-policy'
 
-const BCRYPT_ROUNDS = 10
 // Compared against when the e-mail is unknown, so both failures take the same time.
 const NO_SUCH_USER_HASH = bcrypt.hashSync('no such user', BCRYPT_ROUNDS)
+/** The seeded demo accounts' cost: their password is published anyway, and seeding stays quick. */
+const DEMO_ROUNDS = 10
 
 export function toUser(entity: UserEntity): User {
   return { id: entity.id, email: entity.email, name: entity.name, role: entity.role, disabled: entity.disabledAt !== null }
@@ -31,6 +33,8 @@ export class UserService {
     const matches = await bcrypt.compare(password, entity?.passwordHash ?? NO_SUCH_USER_HASH)
     if (!entity || !matches) return null
     if (entity.disabledAt) throw new AppError(403, 'account_disabled', 'This account is disabled. Ask an administrator to enable it.')
+    // The password is at hand only now, so this is when an older, cheaper hash is made again at today's cost.
+    if (needsRehash(entity.passwordHash)) await this.users.update({ id: entity.id }, { passwordHash: await hashPassword(password) })
     return toUser(entity)
   }
 
@@ -44,7 +48,18 @@ export class UserService {
     return (await this.users.find({ order: { email: 'ASC' } })).map(toUser)
   }
 
+  /** Adds a user; the password must not be a common one. */
   async create(input: { email: string; name: string; role: Role; password: string }): Promise<User> {
+    checkNewPassword(input.password)
+    return this.insert(input, await hashPassword(input.password))
+  }
+
+  /** The demo accounts, on their published password: known on purpose, so the common-password check does not apply. */
+  async createDemo(input: { email: string; name: string; role: Role; password: string }): Promise<User> {
+    return this.insert(input, await hashPassword(input.password, DEMO_ROUNDS))
+  }
+
+  private async insert(input: { email: string; name: string; role: Role }, passwordHash: string): Promise<User> {
     if (await this.users.existsBy({ email: input.email.trim().toLowerCase() })) {
       throw AppError.conflict(`A user with e-mail ${input.email} exists already.`, [{ path: 'email', message: 'This e-mail is taken.' }])
     }
@@ -52,7 +67,7 @@ export class UserService {
       email: input.email.trim().toLowerCase(),
       name: input.name,
       role: input.role,
-      passwordHash: await bcrypt.hash(input.password, BCRYPT_ROUNDS),
+      passwordHash,
     })
     return toUser(await this.users.save(entity))
   }
@@ -65,7 +80,8 @@ export class UserService {
    * ends the user's sessions (but the acting one, when it is their own).
    */
   async update(id: number, change: UserUpdateInput, acting: { userId: number; sessionId?: string }): Promise<User> {
-    const passwordHash = change.password ? await bcrypt.hash(change.password, BCRYPT_ROUNDS) : null
+    if (change.password) checkNewPassword(change.password)
+    const passwordHash = change.password ? await hashPassword(change.password) : null
     await inTransaction(this.dataSource, (db) => {
       const current = db.prepare('SELECT role FROM user WHERE id = ?').get(id) as { role: Role } | undefined
       if (!current) throw AppError.notFound(`No user with id ${id}.`)
