@@ -5,6 +5,7 @@ import type { DataSource } from 'typeorm'
 import { createPassport } from './auth/passport'
 import { requireSignIn } from './auth/require-role'
 import { createSessionMiddleware } from './auth/session'
+import { createSignInThrottle } from './auth/sign-in-throttle'
 import type { AppConfig } from './config/env'
 import { errorHandler, notFoundApi } from './errors/error-handler'
 import { authRoutes } from './auth/auth.routes'
@@ -38,7 +39,7 @@ export async function createApp({ config, dataSource, services, version, clientD
 
   const api = express.Router()
   api.use(healthRoutes(version))
-  api.use(authRoutes(auth, { loginAttempts: config.loginAttempts }))
+  api.use(authRoutes(auth, { throttle: createSignInThrottle(dataSource, config.loginLimits) }))
   api.use(partRoutes(services.parts))
   api.use(fitmentRoutes(services))
   api.use(buildRoutes(services))

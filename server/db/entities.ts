@@ -9,11 +9,13 @@ import { PartMarkEntity } from '../catalogue/part-mark.entity'
 import { PartEntity } from '../catalogue/part.entity'
 import { PartWordEntity } from '../catalogue/part-word.entity'
 import { SessionEntity } from '../auth/session.entity'
+import { SignInThrottleEntity } from '../auth/sign-in-throttle.entity'
 import { UserEntity } from '../users/user.entity'
 
 export const entities = [
   UserEntity,
   SessionEntity,
+  SignInThrottleEntity,
   AppSettingEntity,
   PartEntity,
   PartMarkEntity,

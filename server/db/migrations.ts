@@ -4,6 +4,8 @@ import { CsvImport1796154117731 } from '../migrations/1796154117731-CsvImport'
 import { FitmentGraph1796151639561 } from '../migrations/1796151639561-FitmentGraph'
 import { Foundation1796150879975 } from '../migrations/1796150879975-Foundation'
 import { PartWords1796197875848 } from '../migrations/1796197875848-PartWords'
+import { SignInThrottle1796213596647 } from '../migrations/1796213596647-SignInThrottle'
+import { SignInThrottle1796213598364 as PostgresSignInThrottle1796213598364 } from '../migrations/postgres/1796213598364-SignInThrottle'
 import { SessionsByUser1796212625077 } from '../migrations/1796212625077-SessionsByUser'
 import { SessionsByUser1796212625998 as PostgresSessionsByUser1796212625998 } from '../migrations/postgres/1796212625998-SessionsByUser'
 
@@ -14,7 +16,13 @@ export const migrations = [
   CsvImport1796154117731,
   PartWords1796197875848,
   SessionsByUser1796212625077,
+  SignInThrottle1796213596647,
 ]
 
 /** PostgreSQL's, generated from the same entities (`npx tsx server/db/generate-migration.ts Name --postgres`). */
-export const postgresMigrations = [PostgresFoundation1796197547678, CatalogueChangeFeed1796197600000, PostgresSessionsByUser1796212625998]
+export const postgresMigrations = [
+  PostgresFoundation1796197547678,
+  CatalogueChangeFeed1796197600000,
+  PostgresSessionsByUser1796212625998,
+  PostgresSignInThrottle1796213598364,
+]
