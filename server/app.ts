@@ -12,6 +12,7 @@ import { authRoutes } from './auth/auth.routes'
 import { healthRoutes } from './health/health.routes'
 import { partRoutes } from './catalogue/parts.routes'
 import { userRoutes } from './users/users.routes'
+import { securityEventRoutes } from './security/security-events.routes'
 import { buildRoutes } from './builds/builds.routes'
 import { fitmentRoutes } from './fitment/fitment.routes'
 import { linkRoutes } from './fitment/links.routes'
@@ -39,12 +40,13 @@ export async function createApp({ config, dataSource, services, version, clientD
 
   const api = express.Router()
   api.use(healthRoutes(version))
-  api.use(authRoutes(auth, { throttle: createSignInThrottle(dataSource, config.loginLimits) }))
+  api.use(authRoutes(auth, { throttle: createSignInThrottle(dataSource, config.loginLimits), events: services.securityEvents }))
   api.use(partRoutes(services.parts))
   api.use(fitmentRoutes(services))
   api.use(buildRoutes(services))
   api.use(linkRoutes(services.links))
   api.use(userRoutes(services.users))
+  api.use(securityEventRoutes(services.securityEvents))
   api.use(importRoutes(services, config))
   api.use(requireSignIn, notFoundApi)
   app.use('/api', api)

@@ -15,6 +15,7 @@ import { ImportService } from './imports/import.service'
 import { ModificationService } from './catalogue/modification.service'
 import { PartService } from './catalogue/part.service'
 import { UserService } from './users/user.service'
+import { SecurityEventService } from './security/security-events.service'
 
 /** Every service, built once per app around one data source and one rule book. */
 export function createServices(dataSource: DataSource, config: AppConfig, rules: RuleBook) {
@@ -26,6 +27,7 @@ export function createServices(dataSource: DataSource, config: AppConfig, rules:
   return {
     rules,
     users: new UserService(dataSource),
+    securityEvents: new SecurityEventService(dataSource),
     parts,
     graphIndex,
     modifications,

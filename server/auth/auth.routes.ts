@@ -3,6 +3,7 @@ import { Router } from 'express'
 import type passport from 'passport'
 import { loginSchema, type User } from '../../shared/schemas/auth'
 import { lockoutMessage, type SignInThrottle } from './sign-in-throttle'
+import type { SecurityEventService } from '../security/security-events.service'
 import { requireSignIn } from './require-role'
 import { AppError } from '../errors/app-error'
 import { parseBody } from '../middleware/validate'
@@ -11,9 +12,9 @@ function promisify(fn: (done: (error?: unknown) => void) => void): Promise<void>
   return new Promise((resolve, reject) => fn((error) => (error ? reject(error) : resolve())))
 }
 
-export function authRoutes(auth: passport.PassportStatic, options: { throttle: SignInThrottle }): Router {
+export function authRoutes(auth: passport.PassportStatic, options: { throttle: SignInThrottle; events: SecurityEventService }): Router {
   const router = Router()
-  const { throttle } = options
+  const { throttle, events } = options
 
   router.post('/auth/login', async (req: Request, res: Response, next: NextFunction) => {
     const { email } = (req.body = parseBody(loginSchema, req))
@@ -28,10 +29,12 @@ export function authRoutes(auth: passport.PassportStatic, options: { throttle: S
     })
     if (!user) {
       await throttle.recordFailure(ip, email)
+      await events.record({ kind: 'sign_in_failed', actorEmail: email, address: ip })
       // One message for both halves, so a caller cannot probe which e-mails exist.
       throw new AppError(401, 'invalid_credentials', 'E-mail or password is not right.')
     }
     await throttle.recordSuccess(ip, email)
+    await events.record({ kind: 'sign_in', actorId: user.id, actorEmail: user.email, address: ip })
     // A new session id on sign-in, so a session id planted before sign-in is worthless.
     await promisify((done) => req.session.regenerate(done))
     await promisify((done) => req.login(user, done))

@@ -9,6 +9,7 @@ import { PartMarkEntity } from '../catalogue/part-mark.entity'
 import { PartEntity } from '../catalogue/part.entity'
 import { PartWordEntity } from '../catalogue/part-word.entity'
 import { SessionEntity } from '../auth/session.entity'
+import { SecurityEventEntity } from '../security/security-event.entity'
 import { SignInThrottleEntity } from '../auth/sign-in-throttle.entity'
 import { UserEntity } from '../users/user.entity'
 
@@ -16,6 +17,7 @@ export const entities = [
   UserEntity,
   SessionEntity,
   SignInThrottleEntity,
+  SecurityEventEntity,
   AppSettingEntity,
   PartEntity,
   PartMarkEntity,

@@ -6,6 +6,8 @@ import { Foundation1796150879975 } from '../migrations/1796150879975-Foundation'
 import { PartWords1796197875848 } from '../migrations/1796197875848-PartWords'
 import { SignInThrottle1796213596647 } from '../migrations/1796213596647-SignInThrottle'
 import { SignInThrottle1796213598364 as PostgresSignInThrottle1796213598364 } from '../migrations/postgres/1796213598364-SignInThrottle'
+import { SecurityEvents1796213775454 } from '../migrations/1796213775454-SecurityEvents'
+import { SecurityEvents1796213777137 as PostgresSecurityEvents1796213777137 } from '../migrations/postgres/1796213777137-SecurityEvents'
 import { SessionsByUser1796212625077 } from '../migrations/1796212625077-SessionsByUser'
 import { SessionsByUser1796212625998 as PostgresSessionsByUser1796212625998 } from '../migrations/postgres/1796212625998-SessionsByUser'
 
@@ -17,6 +19,7 @@ export const migrations = [
   PartWords1796197875848,
   SessionsByUser1796212625077,
   SignInThrottle1796213596647,
+  SecurityEvents1796213775454,
 ]
 
 /** PostgreSQL's, generated from the same entities (`npx tsx server/db/generate-migration.ts Name --postgres`). */
@@ -25,4 +28,5 @@ export const postgresMigrations = [
   CatalogueChangeFeed1796197600000,
   PostgresSessionsByUser1796212625998,
   PostgresSignInThrottle1796213598364,
+  PostgresSecurityEvents1796213777137,
 ]

@@ -6,6 +6,8 @@ import { UserEntity } from './user.entity'
 import { AppError } from '../errors/app-error'
 import { SessionRepository } from '../auth/session.repository'
 import { databaseOf } from '../db/sqlite-connection'
+import { SecurityEventService } from '../security/security-events.service'
+import type { NewSecurityEvent } from '../security/security-event.repository'
 import { sqliteTime } from '../db/sqlite-database'
 import { BCRYPT_ROUNDS, checkNewPassword, hashPassword, needsRehash } from '../auth/password-policy'
 
@@ -21,10 +23,12 @@ export function toUser(entity: UserEntity): User {
 export class UserService {
   private readonly users: Repository<UserEntity>
   private readonly sessions: SessionRepository
+  private readonly events: SecurityEventService
 
   constructor(private readonly dataSource: DataSource) {
     this.users = dataSource.getRepository(UserEntity)
     this.sessions = new SessionRepository(databaseOf(dataSource))
+    this.events = new SecurityEventService(dataSource)
   }
 
   /** The user for a right e-mail and password; a disabled account is refused with its own message once the password is right. */
@@ -79,11 +83,16 @@ export class UserService {
    * with no other request in between. A new password or a disabled account
    * ends the user's sessions (but the acting one, when it is their own).
    */
-  async update(id: number, change: UserUpdateInput, acting: { userId: number; sessionId?: string }): Promise<User> {
+  async update(
+    id: number,
+    change: UserUpdateInput,
+    acting: { userId: number; email?: string; sessionId?: string; address?: string },
+  ): Promise<User> {
     if (change.password) checkNewPassword(change.password)
     const passwordHash = change.password ? await hashPassword(change.password) : null
-    await inTransaction(this.dataSource, (db) => {
-      const current = db.prepare('SELECT role FROM user WHERE id = ?').get(id) as { role: Role } | undefined
+    const before = await inTransaction(this.dataSource, (db) => {
+      const current = db.prepare('SELECT role, email, disabledAt FROM user WHERE id = ?').get(id) as
+        { role: Role; email: string; disabledAt: string | null } | undefined
       if (!current) throw AppError.notFound(`No user with id ${id}.`)
       const losesAdmin = current.role === 'admin' && ((change.role && change.role !== 'admin') || change.disabled === true)
       if (losesAdmin) {
@@ -102,10 +111,19 @@ export class UserService {
           disabledAt === undefined ? '' : ', disabledAt = ?'
         } WHERE id = ?`,
       ).run(change.name ?? null, change.role ?? null, passwordHash, ...(disabledAt === undefined ? [] : [disabledAt]), id)
+      return current
     })
     if (passwordHash || change.disabled === true) {
       await this.sessions.removeForUser(id, id === acting.userId ? acting.sessionId : undefined)
     }
+    const who = { actorId: acting.userId, actorEmail: acting.email ?? null, address: acting.address ?? null }
+    const happened: NewSecurityEvent[] = []
+    if (passwordHash) happened.push({ kind: 'password_change', detail: `password of ${before.email}` })
+    if (change.role && change.role !== before.role)
+      happened.push({ kind: 'role_change', detail: `${before.email}: ${before.role} to ${change.role}` })
+    if (change.disabled === true && !before.disabledAt) happened.push({ kind: 'disable', detail: before.email })
+    if (change.disabled === false && before.disabledAt) happened.push({ kind: 'enable', detail: before.email })
+    for (const event of happened) await this.events.record({ ...event, ...who })
     return toUser(await this.users.findOneByOrFail({ id }))
   }
 

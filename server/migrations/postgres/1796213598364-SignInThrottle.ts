@@ -11,6 +11,5 @@ export class SignInThrottle1796213598364 implements MigrationInterface {
 
   async down(queryRunner: QueryRunner): Promise<void> {
     await queryRunner.query('DROP TABLE "sign_in_throttle"')
-    await queryRunner.query('DROP INDEX "public"."IDX_e13831c3aa6f47e0b21ef61600"')
   }
 }
