@@ -20,6 +20,7 @@ export const NAVIGATION: NavigationLink[] = [
   { name: 'planner', label: 'Build planner', icon: 'pi-wrench', permission: 'builds.evaluate', area: ['planner-sheet'] },
   { name: 'builds', label: 'Build sheets', icon: 'pi-folder-open', permission: 'builds.save' },
   { name: 'users', label: 'Users', icon: 'pi-users', permission: 'users.manage' },
+  { name: 'security-events', label: 'Security', icon: 'pi-shield', permission: 'users.manage' },
 ]
 
 export function navigationFor(role: Role | undefined): NavigationLink[] {
