@@ -5,12 +5,14 @@ import type { DataSource } from 'typeorm'
 import { createPassport } from './auth/passport'
 import { requireSignIn } from './auth/require-role'
 import { createSessionMiddleware } from './auth/session'
+import { createSignInThrottle } from './auth/sign-in-throttle'
 import type { AppConfig } from './config/env'
 import { errorHandler, notFoundApi } from './errors/error-handler'
 import { authRoutes } from './auth/auth.routes'
 import { healthRoutes } from './health/health.routes'
 import { partRoutes } from './catalogue/parts.routes'
 import { userRoutes } from './users/users.routes'
+import { securityEventRoutes } from './security/security-events.routes'
 import { buildRoutes } from './builds/builds.routes'
 import { fitmentRoutes } from './fitment/fitment.routes'
 import { substituteRoutes } from './fitment/substitutes.routes'
@@ -43,13 +45,14 @@ export async function createApp({ config, dataSource, services, version, clientD
 
   const api = express.Router()
   api.use(healthRoutes(version))
-  api.use(authRoutes(auth, { loginAttempts: config.loginAttempts }))
+  api.use(authRoutes(auth, { throttle: createSignInThrottle(dataSource, config.loginLimits), events: services.securityEvents }))
   api.use(partRoutes(services.parts, services.partLookup))
   api.use(fitmentRoutes(services))
   api.use(substituteRoutes(services.substitutes))
   api.use(buildRoutes(services))
   api.use(linkRoutes(services.links))
   api.use(userRoutes(services.users))
+  api.use(securityEventRoutes(services.securityEvents))
   api.use(importRoutes(services, config))
   api.use(fieldReportRoutes(services, { photoMaxBytes: config.photoMaxBytes }))
   api.use(mailRoutes(services.outbox))

@@ -32,6 +32,7 @@ import { OutboxService } from './mail/outbox.service'
 import { FieldReportEvidence } from './field-reports/field-report-evidence'
 import { FieldReportReviewService } from './field-reports/field-report-review.service'
 import { databaseOf } from './db/sqlite-connection'
+import { SecurityEventService } from './security/security-events.service'
 
 /** Every service, built once per app around one data source and one rule book. */
 export function createServices(dataSource: DataSource, config: AppConfig, rules: RuleBook) {
@@ -53,6 +54,7 @@ export function createServices(dataSource: DataSource, config: AppConfig, rules:
     users,
     outbox,
     fieldReportNotices,
+    securityEvents: new SecurityEventService(dataSource),
     parts,
     partLookup: new PartLookupService(dataSource, parts),
     graphIndex,

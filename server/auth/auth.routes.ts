@@ -2,7 +2,8 @@ import type { NextFunction, Request, Response } from 'express'
 import { Router } from 'express'
 import type passport from 'passport'
 import { loginSchema, type User } from '../../shared/schemas/auth'
-import { loginThrottle } from './login-throttle'
+import { lockoutMessage, type SignInThrottle } from './sign-in-throttle'
+import type { SecurityEventService } from '../security/security-events.service'
 import { requireSignIn } from './require-role'
 import { AppError } from '../errors/app-error'
 import { parseBody } from '../middleware/validate'
@@ -11,16 +12,29 @@ function promisify(fn: (done: (error?: unknown) => void) => void): Promise<void>
   return new Promise((resolve, reject) => fn((error) => (error ? reject(error) : resolve())))
 }
 
-export function authRoutes(auth: passport.PassportStatic, options: { loginAttempts: number }): Router {
+export function authRoutes(auth: passport.PassportStatic, options: { throttle: SignInThrottle; events: SecurityEventService }): Router {
   const router = Router()
+  const { throttle, events } = options
 
-  router.post('/auth/login', loginThrottle(options.loginAttempts), async (req: Request, res: Response, next: NextFunction) => {
-    req.body = parseBody(loginSchema, req)
+  router.post('/auth/login', async (req: Request, res: Response, next: NextFunction) => {
+    const { email } = (req.body = parseBody(loginSchema, req))
+    const ip = req.ip ?? ''
+    const lockout = await throttle.lockout(ip, email)
+    if (lockout) {
+      res.setHeader('Retry-After', String(lockout.retryAfterSeconds))
+      throw new AppError(429, 'too_many_attempts', lockoutMessage(lockout))
+    }
     const user = await new Promise<User | false>((resolve, reject) => {
       auth.authenticate('local', (error: unknown, found: User | false) => (error ? reject(error) : resolve(found)))(req, res, next)
     })
-    // One message for both halves, so a caller cannot probe which e-mails exist.
-    if (!user) throw new AppError(401, 'invalid_credentials', 'E-mail or password is not right.')
+    if (!user) {
+      await throttle.recordFailure(ip, email)
+      await events.record({ kind: 'sign_in_failed', actorEmail: email, address: ip })
+      // One message for both halves, so a caller cannot probe which e-mails exist.
+      throw new AppError(401, 'invalid_credentials', 'E-mail or password is not right.')
+    }
+    await throttle.recordSuccess(ip, email)
+    await events.record({ kind: 'sign_in', actorId: user.id, actorEmail: user.email, address: ip })
     // A new session id on sign-in, so a session id planted before sign-in is worthless.
     await promisify((done) => req.session.regenerate(done))
     await promisify((done) => req.login(user, done))

@@ -19,6 +19,7 @@ const envSchema = z.object({
   FITWRIGHT_ADMIN_PASSWORD: z.string().min(10, 'Use at least 10 characters.').optional(),
   FITWRIGHT_SESSION_MAX_AGE_DAYS: z.coerce.number().positive('Use a number of days above 0.').max(366).default(7),
   FITWRIGHT_LOGIN_ATTEMPTS: z.coerce.number().int().positive().default(10),
+  FITWRIGHT_LOGIN_ATTEMPTS_PER_ADDRESS: z.coerce.number().int().positive().default(30),
   FITWRIGHT_IMPORT_MAX_BYTES: z.coerce
     .number()
     .int()
@@ -62,8 +63,8 @@ export type AppConfig = {
   /** Field-report photos (re-encoded) are kept here. */
   uploadDir: string
   photoMaxBytes: number
-  /** Failed sign-ins allowed per address and e-mail in 15 minutes. */
-  loginAttempts: number
+  /** Failed sign-ins allowed in 15 minutes per address and e-mail, and per address across e-mails. */
+  loginLimits: { perAccount: number; perAddress: number }
   /** First administrator, created when the database has no users (for use without the demo). */
   firstAdmin?: { email: string; password: string }
 }
@@ -93,7 +94,7 @@ export function loadConfig(env: NodeJS.ProcessEnv = process.env): AppConfig {
     publicUrl: (value.FITWRIGHT_PUBLIC_URL ?? `http://localhost:${value.PORT || 3000}`).replace(/\/$/, ''),
     uploadDir: value.FITWRIGHT_UPLOAD_DIR,
     photoMaxBytes: value.FITWRIGHT_PHOTO_MAX_BYTES,
-    loginAttempts: value.FITWRIGHT_LOGIN_ATTEMPTS,
+    loginLimits: { perAccount: value.FITWRIGHT_LOGIN_ATTEMPTS, perAddress: value.FITWRIGHT_LOGIN_ATTEMPTS_PER_ADDRESS },
     firstAdmin:
       value.FITWRIGHT_ADMIN_EMAIL && value.FITWRIGHT_ADMIN_PASSWORD
         ? { email: value.FITWRIGHT_ADMIN_EMAIL, password: value.FITWRIGHT_ADMIN_PASSWORD }

@@ -9,6 +9,8 @@ import { PartMarkEntity } from '../catalogue/part-mark.entity'
 import { PartEntity } from '../catalogue/part.entity'
 import { PartWordEntity } from '../catalogue/part-word.entity'
 import { SessionEntity } from '../auth/session.entity'
+import { SecurityEventEntity } from '../security/security-event.entity'
+import { SignInThrottleEntity } from '../auth/sign-in-throttle.entity'
 import { UserEntity } from '../users/user.entity'
 import { FieldReportEntity } from '../field-reports/field-report.entity'
 import { FieldReportPhotoEntity } from '../field-reports/field-report-photo.entity'
@@ -22,6 +24,8 @@ import { VehicleOriginalEntity } from '../vehicles/vehicle-original.entity'
 export const entities = [
   UserEntity,
   SessionEntity,
+  SignInThrottleEntity,
+  SecurityEventEntity,
   AppSettingEntity,
   PartEntity,
   PartMarkEntity,

@@ -12,6 +12,10 @@ import { CsvImport1796154117731 } from '../migrations/1796154117731-CsvImport'
 import { FitmentGraph1796151639561 } from '../migrations/1796151639561-FitmentGraph'
 import { Foundation1796150879975 } from '../migrations/1796150879975-Foundation'
 import { PartWords1796197875848 } from '../migrations/1796197875848-PartWords'
+import { SignInThrottle1796213596647 } from '../migrations/1796213596647-SignInThrottle'
+import { SignInThrottle1796213598364 as PostgresSignInThrottle1796213598364 } from '../migrations/postgres/1796213598364-SignInThrottle'
+import { SecurityEvents1796213775454 } from '../migrations/1796213775454-SecurityEvents'
+import { SecurityEvents1796213777137 as PostgresSecurityEvents1796213777137 } from '../migrations/postgres/1796213777137-SecurityEvents'
 import { SessionsByUser1796212625077 } from '../migrations/1796212625077-SessionsByUser'
 import { SessionsByUser1796212625998 as PostgresSessionsByUser1796212625998 } from '../migrations/postgres/1796212625998-SessionsByUser'
 
@@ -25,6 +29,8 @@ export const migrations = [
   SessionsByUser1796212625077,
   MailOutbox1796212721111,
   Stock1796213287641,
+  SignInThrottle1796213596647,
+  SecurityEvents1796213775454,
   Vehicles1796213931900,
 ]
 
@@ -36,5 +42,7 @@ export const postgresMigrations = [
   PostgresSessionsByUser1796212625998,
   PostgresMailOutbox1796212722016,
   PostgresStock1796213288773,
+  PostgresSignInThrottle1796213598364,
+  PostgresSecurityEvents1796213777137,
   PostgresVehicles1796213933784,
 ]

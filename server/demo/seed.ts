@@ -136,7 +136,7 @@ export async function seedDemo(
     return false
   }
   const created = []
-  for (const user of DEMO_USERS) created.push(await users.create({ ...user, password: DEMO_PASSWORD }))
+  for (const user of DEMO_USERS) created.push(await users.createDemo({ ...user, password: DEMO_PASSWORD }))
   const editor = created.find((user) => user.role === 'editor')!
   const tech = created.find((user) => user.role === 'tech')!
   const partFiles = readdirSync(path.join(demoDir, 'parts'))

@@ -13,6 +13,7 @@ import type {
 import { CsvFileError, readCsvStream, type CsvReadSummary } from './csv/csv-stream'
 import { inTransaction, sqliteConnection } from '../db/sqlite-connection'
 import { ImportBatchEntity } from '../audit/import-batch.entity'
+import { SecurityEventService } from '../security/security-events.service'
 import { AppError } from '../errors/app-error'
 import type { CatalogueChanges, FitGraphIndex } from '../fitment/fit-graph'
 import { insertBatch } from '../audit/change-log'
@@ -27,7 +28,8 @@ import { PreviewCache } from './import-preview-cache'
 import { writeParts } from './parts/part-write'
 import { revertBatch } from '../audit/revert'
 
-export type ImportUser = { id: number | null; name: string }
+/** Who imports or reverts; e-mail and address go to the security events. */
+export type ImportUser = { id: number | null; name: string; email?: string; address?: string }
 
 export type ImportRun = {
   filePath: string
@@ -110,7 +112,15 @@ export class ImportService {
     private readonly dataSource: DataSource,
     private readonly limits: { maxRows: number },
     private readonly graphIndex: FitGraphIndex,
-  ) {}
+  ) {
+    this.events = new SecurityEventService(dataSource)
+  }
+
+  private readonly events: SecurityEventService
+
+  private securityEvent(kind: 'import' | 'revert', user: ImportUser, detail: string) {
+    return this.events.record({ kind, actorId: user.id, actorEmail: user.email ?? null, address: user.address ?? null, detail })
+  }
 
   private async read(input: ImportRun, report: (phase: ImportPhase, done: number, total: number) => void) {
     const work = job(input.type)
@@ -169,6 +179,7 @@ export class ImportService {
     })
     this.previews.drop(userId, input.type)
     await this.graphIndex.applyChanges(committed.touched)
+    await this.securityEvent('import', input.user, `batch ${committed.answer.batchId}: ${input.type} from ${input.fileName}`)
     report('write', summary.rows, summary.rows)
     return committed.answer
   }
@@ -182,6 +193,7 @@ export class ImportService {
   async revert(batchId: number, user: ImportUser): Promise<ImportBatch> {
     const touched = await inTransaction(this.dataSource, (db) => revertBatch(db, batchId, user.name))
     await this.graphIndex.applyChanges(touched)
+    await this.securityEvent('revert', user, `batch ${batchId}`)
     return toImportBatch(await this.dataSource.getRepository(ImportBatchEntity).findOneByOrFail({ id: batchId }))
   }
 }

@@ -45,7 +45,7 @@ export function importRoutes(services: { imports: ImportService; exports: Export
         filePath: file.path,
         fileName: cleanFileName(file.originalname),
         fileSize: file.size,
-        user: { id: user.id, name: user.name },
+        user: { id: user.id, name: user.name, email: user.email, address: req.ip },
       }
       if (wantsProgress(req)) {
         await streamImport(res, (onProgress) => services.imports.run({ ...input, onProgress }))
@@ -60,7 +60,7 @@ export function importRoutes(services: { imports: ImportService; exports: Export
 
   router.post('/imports/:id/revert', editors, async (req, res) => {
     const { id } = parseParams(batchParamsSchema, req)
-    res.json(await services.imports.revert(id, { id: req.user!.id, name: req.user!.name }))
+    res.json(await services.imports.revert(id, { id: req.user!.id, name: req.user!.name, email: req.user!.email, address: req.ip }))
   })
 
   // Editors' tool for the spreadsheet round trip; the catalogue as one file is not a counter task.

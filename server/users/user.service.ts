@@ -6,11 +6,15 @@ import { UserEntity } from './user.entity'
 import { AppError } from '../errors/app-error'
 import { SessionRepository } from '../auth/session.repository'
 import { databaseOf } from '../db/sqlite-connection'
+import { SecurityEventService } from '../security/security-events.service'
+import type { NewSecurityEvent } from '../security/security-event.repository'
 import { sqliteTime } from '../db/sqlite-database'
+import { BCRYPT_ROUNDS, checkNewPassword, hashPassword, needsRehash } from '../auth/password-policy'
 
-const BCRYPT_ROUNDS = 10
 // Compared against when the e-mail is unknown, so both failures take the same time.
 const NO_SUCH_USER_HASH = bcrypt.hashSync('no such user', BCRYPT_ROUNDS)
+/** The seeded demo accounts' cost: their password is published anyway, and seeding stays quick. */
+const DEMO_ROUNDS = 10
 
 export function toUser(entity: UserEntity): User {
   return { id: entity.id, email: entity.email, name: entity.name, role: entity.role, disabled: entity.disabledAt !== null }
@@ -19,10 +23,12 @@ export function toUser(entity: UserEntity): User {
 export class UserService {
   private readonly users: Repository<UserEntity>
   private readonly sessions: SessionRepository
+  private readonly events: SecurityEventService
 
   constructor(private readonly dataSource: DataSource) {
     this.users = dataSource.getRepository(UserEntity)
     this.sessions = new SessionRepository(databaseOf(dataSource))
+    this.events = new SecurityEventService(dataSource)
   }
 
   /** The user for a right e-mail and password; a disabled account is refused with its own message once the password is right. */
@@ -31,6 +37,8 @@ export class UserService {
     const matches = await bcrypt.compare(password, entity?.passwordHash ?? NO_SUCH_USER_HASH)
     if (!entity || !matches) return null
     if (entity.disabledAt) throw new AppError(403, 'account_disabled', 'This account is disabled. Ask an administrator to enable it.')
+    // The password is at hand only now, so this is when an older, cheaper hash is made again at today's cost.
+    if (needsRehash(entity.passwordHash)) await this.users.update({ id: entity.id }, { passwordHash: await hashPassword(password) })
     return toUser(entity)
   }
 
@@ -44,7 +52,18 @@ export class UserService {
     return (await this.users.find({ order: { email: 'ASC' } })).map(toUser)
   }
 
+  /** Adds a user; the password must not be a common one. */
   async create(input: { email: string; name: string; role: Role; password: string }): Promise<User> {
+    checkNewPassword(input.password)
+    return this.insert(input, await hashPassword(input.password))
+  }
+
+  /** The demo accounts, on their published password: known on purpose, so the common-password check does not apply. */
+  async createDemo(input: { email: string; name: string; role: Role; password: string }): Promise<User> {
+    return this.insert(input, await hashPassword(input.password, DEMO_ROUNDS))
+  }
+
+  private async insert(input: { email: string; name: string; role: Role }, passwordHash: string): Promise<User> {
     if (await this.users.existsBy({ email: input.email.trim().toLowerCase() })) {
       throw AppError.conflict(`A user with e-mail ${input.email} exists already.`, [{ path: 'email', message: 'This e-mail is taken.' }])
     }
@@ -52,7 +71,7 @@ export class UserService {
       email: input.email.trim().toLowerCase(),
       name: input.name,
       role: input.role,
-      passwordHash: await bcrypt.hash(input.password, BCRYPT_ROUNDS),
+      passwordHash,
     })
     return toUser(await this.users.save(entity))
   }
@@ -64,10 +83,16 @@ export class UserService {
    * with no other request in between. A new password or a disabled account
    * ends the user's sessions (but the acting one, when it is their own).
    */
-  async update(id: number, change: UserUpdateInput, acting: { userId: number; sessionId?: string }): Promise<User> {
-    const passwordHash = change.password ? await bcrypt.hash(change.password, BCRYPT_ROUNDS) : null
-    await inTransaction(this.dataSource, (db) => {
-      const current = db.prepare('SELECT role FROM user WHERE id = ?').get(id) as { role: Role } | undefined
+  async update(
+    id: number,
+    change: UserUpdateInput,
+    acting: { userId: number; email?: string; sessionId?: string; address?: string },
+  ): Promise<User> {
+    if (change.password) checkNewPassword(change.password)
+    const passwordHash = change.password ? await hashPassword(change.password) : null
+    const before = await inTransaction(this.dataSource, (db) => {
+      const current = db.prepare('SELECT role, email, disabledAt FROM user WHERE id = ?').get(id) as
+        { role: Role; email: string; disabledAt: string | null } | undefined
       if (!current) throw AppError.notFound(`No user with id ${id}.`)
       const losesAdmin = current.role === 'admin' && ((change.role && change.role !== 'admin') || change.disabled === true)
       if (losesAdmin) {
@@ -86,10 +111,19 @@ export class UserService {
           disabledAt === undefined ? '' : ', disabledAt = ?'
         } WHERE id = ?`,
       ).run(change.name ?? null, change.role ?? null, passwordHash, ...(disabledAt === undefined ? [] : [disabledAt]), id)
+      return current
     })
     if (passwordHash || change.disabled === true) {
       await this.sessions.removeForUser(id, id === acting.userId ? acting.sessionId : undefined)
     }
+    const who = { actorId: acting.userId, actorEmail: acting.email ?? null, address: acting.address ?? null }
+    const happened: NewSecurityEvent[] = []
+    if (passwordHash) happened.push({ kind: 'password_change', detail: `password of ${before.email}` })
+    if (change.role && change.role !== before.role)
+      happened.push({ kind: 'role_change', detail: `${before.email}: ${before.role} to ${change.role}` })
+    if (change.disabled === true && !before.disabledAt) happened.push({ kind: 'disable', detail: before.email })
+    if (change.disabled === false && before.disabledAt) happened.push({ kind: 'enable', detail: before.email })
+    for (const event of happened) await this.events.record({ ...event, ...who })
     return toUser(await this.users.findOneByOrFail({ id }))
   }
 

@@ -19,7 +19,14 @@ export function userRoutes(users: UserService): Router {
   })
   router.patch('/users/:id', adminOnly, async (req, res) => {
     const { id } = parseParams(idParamsSchema, req)
-    res.json(await users.update(id, parseBody(userUpdateSchema, req), { userId: req.user!.id, sessionId: req.sessionID }))
+    res.json(
+      await users.update(id, parseBody(userUpdateSchema, req), {
+        userId: req.user!.id,
+        email: req.user!.email,
+        sessionId: req.sessionID,
+        address: req.ip,
+      }),
+    )
   })
   return router
 }

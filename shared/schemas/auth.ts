@@ -27,7 +27,16 @@ export const ROLE_LABELS: Record<Role, string> = {
   tech: 'Technician',
 }
 
-const password = z.string().min(10, 'Use at least 10 characters.').max(200)
+/** bcrypt reads only the first 72 bytes, so a longer password would match others sharing them: refused instead. */
+export const PASSWORD_MAX_BYTES = 72
+
+const password = z
+  .string()
+  .min(10, 'Use at least 10 characters.')
+  .refine(
+    (value) => new TextEncoder().encode(value).length <= PASSWORD_MAX_BYTES,
+    `Use at most ${PASSWORD_MAX_BYTES} bytes (about ${PASSWORD_MAX_BYTES} letters; accented letters and symbols count two to four).`,
+  )
 
 export const userCreateSchema = z.object({
   email: z.string().trim().toLowerCase().pipe(z.email('Enter a valid e-mail address.')),

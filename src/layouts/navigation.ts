@@ -28,6 +28,7 @@ export const NAVIGATION: NavigationLink[] = [
     area: ['field-report', 'field-report-new'],
   },
   { name: 'users', label: 'Users', icon: 'pi-users', permission: 'users.manage' },
+  { name: 'security-events', label: 'Security', icon: 'pi-shield', permission: 'users.manage' },
 ]
 
 export function navigationFor(role: Role | undefined): NavigationLink[] {

@@ -130,6 +130,12 @@ const router = createRouter({
           meta: { permission: 'users.manage', title: 'Users and roles' },
         },
         {
+          path: 'security-events',
+          name: 'security-events',
+          component: () => import('@/views/SecurityEventsView.vue'),
+          meta: { permission: 'users.manage', title: 'Security events' },
+        },
+        {
           path: 'forbidden',
           name: 'forbidden',
           component: () => import('@/views/ForbiddenView.vue'),
