@@ -15,6 +15,7 @@ import { buildPartsList } from '../reasoning/parts-list'
 import type { Facts, RuleBook } from '../reasoning/rule-book'
 import type { RuleExtraPart } from '../reasoning/rule-file.schema'
 import { resolveSlots } from './build-slots'
+import { judgeCompliance } from './compliance'
 import { toPart } from '../catalogue/part.repository'
 import type { FitGraph, FitGraphIndex } from '../fitment/fit-graph'
 import type { ModificationService } from '../catalogue/modification.service'
@@ -110,6 +111,7 @@ export class BuildEvaluationService {
     ])
     return {
       verdict: pairs.length ? worstVerdict(pairs.map((pair) => pair.relation)) : 'unknown',
+      compliance: judgeCompliance(cautions, build.context.chassisModelYear),
       missingSlots: BUILD_SLOTS.filter((slot) => !build.parts[slot.id]).map((slot) => slot.id),
       pairs: pairs.map(({ rules: _rules, linkModifications: _mods, ...pair }) => pair),
       modifications: applied.map(({ ruleExtraParts: _extra, ...modification }) => modification),

@@ -38,6 +38,7 @@ export function makePair(
     partNumbers: ['A-1', 'B-1'],
     relation,
     decidedBy: 'rule',
+    reason: `${label}: ${relation}`,
     ruleIds: [],
     modifications: [],
     explanation: [{ type: 'rule', text: `${label}: ${relation}` }],
@@ -47,6 +48,7 @@ export function makePair(
 export function makeEvaluation(overrides: Partial<Evaluation> = {}): Evaluation {
   return {
     verdict: 'fits',
+    compliance: { status: 'ok', reasons: [] },
     missingSlots: [],
     pairs: [],
     modifications: [],
