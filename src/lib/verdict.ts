@@ -23,6 +23,24 @@ export function verdictHeadline(verdict: Verdict, partial: boolean): string {
   return (partial ? PARTIAL_HEADLINES : HEADLINES)[verdict]
 }
 
+/**
+ * The headline with road-legality beside the mechanical verdict: a legal
+ * blocker is never left out behind "fits".
+ */
+export function verdictBanner(evaluation: Pick<Evaluation, 'verdict' | 'compliance' | 'figures'>, partial: boolean): string {
+  const headline = verdictHeadline(evaluation.verdict, partial)
+  if (evaluation.compliance.status !== 'blocked') return headline
+  const year = evaluation.figures.chassisModelYear
+  return `${headline} — not road-legal${year ? ` for a ${year} car` : ''}`
+}
+
+/** What the compliance check says, in one line; empty when there is nothing to say. */
+export function complianceLine(compliance: Evaluation['compliance']): string {
+  if (compliance.status === 'ok') return ''
+  const prefix = compliance.status === 'blocked' ? 'Not road-legal' : 'Check road-legality'
+  return `${prefix}: ${compliance.reasons.join(' ')}`
+}
+
 /** The sentence under the headline: what decided the verdict, or what to do next. */
 export function verdictDetail(evaluation: Pick<Evaluation, 'verdict' | 'pairs' | 'modifications'>): string {
   const { verdict, pairs, modifications } = evaluation
