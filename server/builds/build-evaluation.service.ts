@@ -82,6 +82,11 @@ export class BuildEvaluationService {
     return judged
   }
 
+  /** The cautions the whole-build rules raise for these facts (cached by the values they read). */
+  async buildCautions(facts: Facts): Promise<Caution[]> {
+    return summariseOutcomes(await this.rules.evaluateBuild(facts)).cautions
+  }
+
   async evaluate(request: EvaluateRequest): Promise<Evaluation> {
     const build = await this.resolve(request)
     const graph = await this.graphIndex.snapshot()

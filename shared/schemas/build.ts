@@ -125,6 +125,8 @@ export const candidateSchema = z.object({
   modifications: z.array(z.string()),
   score: z.number(),
   reasons: z.array(z.string()),
+  /** Why it is ranked below parts with more modifications: legal blockers and new danger cautions it brings. */
+  setBackFor: z.array(z.string()),
 })
 export type Candidate = z.infer<typeof candidateSchema>
 
@@ -144,6 +146,8 @@ export const fillResultSchema = z.object({
   slots: z.record(z.string(), z.string()),
   filled: z.array(z.object({ slot: z.string(), partNumber: z.string() })),
   unfilled: z.array(z.object({ slot: z.string(), note: z.string() })),
+  /** Parts fill the gaps passed over, and why (not road-legal, a danger caution, a dead end). */
+  skipped: z.array(z.object({ slot: z.string(), partNumber: z.string(), reason: z.string() })),
 })
 export type FillResult = z.infer<typeof fillResultSchema>
 

@@ -68,12 +68,20 @@ export function missingSlotLabels(missingSlots: readonly string[]): string[] {
 export type FillSummary = { severity: 'success' | 'info'; summary: string; detail: string }
 
 /** What "fill the gaps" did, for a toast: how many slots it filled and why the rest stay empty. */
-export function fillGapsSummary({ filled, unfilled }: Pick<FillResult, 'filled' | 'unfilled'>): FillSummary {
+export function fillGapsSummary({
+  filled,
+  unfilled,
+  skipped = [],
+}: Pick<FillResult, 'filled' | 'unfilled'> & Partial<Pick<FillResult, 'skipped'>>): FillSummary {
+  const gaps = unfilled.length
+    ? `Still empty: ${unfilled.map((gap) => `${slotLabel(gap.slot)} (${gap.note})`).join('; ')}`
+    : 'Every slot now has a part.'
+  const passed = skipped.length
+    ? ` Passed over: ${skipped.map((skip) => `${skip.partNumber} for the ${slotLabel(skip.slot).toLowerCase()} (${skip.reason})`).join('; ')}`
+    : ''
   return {
     severity: filled.length ? 'success' : 'info',
     summary: filled.length ? `Filled ${plural(filled.length, 'slot')}` : 'No empty slot could be filled',
-    detail: unfilled.length
-      ? `Still empty: ${unfilled.map((gap) => `${slotLabel(gap.slot)} (${gap.note})`).join('; ')}`
-      : 'Every slot now has a part.',
+    detail: gaps + passed,
   }
 }

@@ -24,7 +24,7 @@ export function makeFit(part: Part, relation: FitResult['relation'], review: Fit
 }
 
 export function makeCandidate(part: Part, relation: Candidate['relation'] = 'fits'): Candidate {
-  return { part, relation, modifications: [], score: 0, reasons: [] }
+  return { part, relation, modifications: [], score: 0, reasons: [], setBackFor: [] }
 }
 
 export function makePair(
