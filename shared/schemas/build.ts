@@ -26,6 +26,8 @@ export const buildContextSchema = z.object({
     .max(2100, 'Model year must be between 1900 and 2100.')
     .optional(),
   vin: z.string().trim().max(17, 'A VIN has 17 characters.').optional(),
+  /** The job takes the engine out of the car (lifting cautions apply). */
+  engineOut: z.boolean().optional(),
   /** The build removes or disables an emission control (catalyst, EGR, evaporative). */
   emissionControlsRemoved: z.boolean().optional(),
 })
@@ -83,6 +85,7 @@ export const buildFiguresSchema = z.object({
   camCrankCentreMm: z.number().nullable(),
   beltCentreShiftMm: z.number().nullable(),
   beltTeethNeeded: z.number().nullable(),
+  quenchMm: z.number().nullable(),
   chassisModelYear: z.number().nullable(),
 })
 export type BuildFigures = z.infer<typeof buildFiguresSchema>

@@ -70,6 +70,7 @@ export function makeEvaluation(overrides: Partial<Evaluation> = {}): Evaluation 
       camCrankCentreMm: null,
       beltCentreShiftMm: null,
       beltTeethNeeded: null,
+      quenchMm: null,
       chassisModelYear: null,
     },
     parts: {},

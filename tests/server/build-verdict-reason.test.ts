@@ -65,3 +65,36 @@ describe('POST /api/builds/evaluate road-legality', () => {
     expect(response.body.error.details).toEqual([{ path: 'fuelOctane', message: 'Octane must be between 80 and 120.' }])
   })
 })
+
+describe('POST /api/builds/evaluate trade checks', () => {
+  type CautionBody = { severity: string; text: string }
+  const cautionsOf = async (body: object) => (await evaluate(body)).body.cautions as CautionBody[]
+
+  it('works out quench as deck clearance plus compressed gasket and flags it wide (0.30 + 1.40 = 1.70 mm, hand-worked)', async () => {
+    const body = (await evaluate({ slots: { block: 'TM-BL-1800', 'head-gasket': 'TM-HG-1800' } })).body
+    expect(body.figures.quenchMm).toBeCloseTo(1.7, 2)
+    expect((body.cautions as CautionBody[]).some((c) => /Quench works out at 1.7 mm/.test(c.text))).toBe(true)
+  })
+
+  it('raises no quench caution inside the usual band (0.30 + 0.70 = 1.00 mm, common practice band 0.9-1.15 mm)', async () => {
+    const body = (await evaluate({ slots: { block: 'TM-BL-1800', 'head-gasket': 'TM-HG-1807' } })).body
+    expect(body.figures.quenchMm).toBeCloseTo(1.0, 2)
+    expect((body.cautions as CautionBody[]).some((c) => /Quench/.test(c.text))).toBe(false)
+  })
+
+  it('gives the lifting caution only when the job takes the engine out', async () => {
+    const slots = { block: 'TM-BL-1800', head: 'TM-HD-1800' }
+    expect((await cautionsOf({ slots })).some((c) => /Lifting an engine/.test(c.text))).toBe(false)
+    expect((await cautionsOf({ slots, engineOut: true })).some((c) => /Lifting an engine/.test(c.text))).toBe(true)
+  })
+
+  it('adds the usual shop cautions for the jobs in the build', async () => {
+    const texts = (
+      await cautionsOf({ slots: { block: 'TM-BL-1800', head: 'TM-HD-1800', 'head-bolt': 'TM-HB-1800', 'timing-belt': 'TM-TB-1800' } })
+    ).map((c) => c.text)
+    expect(texts.some((t) => /blind head-bolt holes/.test(t))).toBe(true)
+    expect(texts.some((t) => /two full turns/.test(t))).toBe(true)
+    expect(texts.some((t) => /coolant scalds/.test(t) && /eye protection/.test(t) && /local rules/.test(t))).toBe(true)
+    expect(texts.some((t) => /piston-to-valve/.test(t))).toBe(true)
+  })
+})
