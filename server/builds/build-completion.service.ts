@@ -9,6 +9,8 @@ import type { FitGraph, FitGraphIndex } from '../fitment/fit-graph'
 import type { Part } from '../../shared/schemas/part'
 import type { ModificationService } from '../catalogue/modification.service'
 import type { PartService } from '../catalogue/part.service'
+import { candidatePreference, type Preference } from './candidate-preference'
+import type { Caution } from '../../shared/schemas/build'
 
 type Row = { id: number; partNumber: string; attributes: string; yearTo: number | null }
 
@@ -109,7 +111,7 @@ export class BuildCompletionService {
   }
 
   /** A candidate in the slot against every filled slot it mates with; null unless all fit. */
-  private async judge(slot: SlotId, row: Row, build: ResolvedBuild, graph: FitGraph) {
+  private async judge(slot: SlotId, row: Row, build: ResolvedBuild, graph: FitGraph, baseline: Caution[]) {
     const trial: ResolvedBuild = {
       ...build,
       parts: {
@@ -121,10 +123,12 @@ export class BuildCompletionService {
     const { facts } = this.evaluation.prepare(trial)
     const pairs = await this.evaluation.judgePairs(graph, trial, facts, slot)
     if (pairs.some((pair) => pair.relation === 'does-not-fit' || pair.relation === 'unknown')) return null
+    const preference = candidatePreference(await this.evaluation.buildCautions(facts), baseline)
     return {
+      preference,
       relation: worstVerdict(pairs.map((pair) => pair.relation)) as Relation,
       modifications: [...new Set(pairs.flatMap((pair) => pair.modifications))],
-      reasons: pairs.map((pair) => `${pair.label}: ${pair.explanation[0]?.text ?? pair.relation}`),
+      reasons: [...preference.notes, ...pairs.map((pair) => `${pair.label}: ${pair.reason}`)],
       byRule: pairs.some((pair) => pair.decidedBy === 'rule'),
     }
   }
@@ -132,7 +136,9 @@ export class BuildCompletionService {
   /** The best `limit` candidates for a slot, fewest and easiest modifications first, and how many fit in all. */
   private async candidatesFor(slot: SlotId, build: ResolvedBuild, graph: FitGraph, reads: CompletionReads, limit: number) {
     const rows = await reads.rowsOf(slot)
-    type Judgement = { relation: Relation; modifications: string[]; reasons: string[]; byRule: boolean } | null
+    type Judgement = { relation: Relation; modifications: string[]; reasons: string[]; byRule: boolean; preference: Preference } | null
+    // The build's own cautions without the candidate: only what a candidate adds counts against it.
+    const baseline = await this.evaluation.buildCautions(this.evaluation.prepare(build).facts)
     const accepted: ({ row: Row } & NonNullable<Judgement>)[] = []
     const neighbourIds = matingSlots(slot).flatMap((other) => (build.ids[other] === undefined ? [] : [build.ids[other]!]))
     // Without a reviewed link the rules decide, and parts with the same attributes get the same answer.
@@ -142,14 +148,15 @@ export class BuildCompletionService {
       const memoKey = `${row.yearTo}|${row.attributes}`
       let judgement = linked ? undefined : byAttributes.get(memoKey)
       if (judgement === undefined) {
-        judgement = await this.judge(slot, row, build, graph)
+        judgement = await this.judge(slot, row, build, graph, baseline)
         if (!linked) byAttributes.set(memoKey, judgement)
       }
       if (judgement) accepted.push({ row, ...judgement })
     }
     const scored = await Promise.all(
       accepted.map(async (a) => {
-        let score = a.byRule ? 0.1 : 0 // reviewed evidence before inference among otherwise equal candidates
+        // Legal and safe first, then reviewed evidence before inference among otherwise equal candidates.
+        let score = a.preference.penalty + (a.byRule ? 0.1 : 0)
         for (const name of a.modifications) score += 1 + (await reads.skillWeight(name))
         return { ...a, score }
       }),
@@ -163,6 +170,7 @@ export class BuildCompletionService {
       modifications: a.modifications,
       score: a.score,
       reasons: a.reasons,
+      setBackFor: a.preference.notes,
     }))
     return { candidates, total: scored.length }
   }

@@ -15,6 +15,7 @@ import { buildPartsList } from '../reasoning/parts-list'
 import type { Facts, RuleBook } from '../reasoning/rule-book'
 import type { RuleExtraPart } from '../reasoning/rule-file.schema'
 import { resolveSlots } from './build-slots'
+import { judgeCompliance } from './compliance'
 import { toPart } from '../catalogue/part.repository'
 import type { FitGraph, FitGraphIndex } from '../fitment/fit-graph'
 import type { ModificationService } from '../catalogue/modification.service'
@@ -81,6 +82,11 @@ export class BuildEvaluationService {
     return judged
   }
 
+  /** The cautions the whole-build rules raise for these facts (cached by the values they read). */
+  async buildCautions(facts: Facts): Promise<Caution[]> {
+    return summariseOutcomes(await this.rules.evaluateBuild(facts)).cautions
+  }
+
   async evaluate(request: EvaluateRequest): Promise<Evaluation> {
     const build = await this.resolve(request)
     const graph = await this.graphIndex.snapshot()
@@ -110,6 +116,7 @@ export class BuildEvaluationService {
     ])
     return {
       verdict: pairs.length ? worstVerdict(pairs.map((pair) => pair.relation)) : 'unknown',
+      compliance: judgeCompliance(cautions, build.context.chassisModelYear),
       missingSlots: BUILD_SLOTS.filter((slot) => !build.parts[slot.id]).map((slot) => slot.id),
       pairs: pairs.map(({ rules: _rules, linkModifications: _mods, ...pair }) => pair),
       modifications: applied.map(({ ruleExtraParts: _extra, ...modification }) => modification),

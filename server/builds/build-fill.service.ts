@@ -1,9 +1,16 @@
 import { matingSlots, type SlotId } from '../../shared/build-template'
 import { createsDeadEnd, nextSlotToFill, unfilledNotes, type GapPick } from '../../shared/build-fill'
-import type { EvaluateRequest, FillResult } from '../../shared/schemas/build'
+import type { Candidate, EvaluateRequest, FillResult } from '../../shared/schemas/build'
 import type { BuildCompletionService } from './build-completion.service'
 import type { BuildEvaluationService, ResolvedBuild } from './build-evaluation.service'
 import type { FitGraphIndex } from '../fitment/fit-graph'
+
+/** Candidates that would have needed fewer modifications than the chosen one but were set back (not road-legal, a danger). */
+function passedOver(slot: SlotId, chosen: Candidate, candidates: Candidate[]): FillResult['skipped'] {
+  return candidates
+    .filter((c) => c !== chosen && c.setBackFor.length > 0 && c.modifications.length <= chosen.modifications.length)
+    .map((c) => ({ slot, partNumber: c.part.partNumber, reason: c.setBackFor.join(' ') }))
+}
 
 /** Candidates tried for one slot before it is left empty. */
 const TRIES_PER_SLOT = 5
@@ -27,6 +34,7 @@ export class BuildFillService {
     const reads = this.completion.reads()
     const filled: GapPick[] = []
     const stuck = new Set<SlotId>()
+    const skipped: FillResult['skipped'] = []
     let completion = await this.completion.completeBuild(build, graph, TRIES_PER_SLOT, { reads })
     for (let slot = nextSlotToFill(completion); slot; slot = nextSlotToFill(completion, stuck)) {
       let accepted = false
@@ -38,10 +46,18 @@ export class BuildFillService {
         }
         // Only the slot's mates can become dead ends by this choice.
         const mates = await this.completion.completeBuild(trial, graph, TRIES_PER_SLOT, { only: matingSlots(slot), reads })
-        if (createsDeadEnd(slot, completion, mates)) continue
+        if (createsDeadEnd(slot, completion, mates)) {
+          skipped.push({
+            slot,
+            partNumber: candidate.part.partNumber,
+            reason: 'it would leave a slot it mates with without a part that fits',
+          })
+          continue
+        }
         build = trial
         filled.push({ slot, partNumber: candidate.part.partNumber })
         accepted = true
+        skipped.push(...passedOver(slot, candidate, completion.slots[slot]?.candidates ?? []))
         break
       }
       if (!accepted) stuck.add(slot)
@@ -51,6 +67,7 @@ export class BuildFillService {
       slots: Object.fromEntries(Object.entries(build.parts).map(([slot, part]) => [slot, part!.partNumber])),
       filled,
       unfilled: unfilledNotes(completion, stuck),
+      skipped,
     }
   }
 }

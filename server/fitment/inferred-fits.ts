@@ -8,6 +8,7 @@ import { computeFigures } from '../reasoning/figures'
 import type { RuleBook } from '../reasoning/rule-book'
 import { summariseOutcomes, type RuleSummary } from '../reasoning/rule-summary'
 import type { Found } from './found'
+import { orderEvidence } from './deciding-reason'
 
 type RuleCandidate = { id: number; kind: PartKind; attributes: string; yearTo: number | null }
 /** One page of each (kind, relation) group: the items at [offset, offset + limit) in part-number order. */
@@ -68,7 +69,7 @@ export class InferredFits {
         ruleIds: summary.ruleIds,
         modificationNames: [...new Set(summary.modifications.map((m) => m.name))],
         explanation: [
-          ...summary.steps,
+          ...orderEvidence(summary.steps, summary.relation),
           ...summary.cautions.map((caution): ExplanationStep => ({ type: 'note', text: caution.text, ruleId: caution.ruleId })),
         ],
       })

@@ -4,6 +4,7 @@ import type { FitGraph } from './fit-graph'
 import { chainSteps, loadChainDetails, planChain, RELATION_WORDS } from './explain'
 import type { Facts, RuleBook } from '../reasoning/rule-book'
 import { summariseOutcomes, type RuleSummary } from '../reasoning/rule-summary'
+import { decidingReason, orderEvidence } from './deciding-reason'
 
 export type JudgedPair = PairJudgement & { rules: RuleSummary; linkModifications: string[] }
 
@@ -25,18 +26,22 @@ export async function judgePair(
     const details = await loadChainDetails(graph, [chain])
     const modifications = details.links.get(found.link.id)?.modifications ?? []
     const explanation = chainSteps(graph, chain, details)
+    const ruleSteps = orderEvidence(summary.steps, found.link.relation)
     if (summary.relation && summary.relation !== found.link.relation) {
       explanation.push({
         type: 'note',
         text: `The rules alone would say "${RELATION_WORDS[summary.relation]}" (${summary.ruleIds.join(', ')}); the reviewed link decides.`,
       })
     }
+    explanation.push(...ruleSteps)
+    const fromRules = summary.modifications.filter((m) => modifications.includes(m.name)).map((m) => m.reason)
     return {
       slots: input.slots,
       label: input.label,
       partNumbers,
       relation: found.link.relation,
       decidedBy: 'link',
+      reason: decidingReason(found.link.relation, 'link', explanation, fromRules),
       ruleIds: summary.ruleIds,
       modifications,
       explanation,
@@ -46,7 +51,7 @@ export async function judgePair(
   }
   const relation: Verdict = summary.relation ?? 'unknown'
   const explanation: ExplanationStep[] = summary.relation
-    ? summary.steps
+    ? orderEvidence(summary.steps, summary.relation)
     : [{ type: 'note', text: `No reviewed link and no rule decides ${partNumbers[0]} with ${partNumbers[1]}: no evidence is not a fit.` }]
   return {
     slots: input.slots,
@@ -54,6 +59,12 @@ export async function judgePair(
     partNumbers,
     relation,
     decidedBy: summary.relation ? 'rule' : 'none',
+    reason: decidingReason(
+      relation,
+      summary.relation ? 'rule' : 'none',
+      explanation,
+      summary.modifications.map((m) => m.reason),
+    ),
     ruleIds: summary.ruleIds,
     modifications: summary.modifications.map((m) => m.name),
     explanation,

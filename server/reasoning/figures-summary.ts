@@ -19,6 +19,7 @@ export function summariseFigures(figures: FigureFacts, context: BuildContext): B
     camCrankCentreMm: figures.timing?.centreMm ?? null,
     beltCentreShiftMm: figures.timing?.centreShiftMm ?? null,
     beltTeethNeeded: figures.timing?.beltTeethNeeded ?? null,
+    quenchMm: figures.quench?.mm ?? null,
     chassisModelYear: context.chassisModelYear ?? null,
   }
 }

@@ -3,6 +3,7 @@ import { staticCompressionRatio } from '../../shared/engineering/compression'
 import { displacementCc } from '../../shared/engineering/displacement'
 import { checkHeadBolt, spacerFix, type HeadBoltInput, type ThreadMaterial } from '../../shared/engineering/fasteners'
 import { injectorHeadroom } from '../../shared/engineering/injectors'
+import { checkQuench, type QuenchStatus } from '../../shared/engineering/quench'
 import { beltTeethForCentre, centreDistanceForBeltMm } from '../../shared/engineering/timing-belt'
 import { parseMetricThread } from '../../shared/schemas/part-attributes'
 import type { BuildContext } from '../../shared/schemas/build'
@@ -31,6 +32,7 @@ export type FigureFacts = {
   }
   timing?: { centreMm: number; centreShiftMm?: number; centreShiftAbsMm?: number; beltTeethNeeded?: number }
   injector?: { neededCcMin: number; availableCcMin: number; headroomPct: number; railPressureBar: number }
+  quench?: { mm: number; status: QuenchStatus; minMm: number; maxMm: number }
   engineModelYear?: number
   fuelSystemOpened?: boolean
   electricsTouched?: boolean
@@ -156,6 +158,19 @@ function injector(parts: SlotParts, context: BuildContext): FigureFacts['injecto
   }
 }
 
+/** Quench from the block's deck clearance and the gasket's compressed thickness, against the usual band. */
+function quench(parts: SlotParts): FigureFacts['quench'] {
+  const deckClearanceMm = num(parts.block, 'deckClearanceMm')
+  const compressedGasketMm = num(parts['head-gasket'], 'compressedThicknessMm')
+  if (deckClearanceMm === undefined || compressedGasketMm === undefined) return undefined
+  try {
+    const check = checkQuench({ deckClearanceMm, compressedGasketMm })
+    return { mm: round(check.quenchMm, 2), status: check.status, minMm: check.band.min, maxMm: check.band.max }
+  } catch {
+    return undefined
+  }
+}
+
 /** Cylinders of the build: from the block, else from the lead set, else four. */
 export function cylinders(parts: SlotParts): number {
   return num(parts.block, 'cylinders') ?? num(parts['ignition-leads'], 'cylinders') ?? 4
@@ -181,6 +196,7 @@ export function computeFigures(parts: SlotParts, context: BuildContext = {}): Fi
   figures.headBolt = headBolt(parts)
   figures.timing = timing(parts)
   figures.injector = injector(parts, context)
+  figures.quench = quench(parts)
   if (parts.block?.yearTo) figures.engineModelYear = parts.block.yearTo
   figures.fuelSystemOpened = Boolean(parts['fuel-rail'] || parts.injector || parts['intake-manifold'])
   figures.electricsTouched = Boolean(parts.ecu || parts.harness)

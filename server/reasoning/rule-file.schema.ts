@@ -85,7 +85,15 @@ const eventSchema = z.discriminatedUnion('type', [
   }),
   z.object({
     type: z.literal('caution'),
-    params: z.object({ severity: z.enum(['info', 'warning', 'danger']), text: template, reference: z.string().optional() }).strict(),
+    params: z
+      .object({
+        severity: z.enum(['info', 'warning', 'danger']),
+        text: template,
+        reference: z.string().optional(),
+        /** A legal problem: "blocked" takes road-legality away, "check" asks for a check first. */
+        compliance: z.enum(['check', 'blocked']).optional(),
+      })
+      .strict(),
   }),
 ])
 export type RuleEvent = z.infer<typeof eventSchema>

@@ -9,10 +9,27 @@ export const slotsInputSchema = z.record(
 )
 
 export const buildContextSchema = z.object({
-  targetPowerKw: z.number().positive('Target power must be above zero.').max(2000).optional(),
-  fuelOctane: z.number().min(70, 'Octane (AKI) below 70 is not pump fuel.').max(120).optional(),
-  chassisModelYear: z.number().int().min(1900).max(2100).optional(),
-  vin: z.string().trim().max(17).optional(),
+  targetPowerKw: z
+    .number({ error: () => 'Target power must be a number of kW.' })
+    .positive('Target power must be above zero.')
+    .max(2000, 'Target power must be at most 2000 kW.')
+    .optional(),
+  fuelOctane: z
+    .number({ error: () => 'Octane must be a number.' })
+    .min(80, 'Octane must be between 80 and 120.')
+    .max(120, 'Octane must be between 80 and 120.')
+    .optional(),
+  chassisModelYear: z
+    .number({ error: () => 'Model year must be a year, like 1999.' })
+    .int('Model year must be a whole year, like 1999.')
+    .min(1900, 'Model year must be between 1900 and 2100.')
+    .max(2100, 'Model year must be between 1900 and 2100.')
+    .optional(),
+  vin: z.string().trim().max(17, 'A VIN has 17 characters.').optional(),
+  /** The job takes the engine out of the car (lifting cautions apply). */
+  engineOut: z.boolean().optional(),
+  /** The build removes or disables an emission control (catalyst, EGR, evaporative). */
+  emissionControlsRemoved: z.boolean().optional(),
 })
 export type BuildContext = z.infer<typeof buildContextSchema>
 
@@ -24,6 +41,7 @@ export const cautionSchema = z.object({
   text: z.string(),
   reference: z.string().optional(),
   ruleId: z.string().optional(),
+  compliance: z.enum(['check', 'blocked']).optional(),
 })
 export type Caution = z.infer<typeof cautionSchema>
 
@@ -33,6 +51,8 @@ export const pairJudgementSchema = z.object({
   partNumbers: z.tuple([z.string(), z.string()]),
   relation: verdictSchema,
   decidedBy: z.enum(['link', 'rule', 'none']),
+  /** What decided: the failing rule's or link's text, or the modification's; shown first. */
+  reason: z.string(),
   ruleIds: z.array(z.string()),
   modifications: z.array(z.string()),
   explanation: z.array(explanationStepSchema),
@@ -65,6 +85,7 @@ export const buildFiguresSchema = z.object({
   camCrankCentreMm: z.number().nullable(),
   beltCentreShiftMm: z.number().nullable(),
   beltTeethNeeded: z.number().nullable(),
+  quenchMm: z.number().nullable(),
   chassisModelYear: z.number().nullable(),
 })
 export type BuildFigures = z.infer<typeof buildFiguresSchema>
@@ -75,8 +96,16 @@ export const appliedModificationSchema = modificationSchema.extend({
 })
 export type AppliedModification = z.infer<typeof appliedModificationSchema>
 
+/** Road-legality beside the mechanical verdict: a fit can still be illegal on the road. */
+export const complianceSchema = z.object({
+  status: z.enum(['ok', 'check', 'blocked']),
+  reasons: z.array(z.string()),
+})
+export type Compliance = z.infer<typeof complianceSchema>
+
 export const evaluationSchema = z.object({
   verdict: verdictSchema,
+  compliance: complianceSchema,
   missingSlots: z.array(z.string()),
   pairs: z.array(pairJudgementSchema),
   modifications: z.array(appliedModificationSchema),
@@ -99,6 +128,8 @@ export const candidateSchema = z.object({
   modifications: z.array(z.string()),
   score: z.number(),
   reasons: z.array(z.string()),
+  /** Why it is ranked below parts with more modifications: legal blockers and new danger cautions it brings. */
+  setBackFor: z.array(z.string()),
 })
 export type Candidate = z.infer<typeof candidateSchema>
 
@@ -118,6 +149,8 @@ export const fillResultSchema = z.object({
   slots: z.record(z.string(), z.string()),
   filled: z.array(z.object({ slot: z.string(), partNumber: z.string() })),
   unfilled: z.array(z.object({ slot: z.string(), note: z.string() })),
+  /** Parts fill the gaps passed over, and why (not road-legal, a danger caution, a dead end). */
+  skipped: z.array(z.object({ slot: z.string(), partNumber: z.string(), reason: z.string() })),
 })
 export type FillResult = z.infer<typeof fillResultSchema>
 

@@ -8,7 +8,7 @@ export type PlannerState = { slots: PlannerSlots; context: BuildContext }
 
 /** Context fields and the short names they have in the address. */
 const CONTEXT_KEYS = { targetPowerKw: 'power', fuelOctane: 'octane', chassisModelYear: 'year', vin: 'vin' } as const
-type NumberField = Exclude<keyof BuildContext, 'vin'>
+type NumberField = Exclude<keyof typeof CONTEXT_KEYS, 'vin'>
 
 /**
  * A build in progress lives in the address (`?block=TM-BL-1800&head=TM-HD-2000&power=110`),
@@ -37,7 +37,7 @@ export function plannerToQuery(state: PlannerState): Record<string, string> {
     const value = state.slots[slot]?.trim()
     if (value) query[slot] = value
   }
-  for (const field of Object.keys(CONTEXT_KEYS) as (keyof BuildContext)[]) {
+  for (const field of Object.keys(CONTEXT_KEYS) as (keyof typeof CONTEXT_KEYS)[]) {
     const value = state.context[field]
     if (value !== undefined && value !== '') query[CONTEXT_KEYS[field]] = String(value)
   }

@@ -23,6 +23,24 @@ export function verdictHeadline(verdict: Verdict, partial: boolean): string {
   return (partial ? PARTIAL_HEADLINES : HEADLINES)[verdict]
 }
 
+/**
+ * The headline with road-legality beside the mechanical verdict: a legal
+ * blocker is never left out behind "fits".
+ */
+export function verdictBanner(evaluation: Pick<Evaluation, 'verdict' | 'compliance' | 'figures'>, partial: boolean): string {
+  const headline = verdictHeadline(evaluation.verdict, partial)
+  if (evaluation.compliance.status !== 'blocked') return headline
+  const year = evaluation.figures.chassisModelYear
+  return `${headline} — not road-legal${year ? ` for a ${year} car` : ''}`
+}
+
+/** What the compliance check says, in one line; empty when there is nothing to say. */
+export function complianceLine(compliance: Evaluation['compliance']): string {
+  if (compliance.status === 'ok') return ''
+  const prefix = compliance.status === 'blocked' ? 'Not road-legal' : 'Check road-legality'
+  return `${prefix}: ${compliance.reasons.join(' ')}`
+}
+
 /** The sentence under the headline: what decided the verdict, or what to do next. */
 export function verdictDetail(evaluation: Pick<Evaluation, 'verdict' | 'pairs' | 'modifications'>): string {
   const { verdict, pairs, modifications } = evaluation
@@ -50,12 +68,20 @@ export function missingSlotLabels(missingSlots: readonly string[]): string[] {
 export type FillSummary = { severity: 'success' | 'info'; summary: string; detail: string }
 
 /** What "fill the gaps" did, for a toast: how many slots it filled and why the rest stay empty. */
-export function fillGapsSummary({ filled, unfilled }: Pick<FillResult, 'filled' | 'unfilled'>): FillSummary {
+export function fillGapsSummary({
+  filled,
+  unfilled,
+  skipped = [],
+}: Pick<FillResult, 'filled' | 'unfilled'> & Partial<Pick<FillResult, 'skipped'>>): FillSummary {
+  const gaps = unfilled.length
+    ? `Still empty: ${unfilled.map((gap) => `${slotLabel(gap.slot)} (${gap.note})`).join('; ')}`
+    : 'Every slot now has a part.'
+  const passed = skipped.length
+    ? ` Passed over: ${skipped.map((skip) => `${skip.partNumber} for the ${slotLabel(skip.slot).toLowerCase()} (${skip.reason})`).join('; ')}`
+    : ''
   return {
     severity: filled.length ? 'success' : 'info',
     summary: filled.length ? `Filled ${plural(filled.length, 'slot')}` : 'No empty slot could be filled',
-    detail: unfilled.length
-      ? `Still empty: ${unfilled.map((gap) => `${slotLabel(gap.slot)} (${gap.note})`).join('; ')}`
-      : 'Every slot now has a part.',
+    detail: gaps + passed,
   }
 }

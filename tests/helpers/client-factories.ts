@@ -35,7 +35,7 @@ export function makeFit(part: Part, relation: FitResult['relation'], review: Fit
 }
 
 export function makeCandidate(part: Part, relation: Candidate['relation'] = 'fits'): Candidate {
-  return { part, relation, modifications: [], score: 0, reasons: [] }
+  return { part, relation, modifications: [], score: 0, reasons: [], setBackFor: [] }
 }
 
 export function makePair(
@@ -49,6 +49,7 @@ export function makePair(
     partNumbers: ['A-1', 'B-1'],
     relation,
     decidedBy: 'rule',
+    reason: `${label}: ${relation}`,
     ruleIds: [],
     modifications: [],
     explanation: [{ type: 'rule', text: `${label}: ${relation}` }],
@@ -58,6 +59,7 @@ export function makePair(
 export function makeEvaluation(overrides: Partial<Evaluation> = {}): Evaluation {
   return {
     verdict: 'fits',
+    compliance: { status: 'ok', reasons: [] },
     missingSlots: [],
     pairs: [],
     modifications: [],
@@ -79,6 +81,7 @@ export function makeEvaluation(overrides: Partial<Evaluation> = {}): Evaluation 
       camCrankCentreMm: null,
       beltCentreShiftMm: null,
       beltTeethNeeded: null,
+      quenchMm: null,
       chassisModelYear: null,
     },
     parts: {},

@@ -86,3 +86,31 @@ describe('POST /api/builds/fill', () => {
     expect(gasket.note).toMatch(/fits every chosen part/)
   })
 })
+
+describe('fill the gaps and suggestions with the build context', () => {
+  const tk18Engine = { block: 'TM-BL-1800', head: 'TM-HD-1810' }
+
+  it('suggests the OBD-II control unit first for a 1999 car and says why the OBD-I unit is ranked lower', async () => {
+    const response = await agent.post('/api/builds/complete').send({ slots: tk18Engine, chassisModelYear: 1999, only: ['ecu'] })
+    const candidates = response.body.slots.ecu.candidates as { part: { partNumber: string }; setBackFor: string[] }[]
+    expect(candidates[0]!.part.partNumber).toBe('TM-EC-1896')
+    const obdI = candidates.find((c) => c.part.partNumber === 'TM-EC-1800')!
+    expect(obdI.setBackFor.join(' ')).toMatch(/not road-legal/)
+  })
+
+  it('keeps a 1999 car on OBD-II when filling the gaps, and names the part it passed over', async () => {
+    const response = await agent.post('/api/builds/fill').send({ slots: tk18Engine, chassisModelYear: 1999, targetPowerKw: 90 })
+    expect(response.status).toBe(200)
+    const ecu = response.body.slots.ecu as string
+    const evaluation = await agent.post('/api/builds/evaluate').send({ slots: response.body.slots, chassisModelYear: 1999 })
+    expect(evaluation.body.parts.ecu.attributes.diagnosticGeneration).toBe('obd-ii')
+    expect(ecu).toBeDefined()
+    expect(response.body.skipped.some((s: { slot: string; reason: string }) => s.slot === 'ecu' && /OBD-II/.test(s.reason))).toBe(true)
+  })
+
+  it('without a model year, ranks control units by modifications alone', async () => {
+    const response = await agent.post('/api/builds/complete').send({ slots: tk18Engine, only: ['ecu'] })
+    const candidates = response.body.slots.ecu.candidates as { setBackFor: string[] }[]
+    expect(candidates.every((c) => c.setBackFor.length === 0)).toBe(true)
+  })
+})

@@ -105,3 +105,15 @@ describe('fillGapsSummary', () => {
     expect(summary.summary).toBe('No empty slot could be filled')
   })
 })
+
+describe('fillGapsSummary with parts passed over', () => {
+  it('names the part fill the gaps passed over and why', () => {
+    const summary = fillGapsSummary({
+      filled: [{ slot: 'ecu', partNumber: 'TM-EC-1896' }],
+      unfilled: [],
+      skipped: [{ slot: 'ecu', partNumber: 'TM-EC-1800', reason: 'Ranked lower, not road-legal: OBD-II required.' }],
+    })
+    expect(summary.detail).toContain('Passed over: TM-EC-1800')
+    expect(summary.detail).toContain('not road-legal')
+  })
+})

@@ -50,3 +50,58 @@ describe('PlannerVerdict', () => {
     expect(wrapper.get('h2').text()).toBe('No parts chosen yet')
   })
 })
+
+describe('PlannerVerdict with road-legality and errors', () => {
+  it('states both the mechanical verdict and a legal blocker, never "fits" alone', () => {
+    const evaluation = makeEvaluation({
+      verdict: 'fits-with-modification',
+      compliance: { status: 'blocked', reasons: ['This vehicle is model year 1999: it must keep a working OBD-II system.'] },
+    })
+    evaluation.figures.chassisModelYear = 1999
+    const wrapper = mountVerdict({ evaluation, filledCount: 3, isLoading: false })
+    expect(wrapper.get('h2').text()).toBe('The build fits with modifications — not road-legal for a 1999 car')
+    expect(wrapper.text()).toContain('Not road-legal: This vehicle is model year 1999')
+    expect(wrapper.get('section').attributes('data-compliance')).toBe('blocked')
+  })
+
+  it('says nothing extra when compliance is ok', () => {
+    const wrapper = mountVerdict({ evaluation: makeEvaluation({ verdict: 'fits' }), filledCount: 2, isLoading: false })
+    expect(wrapper.get('h2').text()).toBe('The build fits')
+    expect(wrapper.text()).not.toContain('road-legal')
+  })
+
+  it('turns into an error naming the field, with a link to its input, instead of "Checking the build…"', async () => {
+    const wrapper = mount(PlannerVerdict, {
+      props: {
+        evaluation: null,
+        filledCount: 2,
+        isLoading: false,
+        errors: [{ field: 'fuelOctane', label: 'Fuel octane', message: 'Octane must be between 80 and 120.', inputId: 'ctx-octane' }],
+      },
+      attachTo: document.body,
+    })
+    const alert = wrapper.get('[role="alert"]')
+    expect(alert.text()).toContain('One value cannot be judged')
+    expect(alert.text()).toContain('Fuel octane: Octane must be between 80 and 120.')
+    expect(wrapper.text()).not.toContain('Checking the build')
+    const input = document.createElement('input')
+    input.id = 'ctx-octane'
+    input.scrollIntoView = () => {}
+    document.body.appendChild(input)
+    await alert.get('a[href="#ctx-octane"]').trigger('click')
+    expect(document.activeElement).toBe(input)
+    input.remove()
+    wrapper.unmount()
+  })
+
+  it('shows the error over a stale verdict', () => {
+    const wrapper = mountVerdict({
+      evaluation: makeEvaluation({ verdict: 'fits' }),
+      filledCount: 2,
+      isLoading: false,
+      errors: [{ field: 'head', label: 'Cylinder head', message: 'Unknown part number "TM-HD-20O0".', inputId: 'slot-head' }],
+    })
+    expect(wrapper.get('section').attributes('data-verdict')).toBe('error')
+    expect(wrapper.text()).not.toContain('The build fits')
+  })
+})
