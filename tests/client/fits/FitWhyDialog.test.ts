@@ -3,6 +3,7 @@ import PrimeVue from 'primevue/config'
 import { describe, expect, it } from 'vitest'
 import FitWhyDialog from '@/components/fits/FitWhyDialog.vue'
 import type { FitResult } from '@shared/schemas/fitment'
+import { NO_STOCK } from '@shared/schemas/stock'
 import { makePart } from '../../helpers/client-factories'
 
 describe('FitWhyDialog', () => {
@@ -18,6 +19,8 @@ describe('FitWhyDialog', () => {
         { type: 'rule', relation: 'fits', text: 'Gasket bolt pattern P10-A matches the block.' },
         { type: 'rule', relation: 'does-not-fit', text: 'Gasket bore 84.5 mm is smaller than the 86 mm cylinder bore.' },
       ],
+      fieldReports: { confirmed: 0, contradicted: 0 },
+      stock: { ...NO_STOCK },
     }
     const wrapper = mount(FitWhyDialog, {
       props: { result, from: 'TM-BL-2000' },
