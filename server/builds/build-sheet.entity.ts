@@ -38,6 +38,10 @@ export class BuildSheetEntity {
   @Column({ type: 'text', default: '' })
   notes!: string
 
+  /** Ticked checklist steps: modification name -> step indexes. */
+  @Column({ type: 'simple-json', default: '{}' })
+  checklist!: Record<string, number[]>
+
   @CreateDateColumn()
   createdAt!: Date
 

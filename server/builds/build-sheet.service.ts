@@ -18,10 +18,20 @@ function toBuildSheet(entity: BuildSheetEntity): BuildSheet {
     chassisModelYear: entity.chassisModelYear,
     vin: entity.vin,
     notes: entity.notes,
+    checklist: entity.checklist ?? {},
     owner: { id: entity.owner.id, name: entity.owner.name },
     createdAt: entity.createdAt.toISOString(),
     updatedAt: entity.updatedAt.toISOString(),
   }
+}
+
+/** A step ticked twice is ticked once; an untouched modification is not stored. */
+function sortedTicks(ticks: Record<string, number[]>): Record<string, number[]> {
+  return Object.fromEntries(
+    Object.entries(ticks)
+      .map(([name, steps]) => [name, [...new Set(steps)].sort((a, b) => a - b)] as const)
+      .filter(([, steps]) => steps.length > 0),
+  )
 }
 
 /** Build sheets belong to their author; editors and administrators see and manage all of them. */
@@ -77,6 +87,7 @@ export class BuildSheetService {
       chassisModelYear: input.chassisModelYear ?? null,
       vin: input.vin ?? null,
       notes: input.notes,
+      checklist: sortedTicks(input.checklist),
     })
     const saved = await this.sheets.save(entity)
     return this.get(saved.id, user)
@@ -91,6 +102,7 @@ export class BuildSheetService {
     if ('chassisModelYear' in change) entity.chassisModelYear = change.chassisModelYear ?? null
     if ('vin' in change) entity.vin = change.vin ?? null
     if (change.notes !== undefined) entity.notes = change.notes
+    if (change.checklist !== undefined) entity.checklist = sortedTicks(change.checklist)
     await this.sheets.save(entity)
     return this.get(id, user)
   }

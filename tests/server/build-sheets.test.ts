@@ -25,6 +25,25 @@ describe('/api/builds (build sheets)', () => {
     expect((await tech.get(`/api/builds/${created.body.id}`)).status).toBe(404)
   })
 
+  it('saves checklist ticks and notes with the sheet and answers them on reopening', async () => {
+    const tech = await t.signIn('tech')
+    const created = await tech.post('/api/builds').send(sheet)
+    expect(created.body.checklist).toEqual({})
+    const ticks = { 'oil-restrictor-fit': [2, 0, 2], 'head-stud-sleeve': [] }
+    const saved = await tech.put(`/api/builds/${created.body.id}`).send({ checklist: ticks, notes: 'Bosses sleeved.' })
+    expect(saved.status).toBe(200)
+    const reopened = (await tech.get(`/api/builds/${created.body.id}`)).body
+    expect(reopened.checklist).toEqual({ 'oil-restrictor-fit': [0, 2] })
+    expect(reopened.notes).toBe('Bosses sleeved.')
+  })
+
+  it('refuses checklist ticks that are not step indexes', async () => {
+    const tech = await t.signIn('tech')
+    const created = await tech.post('/api/builds').send(sheet)
+    const refused = await tech.put(`/api/builds/${created.body.id}`).send({ checklist: { 'oil-restrictor-fit': [-1] } })
+    expectBadRequest(refused, 'checklist.oil-restrictor-fit.0')
+  })
+
   it('stores slots by part number even when a mark was typed', async () => {
     const tech = await t.signIn('tech')
     const created = await tech.post('/api/builds').send({ ...sheet, slots: { head: 'H20-3180' } })

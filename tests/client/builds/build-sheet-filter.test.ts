@@ -9,6 +9,7 @@ function sheet(id: number, name: string, slots: Record<string, string>, notes = 
     name,
     slots,
     notes,
+    checklist: {},
     targetPowerKw: null,
     fuelOctane: null,
     chassisModelYear: null,

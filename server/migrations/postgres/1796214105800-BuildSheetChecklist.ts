@@ -1,0 +1,14 @@
+import type { MigrationInterface, QueryRunner } from 'typeorm'
+
+/* Written by hand (no PostgreSQL server at hand to generate it): the same column as the SQLite migration. */
+export class BuildSheetChecklist1796214105800 implements MigrationInterface {
+  name = 'BuildSheetChecklist1796214105800'
+
+  async up(queryRunner: QueryRunner): Promise<void> {
+    await queryRunner.query('ALTER TABLE "build_sheet" ADD "checklist" text NOT NULL DEFAULT \'{}\'')
+  }
+
+  async down(queryRunner: QueryRunner): Promise<void> {
+    await queryRunner.query('ALTER TABLE "build_sheet" DROP COLUMN "checklist"')
+  }
+}
