@@ -161,6 +161,9 @@ export const buildSheetSchema = z.object({
   vin: z.string().nullable(),
   notes: z.string(),
   checklist: z.record(z.string(), z.array(z.number().int())).default({}),
+  /** The verdict and labour as of the last save (null for a sheet saved before they were kept). */
+  verdict: verdictSchema.nullable().default(null),
+  labourMinutes: z.number().int().nullable().default(null),
   owner: z.object({ id: z.number().int(), name: z.string() }),
   createdAt: z.string(),
   updatedAt: z.string(),

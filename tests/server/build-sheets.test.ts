@@ -37,6 +37,19 @@ describe('/api/builds (build sheets)', () => {
     expect(reopened.notes).toBe('Bosses sleeved.')
   })
 
+  it('answers in the list the verdict and the labour of each sheet as of its last save', async () => {
+    const tech = await t.signIn('tech')
+    const evaluated = (await tech.post('/api/builds/evaluate').send({ slots: sheet.slots, targetPowerKw: 105, fuelOctane: 91 })).body
+    const created = (await tech.post('/api/builds').send(sheet)).body
+    const listed = (await tech.get('/api/builds')).body.find((s: { id: number }) => s.id === created.id)
+    const minutes = evaluated.modifications.reduce((sum: number, m: { timeMinutes: number | null }) => sum + (m.timeMinutes ?? 0), 0)
+    expect(evaluated.modifications.length).toBeGreaterThan(0)
+    expect(listed).toMatchObject({ verdict: evaluated.verdict, labourMinutes: minutes })
+    expect(minutes).toBeGreaterThan(0)
+    const emptied = (await tech.put(`/api/builds/${created.id}`).send({ slots: { block: 'TM-BL-1800' } })).body
+    expect(emptied).toMatchObject({ verdict: 'unknown', labourMinutes: 0 })
+  })
+
   it('refuses checklist ticks that are not step indexes', async () => {
     const tech = await t.signIn('tech')
     const created = await tech.post('/api/builds').send(sheet)

@@ -10,6 +10,8 @@ function sheet(id: number, name: string, slots: Record<string, string>, notes = 
     slots,
     notes,
     checklist: {},
+    verdict: null,
+    labourMinutes: null,
     targetPowerKw: null,
     fuelOctane: null,
     chassisModelYear: null,

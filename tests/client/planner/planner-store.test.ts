@@ -17,6 +17,8 @@ function sheet(overrides: Partial<BuildSheet> = {}): BuildSheet {
     vin: null,
     notes: '',
     checklist: {},
+    verdict: null,
+    labourMinutes: null,
     owner: { id: 1, name: 'A. Tech' },
     createdAt: '2026-01-01T00:00:00.000Z',
     updatedAt: '2026-01-01T00:00:00.000Z',
