@@ -72,7 +72,7 @@ export function createServices(dataSource: DataSource, config: AppConfig, rules:
     evaluation,
     completion,
     fill: new BuildFillService(graphIndex, evaluation, completion),
-    sheets: new BuildSheetService(dataSource, parts),
+    sheets: new BuildSheetService(dataSource, parts, evaluation),
     links: new LinkService(dataSource, parts, graphIndex),
     imports: new ImportService(dataSource, { maxRows: config.importMaxRows }, graphIndex),
     exports: new ExportService(dataSource),

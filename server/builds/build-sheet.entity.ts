@@ -38,6 +38,17 @@ export class BuildSheetEntity {
   @Column({ type: 'text', default: '' })
   notes!: string
 
+  /** Ticked checklist steps: modification name -> step indexes. */
+  @Column({ type: 'simple-json', default: '{}' })
+  checklist!: Record<string, number[]>
+
+  /** The verdict and the labour (minutes, from the modifications' estimates) when the sheet was last saved, for the list. */
+  @Column({ type: 'text', nullable: true })
+  savedVerdict!: string | null
+
+  @Column({ type: 'integer', nullable: true })
+  labourMinutes!: number | null
+
   @CreateDateColumn()
   createdAt!: Date
 

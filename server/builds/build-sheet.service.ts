@@ -7,6 +7,8 @@ import { BuildSheetEntity } from './build-sheet.entity'
 import { AppError } from '../errors/app-error'
 import { resolveSlots } from './build-slots'
 import type { PartService } from '../catalogue/part.service'
+import type { BuildEvaluationService } from './build-evaluation.service'
+import { verdictSchema } from '../../shared/schemas/fitment'
 
 function toBuildSheet(entity: BuildSheetEntity): BuildSheet {
   return {
@@ -18,10 +20,22 @@ function toBuildSheet(entity: BuildSheetEntity): BuildSheet {
     chassisModelYear: entity.chassisModelYear,
     vin: entity.vin,
     notes: entity.notes,
+    checklist: entity.checklist ?? {},
+    verdict: verdictSchema.safeParse(entity.savedVerdict).data ?? null,
+    labourMinutes: entity.labourMinutes,
     owner: { id: entity.owner.id, name: entity.owner.name },
     createdAt: entity.createdAt.toISOString(),
     updatedAt: entity.updatedAt.toISOString(),
   }
+}
+
+/** A step ticked twice is ticked once; an untouched modification is not stored. */
+function sortedTicks(ticks: Record<string, number[]>): Record<string, number[]> {
+  return Object.fromEntries(
+    Object.entries(ticks)
+      .map(([name, steps]) => [name, [...new Set(steps)].sort((a, b) => a - b)] as const)
+      .filter(([, steps]) => steps.length > 0),
+  )
 }
 
 /** Build sheets belong to their author; editors and administrators see and manage all of them. */
@@ -31,6 +45,7 @@ export class BuildSheetService {
   constructor(
     dataSource: DataSource,
     private readonly parts: PartService,
+    private readonly evaluation: BuildEvaluationService,
   ) {
     this.sheets = dataSource.getRepository(BuildSheetEntity)
   }
@@ -77,7 +92,9 @@ export class BuildSheetService {
       chassisModelYear: input.chassisModelYear ?? null,
       vin: input.vin ?? null,
       notes: input.notes,
+      checklist: sortedTicks(input.checklist),
     })
+    await this.judge(entity)
     const saved = await this.sheets.save(entity)
     return this.get(saved.id, user)
   }
@@ -91,8 +108,35 @@ export class BuildSheetService {
     if ('chassisModelYear' in change) entity.chassisModelYear = change.chassisModelYear ?? null
     if ('vin' in change) entity.vin = change.vin ?? null
     if (change.notes !== undefined) entity.notes = change.notes
+    if (change.checklist !== undefined) entity.checklist = sortedTicks(change.checklist)
+    await this.judge(entity)
     await this.sheets.save(entity)
     return this.get(id, user)
+  }
+
+  /**
+   * Judges the sheet once, when it is saved, so the list answers verdict and labour
+   * without evaluating every sheet on every request. A later catalogue change shows on opening the sheet.
+   */
+  private async judge(entity: BuildSheetEntity) {
+    const context = {
+      ...(entity.targetPowerKw !== null && { targetPowerKw: entity.targetPowerKw }),
+      ...(entity.fuelOctane !== null && { fuelOctane: entity.fuelOctane }),
+      ...(entity.chassisModelYear !== null && { chassisModelYear: entity.chassisModelYear }),
+      ...(entity.vin !== null && { vin: entity.vin }),
+    }
+    const evaluation = await this.evaluation.evaluate({ slots: entity.slots, ...context }).catch((error: unknown) => {
+      // A build the planner cannot judge is still saved; the list shows no verdict for it.
+      if (error instanceof AppError) return null
+      throw error
+    })
+    if (!evaluation) {
+      entity.savedVerdict = null
+      entity.labourMinutes = null
+      return
+    }
+    entity.savedVerdict = evaluation.verdict
+    entity.labourMinutes = evaluation.modifications.reduce((sum, modification) => sum + (modification.timeMinutes ?? 0), 0)
   }
 
   async remove(id: number, user: User): Promise<void> {

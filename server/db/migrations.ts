@@ -18,6 +18,8 @@ import { SecurityEvents1796213775454 } from '../migrations/1796213775454-Securit
 import { SecurityEvents1796213777137 as PostgresSecurityEvents1796213777137 } from '../migrations/postgres/1796213777137-SecurityEvents'
 import { SessionsByUser1796212625077 } from '../migrations/1796212625077-SessionsByUser'
 import { SessionsByUser1796212625998 as PostgresSessionsByUser1796212625998 } from '../migrations/postgres/1796212625998-SessionsByUser'
+import { BuildSheetChecklist1796214415051 } from '../migrations/1796214415051-BuildSheetChecklist'
+import { BuildSheetChecklist1796214105800 as PostgresBuildSheetChecklist1796214105800 } from '../migrations/postgres/1796214105800-BuildSheetChecklist'
 
 /** SQLite's, in the order they run. */
 export const migrations = [
@@ -32,6 +34,7 @@ export const migrations = [
   SignInThrottle1796213596647,
   SecurityEvents1796213775454,
   Vehicles1796213931900,
+  BuildSheetChecklist1796214415051,
 ]
 
 /** PostgreSQL's, generated from the same entities (`npx tsx server/db/generate-migration.ts Name --postgres`). */
@@ -45,4 +48,5 @@ export const postgresMigrations = [
   PostgresSignInThrottle1796213598364,
   PostgresSecurityEvents1796213777137,
   PostgresVehicles1796213933784,
+  PostgresBuildSheetChecklist1796214105800,
 ]

@@ -7,6 +7,9 @@ export type HeaderSpec = {
   known: readonly string[]
   /** Whether columns beyond `known` are allowed (a parts file's attributes) or refused. */
   extraColumns: 'allowed' | 'refused'
+  /** What this file is called, and the other import's file: a header of the other kind is named as such. */
+  file: string
+  otherFile?: { file: string; columns: readonly string[] }
 }
 
 export type Header = {
@@ -32,6 +35,11 @@ export function readHeader(cells: string[], row: number, spec: HeaderSpec): Head
     seen.add(column)
   }
   if (!spec.known.some((column) => seen.has(column))) {
+    const other = spec.otherFile
+    if (other && other.columns.some((column) => seen.has(column))) {
+      const message = `Row ${row} looks like the header of a ${other.file}, not a ${spec.file}. Upload it as a ${other.file}, or choose a ${spec.file}.`
+      throw new AppError(400, 'wrong_file', message, issueDetails([{ row, column: '', message }]))
+    }
     throw new AppError(
       400,
       'missing_header',

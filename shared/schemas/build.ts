@@ -154,10 +154,17 @@ export const fillResultSchema = z.object({
 })
 export type FillResult = z.infer<typeof fillResultSchema>
 
+/** Ticked checklist steps: modification name -> indexes of its ticked steps. */
+export const checklistTicksSchema = z
+  .record(z.string().trim().min(1).max(80), z.array(z.number().int().min(0).max(199)).max(200))
+  .refine((ticks) => Object.keys(ticks).length <= 200, 'At most 200 modifications on a checklist.')
+export type ChecklistTicks = z.infer<typeof checklistTicksSchema>
+
 export const buildSheetInputSchema = buildContextSchema.extend({
   name: z.string().trim().min(1, 'Give the build a name.').max(120),
   slots: z.record(z.string(), z.string().trim().min(1).max(100)),
   notes: z.string().max(4000).default(''),
+  checklist: checklistTicksSchema.default({}),
 })
 export type BuildSheetInput = z.infer<typeof buildSheetInputSchema>
 
@@ -171,6 +178,7 @@ export const buildSheetUpdateSchema = z
     chassisModelYear: buildContextSchema.shape.chassisModelYear.unwrap().nullable(),
     vin: buildContextSchema.shape.vin.unwrap().nullable(),
     notes: z.string().max(4000),
+    checklist: checklistTicksSchema,
   })
   .partial()
   .refine((value) => Object.keys(value).length > 0, 'Change at least one field.')
@@ -185,6 +193,10 @@ export const buildSheetSchema = z.object({
   chassisModelYear: z.number().nullable(),
   vin: z.string().nullable(),
   notes: z.string(),
+  checklist: z.record(z.string(), z.array(z.number().int())).default({}),
+  /** The verdict and labour as of the last save (null for a sheet saved before they were kept). */
+  verdict: verdictSchema.nullable().default(null),
+  labourMinutes: z.number().int().nullable().default(null),
   owner: z.object({ id: z.number().int(), name: z.string() }),
   createdAt: z.string(),
   updatedAt: z.string(),

@@ -30,8 +30,9 @@ export function usePlannerBuild() {
   )
   const query = computed(() => plannerToQuery(state.value))
   const filledCount = computed(() => filledSlotCount(state.value.slots))
-  const isDirty = computed(() =>
-    planner.sheet ? !sameBuild(plannerToQuery(sheetState(planner.sheet)), query.value) : filledCount.value > 0,
+  const isDirty = computed(
+    () =>
+      planner.ticksChanged || (planner.sheet ? !sameBuild(plannerToQuery(sheetState(planner.sheet)), query.value) : filledCount.value > 0),
   )
 
   /** `replace` is for what the user did not do (a mark turned into its current number). */

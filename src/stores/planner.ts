@@ -1,7 +1,15 @@
 import { defineStore } from 'pinia'
 import { computed, ref } from 'vue'
 import { isSlotId, type SlotId } from '@shared/build-template'
-import type { BuildContext, BuildSheet, BuildSheetInput, BuildSheetUpdate, Evaluation, FillResult } from '@shared/schemas/build'
+import type {
+  BuildContext,
+  BuildSheet,
+  ChecklistTicks,
+  BuildSheetInput,
+  BuildSheetUpdate,
+  Evaluation,
+  FillResult,
+} from '@shared/schemas/build'
 import { buildsApi } from '@/api/builds'
 import { useRemote } from '@/composables/useRemote'
 import { buildKey, evaluateBody, filledSlotCount, type PlannerSlots, type PlannerState } from '@/lib/planner-query'
@@ -30,6 +38,8 @@ export const usePlannerStore = defineStore('planner', () => {
   /** The saved sheet being edited, if any. */
   const sheet = ref<BuildSheet | null>(null)
   const lastAddress = ref<PlannerAddress | null>(null)
+  /** The checklist as ticked in the shop, saved with the sheet. */
+  const ticks = ref<ChecklistTicks>({})
   const evaluation = useRemote<Evaluation>()
   /** The build the verdict belongs to (or is being asked for). */
   const evaluatedKey = ref<string | null>(null)
@@ -41,17 +51,36 @@ export const usePlannerStore = defineStore('planner', () => {
 
   function openSheet(saved: BuildSheet) {
     sheet.value = saved
+    ticks.value = structuredClone(saved.checklist)
   }
 
   function forgetSheet() {
     sheet.value = null
+    ticks.value = {}
   }
 
   /** Start over: nothing to come back to. */
   function forget() {
-    sheet.value = null
+    forgetSheet()
     lastAddress.value = null
   }
+
+  function isTicked(modification: string, step: number): boolean {
+    return ticks.value[modification]?.includes(step) ?? false
+  }
+
+  function setTick(modification: string, step: number, ticked: boolean) {
+    const steps = (ticks.value[modification] ?? []).filter((index) => index !== step)
+    if (ticked) steps.push(step)
+    ticks.value = { ...ticks.value, [modification]: steps.sort((a, b) => a - b) }
+  }
+
+  /** Whether the ticks differ from the saved sheet's (or, without a sheet, whether anything is ticked). */
+  const ticksChanged = computed(() => {
+    const saved = sheet.value?.checklist ?? {}
+    const names = new Set([...Object.keys(saved), ...Object.keys(ticks.value)])
+    return [...names].some((name) => (saved[name] ?? []).join(',') !== (ticks.value[name] ?? []).join(','))
+  })
 
   /**
    * Checks the build once. Returns the current numbers for slots typed as a mark or a
@@ -89,7 +118,7 @@ export const usePlannerStore = defineStore('planner', () => {
   }
 
   function sheetInput(state: PlannerState, name: string, notes = ''): BuildSheetInput {
-    return { ...evaluateBody(state), name, notes }
+    return { ...evaluateBody(state), name, notes, checklist: ticks.value }
   }
 
   /** A full update: slots and every context field (null clears what was removed). */
@@ -101,6 +130,7 @@ export const usePlannerStore = defineStore('planner', () => {
       fuelOctane: c.fuelOctane ?? null,
       chassisModelYear: c.chassisModelYear ?? null,
       vin: c.vin ?? null,
+      checklist: ticks.value,
     }
   }
 
@@ -111,6 +141,10 @@ export const usePlannerStore = defineStore('planner', () => {
     isEvaluating: evaluation.isLoading,
     evaluationError: evaluation.error,
     fieldErrors,
+    ticks,
+    ticksChanged,
+    isTicked,
+    setTick,
     openSheet,
     forgetSheet,
     forget,

@@ -198,6 +198,27 @@ describe.skipIf(!run)('technician: plan a build, get the verdict and the parts l
     await page.emulateMedia({ media: 'screen' })
   })
 
+  it('keeps checklist ticks through a save and a reload, and asks before leaving a sheet with unsaved ticks', async () => {
+    const steps = page.getByRole('region', { name: /Modifications checklist/ }).getByRole('checkbox')
+    await steps.first().check()
+    await page.getByText('unsaved changes').waitFor()
+    await page.getByRole('navigation', { name: 'Main' }).getByRole('link', { name: 'Build sheets' }).click()
+    const ask = page.getByRole('alertdialog').or(page.getByRole('dialog')).filter({ hasText: 'Leave without saving?' })
+    await ask.waitFor()
+    await saveScreenshot(page, 'planner-unsaved-guard')
+    await ask.getByRole('button', { name: 'Stay' }).click()
+    expect(page.url()).toMatch(/\/planner\/\d+/)
+    await page.getByRole('button', { name: 'Save changes' }).click()
+    await expect.poll(() => page.getByText('unsaved changes').count(), within).toBe(0)
+    await page.reload()
+    await expect.poll(() => steps.first().isChecked(), within).toBe(true)
+    expect(await steps.nth(1).isChecked()).toBe(false)
+    await steps.nth(1).check()
+    await page.getByRole('navigation', { name: 'Main' }).getByRole('link', { name: 'Build sheets' }).click()
+    await ask.getByRole('button', { name: 'Leave without saving' }).click()
+    await page.waitForURL(/\/builds$/)
+  })
+
   it('shows a demo sheet that does not fit in the dark theme and at tablet width', async () => {
     await page.goto(`${server.url}/builds`)
     await page.getByRole('link', { name: 'Open TK18 head on a TK20V block with torque-to-yield bolts' }).click()

@@ -25,6 +25,38 @@ describe('/api/builds (build sheets)', () => {
     expect((await tech.get(`/api/builds/${created.body.id}`)).status).toBe(404)
   })
 
+  it('saves checklist ticks and notes with the sheet and answers them on reopening', async () => {
+    const tech = await t.signIn('tech')
+    const created = await tech.post('/api/builds').send(sheet)
+    expect(created.body.checklist).toEqual({})
+    const ticks = { 'oil-restrictor-fit': [2, 0, 2], 'head-stud-sleeve': [] }
+    const saved = await tech.put(`/api/builds/${created.body.id}`).send({ checklist: ticks, notes: 'Bosses sleeved.' })
+    expect(saved.status).toBe(200)
+    const reopened = (await tech.get(`/api/builds/${created.body.id}`)).body
+    expect(reopened.checklist).toEqual({ 'oil-restrictor-fit': [0, 2] })
+    expect(reopened.notes).toBe('Bosses sleeved.')
+  })
+
+  it('answers in the list the verdict and the labour of each sheet as of its last save', async () => {
+    const tech = await t.signIn('tech')
+    const evaluated = (await tech.post('/api/builds/evaluate').send({ slots: sheet.slots, targetPowerKw: 105, fuelOctane: 91 })).body
+    const created = (await tech.post('/api/builds').send(sheet)).body
+    const listed = (await tech.get('/api/builds')).body.find((s: { id: number }) => s.id === created.id)
+    const minutes = evaluated.modifications.reduce((sum: number, m: { timeMinutes: number | null }) => sum + (m.timeMinutes ?? 0), 0)
+    expect(evaluated.modifications.length).toBeGreaterThan(0)
+    expect(listed).toMatchObject({ verdict: evaluated.verdict, labourMinutes: minutes })
+    expect(minutes).toBeGreaterThan(0)
+    const emptied = (await tech.put(`/api/builds/${created.id}`).send({ slots: { block: 'TM-BL-1800' } })).body
+    expect(emptied).toMatchObject({ verdict: 'unknown', labourMinutes: 0 })
+  })
+
+  it('refuses checklist ticks that are not step indexes', async () => {
+    const tech = await t.signIn('tech')
+    const created = await tech.post('/api/builds').send(sheet)
+    const refused = await tech.put(`/api/builds/${created.body.id}`).send({ checklist: { 'oil-restrictor-fit': [-1] } })
+    expectBadRequest(refused, 'checklist.oil-restrictor-fit.0')
+  })
+
   it('stores slots by part number even when a mark was typed', async () => {
     const tech = await t.signIn('tech')
     const created = await tech.post('/api/builds').send({ ...sheet, slots: { head: 'H20-3180' } })

@@ -149,3 +149,14 @@ describe('POST /api/imports, links, bad rows', () => {
     expect(response.body.error.details).toEqual([{ path: 'row 1, relation', message: 'Required column "relation" is missing.' }])
   })
 })
+
+describe('POST /api/imports, links, a parts file', () => {
+  it('says the file looks like a parts file and writes nothing', async () => {
+    const before = await databaseSnapshot(t.dataSource)
+    const response = await uploadCsv(editor, 'part_number,kind,name\nTM-X-1,block,Odd block\n', { type: 'links', mode: 'commit' })
+    expect(response.status).toBe(400)
+    expect(response.body.error.code).toBe('wrong_file')
+    expect(response.body.error.message).toContain('Row 1 looks like the header of a parts file')
+    expect(await databaseSnapshot(t.dataSource)).toEqual(before)
+  })
+})

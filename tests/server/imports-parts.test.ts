@@ -136,6 +136,12 @@ describe('POST /api/imports, parts, bad header', () => {
     ['a missing header row', 'TM-X-1,block,Odd block\n', 'missing_header', 'not a header row'],
     ['a missing required column', 'part_number,name\nTM-X-1,Odd block\n', 'invalid_header', 'Required column "kind" is missing'],
     ['a column named twice', 'part_number,kind,name,name\nTM-X-1,block,A,B\n', 'invalid_header', 'Column "name" appears twice'],
+    [
+      'the header of a links file',
+      'from_part,to_part,relation\nTM-HD-1810,TM-BL-2000,fits\n',
+      'wrong_file',
+      'looks like the header of a links file',
+    ],
   ])('refuses a file with %s at row 1 and writes nothing', async (_what, csv, code, message) => {
     const before = await databaseSnapshot(t.dataSource)
     for (const mode of ['preview', 'commit'] as const) {
@@ -146,5 +152,15 @@ describe('POST /api/imports, parts, bad header', () => {
       expect(response.body.error.message).toContain(message)
     }
     expect(await databaseSnapshot(t.dataSource)).toEqual(before)
+  })
+})
+
+describe('POST /api/imports, parts, every problem of a row', () => {
+  it('rejects a row with an empty name and a bad year, naming both', async () => {
+    const csv = 'part_number,kind,name,year_from\nTM-X-9,block,,19x9\n'
+    const response = await uploadCsv(editor, csv, { type: 'parts', mode: 'preview' })
+    expect(response.status).toBe(200)
+    const columns = response.body.errors.filter((e: { row: number }) => e.row === 2).map((e: { column: string }) => e.column)
+    expect(columns.sort()).toEqual(['name', 'year_from'])
   })
 })

@@ -38,4 +38,16 @@ describe('parsePartRow', () => {
       expect(error!.message).toContain(message)
     }
   })
+
+  it('reports every problem of a row when the name is empty and a year is bad', () => {
+    const result = parsePartRow(row({ name: '', year_from: '99' }))
+    expect(result.ok).toBe(false)
+    if (!result.ok) expect(result.errors.map((e) => e.column).sort()).toEqual(['name', 'year_from'])
+  })
+
+  it('still checks the name and years of a row whose kind is unknown', () => {
+    const result = parsePartRow(row({ kind: 'flux', name: '', year_to: 'soon' }))
+    expect(result.ok).toBe(false)
+    if (!result.ok) expect(result.errors.map((e) => e.column).sort()).toEqual(['kind', 'name', 'year_to'])
+  })
 })

@@ -96,20 +96,15 @@ function typedAttributes(kind: PartKind, row: Record<string, string>, errors: Ro
 export function parsePartRow(row: Record<string, string>): PartRowResult {
   const errors: RowError[] = []
   const kindText = (row.kind ?? '').trim().toLowerCase()
-  if (!(PART_KINDS as readonly string[]).includes(kindText)) {
-    errors.push({
-      column: 'kind',
-      message: kindText ? `Unknown kind "${kindText}".` : 'Kind is required.',
-    })
-    return { ok: false, errors }
-  }
-  const kind = kindText as PartKind
+  const knownKind = (PART_KINDS as readonly string[]).includes(kindText)
+  if (!knownKind) errors.push({ column: 'kind', message: kindText ? `Unknown kind "${kindText}".` : 'Kind is required.' })
+  // An unknown kind cannot type the attributes, but the row's other fields are still checked so that every problem shows at once.
+  const kind = (knownKind ? kindText : PART_KINDS[0]) as PartKind
   const yearFrom = parseYear(row.year_from, 'year_from', errors)
   const yearTo = parseYear(row.year_to, 'year_to', errors)
-  const attributes = typedAttributes(kind, row, errors)
+  const attributes = knownKind ? typedAttributes(kind, row, errors) : {}
   const marks = Object.entries(MARK_COLUMNS).flatMap(([column, type]) => splitList(row[column]).map((value) => ({ type, value })))
-  if (errors.length) return { ok: false, errors }
-  return checkPart({
+  const checked = checkPart({
     partNumber: row.part_number ?? '',
     kind,
     name: row.name ?? '',
@@ -120,6 +115,11 @@ export function parsePartRow(row: Record<string, string>): PartRowResult {
     attributes,
     marks,
   })
+  if (!checked.ok) {
+    const reported = new Set(errors.map((error) => error.column))
+    errors.push(...checked.errors.filter((error) => !reported.has(error.column)))
+  }
+  return errors.length ? { ok: false, errors } : checked
 }
 
 /** Checks a whole part against the shared schema, naming each problem by its column. */

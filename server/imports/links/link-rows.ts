@@ -1,6 +1,6 @@
 import { LINK_SOURCES, RELATIONS, type LinkSource, type Relation } from '../../../shared/schemas/fitment'
 import { restoreCell } from '../../../shared/csv-cells'
-import { splitList } from '../csv/part-row'
+import { MARK_COLUMNS, PART_COLUMNS, splitList } from '../csv/part-row'
 import { readHeader, rowShapeProblems, type Header } from '../import-header'
 import { RowIssues } from '../import-issues'
 
@@ -62,6 +62,8 @@ export class LinkRows {
       required: ['from_part', 'to_part', 'relation'],
       known: LINK_COLUMNS,
       extraColumns: 'refused',
+      file: 'links file',
+      otherFile: { file: 'parts file', columns: [...PART_COLUMNS, ...Object.keys(MARK_COLUMNS)] },
     })
     this.header = header
     this.at = {

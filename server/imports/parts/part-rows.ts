@@ -4,6 +4,7 @@ import { restoreCell } from '../../../shared/csv-cells'
 import { MARK_COLUMNS, PART_COLUMNS, REQUIRED_PART_COLUMNS, parsePartRow, partCells } from '../csv/part-row'
 import { readHeader, rowShapeProblems, type Header } from '../import-header'
 import { RowIssues } from '../import-issues'
+import { LINK_COLUMNS } from '../links/link-rows'
 
 export type PartEntry = { rows: number[]; part: PartInput; fingerprint: string }
 
@@ -50,6 +51,8 @@ export class PartRows {
       required: REQUIRED_PART_COLUMNS,
       known: [...PART_COLUMNS, ...Object.keys(MARK_COLUMNS)],
       extraColumns: 'allowed',
+      file: 'parts file',
+      otherFile: { file: 'links file', columns: LINK_COLUMNS },
     })
   }
 

@@ -7,10 +7,18 @@ import { afterEach, describe, expect, it, vi } from 'vitest'
 import { h } from 'vue'
 import { createMemoryHistory, createRouter } from 'vue-router'
 import BuildSheetsView from '@/views/BuildSheetsView.vue'
+import { formatDuration } from '@/lib/format'
 
 const stored = [
-  { id: 1, name: 'Bench swap for bay 3', slots: { block: 'TM-BL-1800', head: 'TM-HD-2000' }, notes: '' },
-  { id: 2, name: 'Race head', slots: { head: 'TM-HD-1800' }, notes: 'thin gasket' },
+  {
+    id: 1,
+    name: 'Bench swap for bay 3',
+    slots: { block: 'TM-BL-1800', head: 'TM-HD-2000' },
+    notes: '',
+    verdict: 'fits-with-modification',
+    labourMinutes: 150,
+  },
+  { id: 2, name: 'Race head', slots: { head: 'TM-HD-1800' }, notes: 'thin gasket', verdict: null, labourMinutes: null },
 ].map((sheet) => ({
   ...sheet,
   targetPowerKw: null,
@@ -73,5 +81,16 @@ describe('BuildSheetsView', () => {
     const labels = row.findAll('button').map((button) => button.attributes('aria-label'))
     expect(labels).toEqual(['Rename Race head', 'Delete Race head'])
     expect(row.get('button[aria-label="Delete Race head"]').classes()).toContain('delete')
+  })
+
+  it("shows each sheet's verdict and labour as saved, and a dash for a sheet saved before they were kept", async () => {
+    const wrapper = await mountList()
+    const headers = wrapper.findAll('thead th').map((th) => th.text())
+    const column = (row: number, name: string) => wrapper.findAll('tbody tr')[row]!.findAll('td')[headers.indexOf(name)]!.text()
+    expect(column(0, 'Verdict')).toBe('Fits with modification')
+    expect(column(0, 'Labour')).toBe(formatDuration(150))
+    expect(column(0, 'Labour')).toMatch(/2\D+30/)
+    expect(column(1, 'Verdict')).toBe('—')
+    expect(column(1, 'Labour')).toBe('—')
   })
 })

@@ -111,6 +111,9 @@ describe('the planner build is the address', () => {
       chassisModelYear: null,
       vin: null,
       notes: '',
+      checklist: {},
+      verdict: null,
+      labourMinutes: null,
       owner: { id: 1, name: 'A. Tech' },
       createdAt: '2026-01-01T00:00:00.000Z',
       updatedAt: '2026-01-01T00:00:00.000Z',
@@ -118,6 +121,32 @@ describe('the planner build is the address', () => {
     expect(build().isDirty.value).toBe(false)
     await build().setSlot('head', 'ZX-HD-2')
     expect(build().isDirty.value).toBe(true)
+  })
+
+  it('counts a ticked checklist step as an unsaved change until it is unticked again', async () => {
+    const { build, planner } = await mountPlanner('/planner/7?block=ZX-BL-1')
+    planner.openSheet({
+      id: 7,
+      name: 'Bay 3',
+      slots: { block: 'ZX-BL-1' },
+      targetPowerKw: null,
+      fuelOctane: null,
+      chassisModelYear: null,
+      vin: null,
+      notes: '',
+      checklist: { 'stud-sleeve': [1] },
+      verdict: null,
+      labourMinutes: null,
+      owner: { id: 1, name: 'A. Tech' },
+      createdAt: '2026-01-01T00:00:00.000Z',
+      updatedAt: '2026-01-01T00:00:00.000Z',
+    })
+    expect(planner.isTicked('stud-sleeve', 1)).toBe(true)
+    expect(build().isDirty.value).toBe(false)
+    planner.setTick('stud-sleeve', 0, true)
+    expect(build().isDirty.value).toBe(true)
+    planner.setTick('stud-sleeve', 0, false)
+    expect(build().isDirty.value).toBe(false)
   })
 })
 

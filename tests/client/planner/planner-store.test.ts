@@ -16,6 +16,9 @@ function sheet(overrides: Partial<BuildSheet> = {}): BuildSheet {
     chassisModelYear: null,
     vin: null,
     notes: '',
+    checklist: {},
+    verdict: null,
+    labourMinutes: null,
     owner: { id: 1, name: 'A. Tech' },
     createdAt: '2026-01-01T00:00:00.000Z',
     updatedAt: '2026-01-01T00:00:00.000Z',
@@ -50,12 +53,14 @@ describe('planner store', () => {
       fuelOctane: null,
       chassisModelYear: null,
       vin: null,
+      checklist: {},
     })
     expect(planner.sheetInput(state, 'Copy', 'n')).toEqual({
       slots: { block: 'ZY-BL-1', head: 'ZX-HD-2' },
       targetPowerKw: 110,
       name: 'Copy',
       notes: 'n',
+      checklist: {},
     })
   })
 
@@ -96,5 +101,26 @@ describe('planner store', () => {
     planner.markEvaluated({ slots: { head: 'ZX-HD-2' }, context: {} })
     await planner.evaluate({ slots: { head: 'ZX-HD-2' }, context: {} })
     expect(bodies).toHaveLength(1)
+  })
+})
+
+describe('checklist ticks', () => {
+  beforeEach(() => setActivePinia(createPinia()))
+
+  it('sends the ticks with a sheet update and keeps them in step order', () => {
+    const planner = usePlannerStore()
+    planner.openSheet(sheet({ checklist: { 'oil-restrictor-fit': [0] } }))
+    planner.setTick('oil-restrictor-fit', 3, true)
+    planner.setTick('oil-restrictor-fit', 1, true)
+    planner.setTick('oil-restrictor-fit', 0, false)
+    expect(planner.sheetUpdate(sheetState(sheet())).checklist).toEqual({ 'oil-restrictor-fit': [1, 3] })
+  })
+
+  it('forgets the ticks when the sheet is forgotten', () => {
+    const planner = usePlannerStore()
+    planner.openSheet(sheet({ checklist: { 'oil-restrictor-fit': [2] } }))
+    planner.forget()
+    expect(planner.isTicked('oil-restrictor-fit', 2)).toBe(false)
+    expect(planner.ticksChanged).toBe(false)
   })
 })
