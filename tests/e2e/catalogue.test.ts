@@ -33,7 +33,7 @@ describe.skipIf(!run)('catalogue in the browser', () => {
   it('lets a counter sign in, search a part number and see it in the table', async () => {
     await signInAs(page, server.url, 'counter')
     await page.goto(`${server.url}/parts`)
-    await page.getByLabel('Search').fill('tm-hd-2000')
+    await page.getByLabel('Search', { exact: true }).fill('tm-hd-2000')
     await page.waitForURL(/q=tm-hd-2000/)
     const table = page.getByRole('table')
     await expect.poll(() => table.locator('tbody tr').first().textContent()).toContain('TM-HD-2000')
@@ -42,7 +42,7 @@ describe.skipIf(!run)('catalogue in the browser', () => {
   })
 
   it('finds a part by its casting mark and shows only the navigation a counter may use', async () => {
-    await page.getByLabel('Search').fill('H18-2207B')
+    await page.getByLabel('Search', { exact: true }).fill('H18-2207B')
     await expect.poll(() => page.getByRole('table').locator('tbody tr').first().textContent()).toContain('TM-HD-1810')
     const nav = page.getByRole('navigation', { name: 'Main' })
     expect(await nav.getByRole('link', { name: 'Catalogue' }).isVisible()).toBe(true)

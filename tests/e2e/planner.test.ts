@@ -248,7 +248,7 @@ describe.skipIf(!run)('technician: plan a build, get the verdict and the parts l
     const overflow = await page.evaluate(() => document.documentElement.scrollWidth - document.documentElement.clientWidth)
     expect(overflow).toBeLessThanOrEqual(0)
     await saveScreenshot(page, 'build-sheets-768')
-    await page.getByLabel('Search').fill('TK18 head')
+    await page.getByLabel('Search', { exact: true }).fill('TK18 head')
     await expect
       .poll(
         () =>
