@@ -22,6 +22,7 @@ import { fieldReportRoutes } from './field-reports/field-reports.routes'
 import { mailRoutes } from './mail/mail.routes'
 import { stockRoutes } from './stock/stock.routes'
 import { vehicleRoutes } from './vehicles/vehicles.routes'
+import { quoteRoutes } from './quotes/quotes.routes'
 import type { Services } from './services'
 
 export type AppOptions = {
@@ -58,6 +59,7 @@ export async function createApp({ config, dataSource, services, version, clientD
   api.use(mailRoutes(services.outbox))
   api.use(stockRoutes(services.stock))
   api.use(vehicleRoutes(services.vehicles))
+  api.use(quoteRoutes(services))
   api.use(requireSignIn, notFoundApi)
   app.use('/api', api)
 

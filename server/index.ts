@@ -29,7 +29,10 @@ const server = app.listen(config.port, config.host, () => {
 })
 
 // Mail goes out apart from requests; editors' digest of waiting reports is checked on the same beat.
-services.outbox.start(5_000, () => services.fieldReportNotices.digest().then(() => undefined))
+services.outbox.start(5_000, async () => {
+  await services.fieldReportNotices.digest()
+  await services.stock.releaseExpired()
+})
 
 function shutdown() {
   server.close(() => {

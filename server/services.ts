@@ -27,6 +27,8 @@ import { StockRepository } from './stock/stock.repository'
 import { StockService } from './stock/stock.service'
 import { VehicleRepository } from './vehicles/vehicle.repository'
 import { VehicleService } from './vehicles/vehicle.service'
+import { QuoteService } from './quotes/quote.service'
+import { ShopSettingsService } from './settings/shop-settings.service'
 import { OutboxRepository } from './mail/outbox.repository'
 import { OutboxService } from './mail/outbox.service'
 import { FieldReportEvidence } from './field-reports/field-report-evidence'
@@ -49,6 +51,8 @@ export function createServices(dataSource: DataSource, config: AppConfig, rules:
   const fieldReports = new FieldReportService(new FieldReportRepository(databaseOf(dataSource)), parts, photos)
   const fieldReportNotices = new FieldReportNotices(outbox, outboxRows, users, fieldReports, config.publicUrl)
   const completion = new BuildCompletionService(dataSource, parts, graphIndex, evaluation, modifications)
+  const shopSettings = new ShopSettingsService(databaseOf(dataSource))
+  const sheets = new BuildSheetService(dataSource, parts, evaluation)
   return {
     rules,
     users,
@@ -72,7 +76,9 @@ export function createServices(dataSource: DataSource, config: AppConfig, rules:
     evaluation,
     completion,
     fill: new BuildFillService(graphIndex, evaluation, completion),
-    sheets: new BuildSheetService(dataSource, parts, evaluation),
+    sheets,
+    shopSettings,
+    quotes: new QuoteService(databaseOf(dataSource), evaluation, sheets, shopSettings, stockRows, stockIndex),
     links: new LinkService(dataSource, parts, graphIndex),
     imports: new ImportService(dataSource, { maxRows: config.importMaxRows }, graphIndex),
     exports: new ExportService(dataSource),

@@ -20,6 +20,7 @@ import { SiteEntity } from '../stock/site.entity'
 import { StockItemEntity } from '../stock/stock-item.entity'
 import { VehicleApplicationEntity } from '../vehicles/vehicle-application.entity'
 import { VehicleOriginalEntity } from '../vehicles/vehicle-original.entity'
+import { QuoteEntity } from '../quotes/quote.entity'
 
 export const entities = [
   UserEntity,
@@ -44,4 +45,5 @@ export const entities = [
   StockItemEntity,
   VehicleApplicationEntity,
   VehicleOriginalEntity,
+  QuoteEntity,
 ]

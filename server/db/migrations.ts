@@ -1,3 +1,5 @@
+import { Quotes1796215187917 } from '../migrations/1796215187917-Quotes'
+import { Quotes1796215189078 as PostgresQuotes1796215189078 } from '../migrations/postgres/1796215189078-Quotes'
 import { Vehicles1796213931900 } from '../migrations/1796213931900-Vehicles'
 import { Vehicles1796213933784 as PostgresVehicles1796213933784 } from '../migrations/postgres/1796213933784-Vehicles'
 import { Stock1796213287641 } from '../migrations/1796213287641-Stock'
@@ -35,6 +37,7 @@ export const migrations = [
   SecurityEvents1796213775454,
   Vehicles1796213931900,
   BuildSheetChecklist1796214415051,
+  Quotes1796215187917,
 ]
 
 /** PostgreSQL's, generated from the same entities (`npx tsx server/db/generate-migration.ts Name --postgres`). */
@@ -49,4 +52,5 @@ export const postgresMigrations = [
   PostgresSecurityEvents1796213777137,
   PostgresVehicles1796213933784,
   PostgresBuildSheetChecklist1796214105800,
+  PostgresQuotes1796215189078,
 ]

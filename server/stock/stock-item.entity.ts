@@ -60,6 +60,10 @@ export class StockItemEntity {
   @Column({ type: 'text', nullable: true })
   label!: string | null
 
+  /** Until when an accepted quote holds the unit; past it the unit goes back on the shelf. */
+  @Column({ type: Date, nullable: true })
+  reservedUntil!: Date | null
+
   @CreateDateColumn()
   createdAt!: Date
 

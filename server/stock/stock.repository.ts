@@ -20,6 +20,16 @@ export type StockRow = {
   label: string | null
   updatedAt: unknown
 }
+export type UnitRow = {
+  id: number
+  partId: number
+  partNumber: string
+  siteId: number
+  condition: StockCondition
+  priceCents: number
+  coreChargeCents: number
+  location: string
+}
 export type AvailableRow = { partId: number; siteId: number; condition: StockCondition; priceCents: number }
 
 const STOCK_COLUMNS = `SELECT s."id", s."partId", p."partNumber", s."siteId", s."condition", s."grade", s."mileageKm", s."donorVin", s."donorYear",
@@ -116,5 +126,37 @@ export class StockRepository {
     for (const ids of chunks(partIds))
       rows.push(...(await this.db.all<AvailableRow>(`${AVAILABLE} AND "partId" IN (${placeholders(ids.length)})`, ids)))
     return rows
+  }
+
+  /** Available units of these part numbers, for pricing a quote. */
+  async unitsOf(partNumbers: readonly string[]): Promise<UnitRow[]> {
+    const rows: UnitRow[] = []
+    for (const numbers of chunks([...new Set(partNumbers)])) {
+      rows.push(
+        ...(await this.db.all<UnitRow>(
+          `SELECT s."id", s."partId", p."partNumber", s."siteId", s."condition", s."priceCents", s."coreChargeCents", s."location"
+             FROM stock_item s JOIN part p ON p."id" = s."partId" WHERE s."status" = 'available' AND p."partNumber" IN (${placeholders(numbers.length)})`,
+          numbers,
+        )),
+      )
+    }
+    return rows
+  }
+
+  /** Reservations past their time go back on the shelf; answers the parts they were of. */
+  releaseExpired(now: Date): Promise<number[]> {
+    return this.db.transaction(async (tx) => {
+      const rows = await tx.all<{ partId: number }>(
+        `SELECT DISTINCT "partId" FROM stock_item WHERE "status" = 'reserved' AND "reservedUntil" < ?`,
+        [now],
+      )
+      if (rows.length) {
+        await tx.run(
+          `UPDATE stock_item SET "status" = 'available', "reservedUntil" = NULL, "updatedAt" = ? WHERE "status" = 'reserved' AND "reservedUntil" < ?`,
+          [now, now],
+        )
+      }
+      return rows.map((row) => row.partId)
+    })
   }
 }

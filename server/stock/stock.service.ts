@@ -89,6 +89,13 @@ export class StockService {
     return this.get(id)
   }
 
+  /** Puts units whose reservation ran out back on the shelf (run on the server's beat). */
+  async releaseExpired(now = new Date()): Promise<number> {
+    const partIds = await this.repository.releaseExpired(now)
+    if (partIds.length) await this.index.refresh(partIds)
+    return partIds.length
+  }
+
   private async requireSite(name: string, path: string): Promise<SiteRow> {
     const site = await this.repository.siteByName(name)
     if (!site) throw AppError.badRequest(`No site named "${name}".`, [{ path, message: `No site named "${name}"; add it first.` }])

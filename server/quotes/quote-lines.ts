@@ -1,0 +1,104 @@
+import { BUILD_SLOTS } from '../../shared/build-template'
+import type { Evaluation } from '../../shared/schemas/build'
+import type { QuoteLine, ShopSettings } from '../../shared/schemas/quotes'
+import { STOCK_CONDITIONS } from '../../shared/schemas/stock'
+import type { UnitRow } from '../stock/stock.repository'
+
+const GROUP_OF = new Map<string, string>(BUILD_SLOTS.map((slot) => [slot.id, slot.group]))
+const RANK = new Map<string, number>(STOCK_CONDITIONS.map((condition, index) => [condition, index]))
+
+/** Best condition first, then the cheaper unit: what a counter would pull off the shelf. */
+export function unitOrder(a: UnitRow, b: UnitRow): number {
+  return (RANK.get(a.condition) ?? 9) - (RANK.get(b.condition) ?? 9) || a.priceCents - b.priceCents || a.id - b.id
+}
+
+/**
+ * The lines of a quote: each part from the parts list with the unit to take
+ * (site, shelf, condition, price) or "to order", a core charge where the unit
+ * carries one, the consumables, and labour for the job at the shop's rate.
+ */
+export function quoteLines(
+  evaluation: Evaluation,
+  slots: Record<string, unknown>,
+  shop: ShopSettings,
+  unitsOf: (partNumber: string) => UnitRow[],
+  siteName: (siteId: number) => string,
+): QuoteLine[] {
+  const lines: QuoteLine[] = []
+  const taken = new Set<number>()
+  for (const item of evaluation.partsList) {
+    if (!item.partNumber) {
+      lines.push({ kind: 'consumable', description: item.description, quantity: item.quantity, unitPriceCents: 0, toOrder: true })
+      continue
+    }
+    const units = unitsOf(item.partNumber)
+      .filter((unit) => !taken.has(unit.id))
+      .sort(unitOrder)
+    const wholeUnits = Number.isInteger(item.quantity) ? item.quantity : 0
+    let left = item.quantity
+    for (const unit of units.slice(0, wholeUnits)) {
+      taken.add(unit.id)
+      left -= 1
+      lines.push({
+        kind: 'part',
+        partNumber: item.partNumber,
+        description: item.description,
+        quantity: 1,
+        unitPriceCents: unit.priceCents,
+        toOrder: false,
+        stockItemId: unit.id,
+        condition: unit.condition,
+        site: siteName(unit.siteId),
+        location: unit.location,
+      })
+      if (unit.coreChargeCents > 0) {
+        lines.push({
+          kind: 'core',
+          partNumber: item.partNumber,
+          description: `Core charge, ${item.partNumber} (refunded when the old part comes back)`,
+          quantity: 1,
+          unitPriceCents: unit.coreChargeCents,
+          toOrder: false,
+        })
+      }
+    }
+    if (left > 0) {
+      lines.push({
+        kind: item.category === 'consumable' ? 'consumable' : 'part',
+        partNumber: item.partNumber,
+        description: `${item.description} (to order)`,
+        quantity: left,
+        unitPriceCents: 0,
+        toOrder: true,
+      })
+    }
+  }
+  const groups = new Set(
+    Object.keys(slots)
+      .map((slot) => GROUP_OF.get(slot))
+      .filter(Boolean),
+  )
+  const baseMinutes = groups.size * shop.baseMinutesPerGroup
+  if (baseMinutes > 0) {
+    lines.push({
+      kind: 'labour',
+      description: `Base job time, ${groups.size} assembly group${groups.size === 1 ? '' : 's'}`,
+      quantity: baseMinutes / 60,
+      minutes: baseMinutes,
+      unitPriceCents: shop.labourRateCents,
+      toOrder: false,
+    })
+  }
+  for (const modification of evaluation.modifications) {
+    if (!modification.timeMinutes) continue
+    lines.push({
+      kind: 'labour',
+      description: modification.title,
+      quantity: modification.timeMinutes / 60,
+      minutes: modification.timeMinutes,
+      unitPriceCents: shop.labourRateCents,
+      toOrder: false,
+    })
+  }
+  return lines
+}
