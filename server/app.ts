@@ -17,6 +17,9 @@ import { linkRoutes } from './fitment/links.routes'
 import { importRoutes } from './imports/imports.routes'
 import type { Services } from './services'
 
+/** The largest JSON body any route takes. */
+export const JSON_BODY_LIMIT = '64kb'
+
 export type AppOptions = {
   config: AppConfig
   dataSource: DataSource
@@ -32,7 +35,8 @@ export async function createApp({ config, dataSource, services, version, clientD
   const app = express()
   app.disable('x-powered-by')
   app.set('trust proxy', 'loopback')
-  app.use(express.json({ limit: '1mb' }))
+  // No JSON route takes more than a build sheet with its notes; uploads are multipart and have their own limit.
+  app.use(express.json({ limit: JSON_BODY_LIMIT }))
   app.use('/api', await createSessionMiddleware(dataSource, { secret: config.sessionSecret }))
   app.use('/api', auth.initialize(), auth.session())
 
