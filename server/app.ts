@@ -6,6 +6,7 @@ import { createPassport } from './auth/passport'
 import { requireSignIn } from './auth/require-role'
 import { createSessionMiddleware } from './auth/session'
 import type { AppConfig } from './config/env'
+import { securityHeaders } from './middleware/security-headers'
 import { errorHandler, notFoundApi } from './errors/error-handler'
 import { authRoutes } from './auth/auth.routes'
 import { healthRoutes } from './health/health.routes'
@@ -34,10 +35,11 @@ export async function createApp({ config, dataSource, services, version, clientD
   const auth = createPassport(services.users)
   const app = express()
   app.disable('x-powered-by')
-  app.set('trust proxy', 'loopback')
+  app.set('trust proxy', config.trustProxy)
+  app.use(securityHeaders())
   // No JSON route takes more than a build sheet with its notes; uploads are multipart and have their own limit.
   app.use(express.json({ limit: JSON_BODY_LIMIT }))
-  app.use('/api', await createSessionMiddleware(dataSource, { secret: config.sessionSecret }))
+  app.use('/api', await createSessionMiddleware(dataSource, { secret: config.sessionSecret, secure: config.cookieSecure }))
   app.use('/api', auth.initialize(), auth.session())
 
   const api = express.Router()

@@ -18,7 +18,7 @@ async function sessionSecret(dataSource: DataSource, configured?: string): Promi
   return value
 }
 
-export async function createSessionMiddleware(dataSource: DataSource, options: { secret?: string }) {
+export async function createSessionMiddleware(dataSource: DataSource, options: { secret?: string; secure?: boolean | 'auto' }) {
   const store = new TypeormStore({ cleanupLimit: 2, ttl: EIGHT_HOURS_S }).connect(dataSource.getRepository(SessionEntity))
   return session({
     name: 'fitwright.sid',
@@ -27,6 +27,6 @@ export async function createSessionMiddleware(dataSource: DataSource, options: {
     resave: false,
     saveUninitialized: false,
     rolling: true,
-    cookie: { httpOnly: true, sameSite: 'lax', secure: 'auto', maxAge: EIGHT_HOURS_S * 1000 },
+    cookie: { httpOnly: true, sameSite: 'lax', secure: options.secure ?? 'auto', maxAge: EIGHT_HOURS_S * 1000 },
   })
 }
