@@ -21,6 +21,9 @@ import type { Services } from './services'
 /** The largest JSON body any route takes. */
 export const JSON_BODY_LIMIT = '64kb'
 
+/** Addresses that name a file of the built client rather than a page. */
+const STATIC_FILE = /\.(js|mjs|css|map|ico|png|jpe?g|gif|svg|webp|woff2?|ttf|json|txt|xml|html?)$/i
+
 export type AppOptions = {
   config: AppConfig
   dataSource: DataSource
@@ -56,7 +59,12 @@ export async function createApp({ config, dataSource, services, version, clientD
 
   if (clientDir && existsSync(path.join(clientDir, 'index.html'))) {
     app.use(express.static(clientDir, { index: false, maxAge: '1h' }))
-    app.get(/^\/(?!api\/).*/, (_req, res) => res.sendFile(path.join(clientDir, 'index.html')))
+    app.get(/^\/(?!api\/).*/, (req, res, next) => {
+      // A missing file is a 404; only page addresses get the app (part numbers may hold dots, so by file type).
+      if (STATIC_FILE.test(req.path)) return next()
+      res.sendFile(path.join(clientDir, 'index.html'))
+    })
+    app.use((_req, res) => res.status(404).type('text/plain').send('Not found'))
   }
   app.use(errorHandler)
   return app

@@ -1,3 +1,4 @@
+import path from 'node:path'
 import { z } from 'zod'
 
 const flag = z
@@ -43,6 +44,8 @@ export type AppConfig = {
   sessionSecret?: string
   importMaxBytes: number
   importMaxRows: number
+  /** This server's own folder for uploads in progress, beside the database file; emptied at start-up. */
+  uploadDir: string
   /** Failed sign-ins allowed per address and e-mail in 15 minutes. */
   loginAttempts: number
   /** Session cookie marked Secure: always, never (plain HTTP), or when the request came over HTTPS. */
@@ -71,6 +74,7 @@ export function loadConfig(env: NodeJS.ProcessEnv = process.env): AppConfig {
     sessionSecret: value.FITWRIGHT_SESSION_SECRET,
     importMaxBytes: value.FITWRIGHT_IMPORT_MAX_BYTES,
     importMaxRows: value.FITWRIGHT_IMPORT_MAX_ROWS,
+    uploadDir: path.join(path.dirname(value.FITWRIGHT_DB_PATH), 'uploads-in-progress'),
     loginAttempts: value.FITWRIGHT_LOGIN_ATTEMPTS,
     cookieSecure: cookieSecure(value.FITWRIGHT_COOKIE_SECURE, value.NODE_ENV),
     trustProxy: trustProxy(value.FITWRIGHT_TRUST_PROXY),
