@@ -49,7 +49,15 @@ export async function startServer(env: Record<string, string> = {}): Promise<Run
   const dir = mkdtempSync(path.join(tmpdir(), 'fitwright-e2e-'))
   const child: ChildProcess = spawn(path.join(ROOT, 'node_modules', '.bin', 'tsx'), ['server/index.ts'], {
     cwd: ROOT,
-    env: { ...process.env, NODE_ENV: 'production', PORT: '0', HOST: '127.0.0.1', FITWRIGHT_DB_PATH: path.join(dir, 'e2e.sqlite'), ...env },
+    env: {
+      ...process.env,
+      NODE_ENV: 'production',
+      PORT: '0',
+      HOST: '127.0.0.1',
+      FITWRIGHT_DB_PATH: path.join(dir, 'e2e.sqlite'),
+      FITWRIGHT_COOKIE_SECURE: 'auto',
+      ...env,
+    },
     stdio: ['ignore', 'pipe', 'pipe'],
   })
   let output = ''
