@@ -7,6 +7,7 @@ import { requireSignIn } from './auth/require-role'
 import { createSessionMiddleware } from './auth/session'
 import { createSignInThrottle } from './auth/sign-in-throttle'
 import type { AppConfig } from './config/env'
+import { securityHeaders } from './middleware/security-headers'
 import { errorHandler, notFoundApi } from './errors/error-handler'
 import { authRoutes } from './auth/auth.routes'
 import { healthRoutes } from './health/health.routes'
@@ -25,6 +26,12 @@ import { vehicleRoutes } from './vehicles/vehicles.routes'
 import { quoteRoutes } from './quotes/quotes.routes'
 import type { Services } from './services'
 
+/** The largest JSON body any route takes. */
+export const JSON_BODY_LIMIT = '64kb'
+
+/** Addresses that name a file of the built client rather than a page. */
+const STATIC_FILE = /\.(js|mjs|css|map|ico|png|jpe?g|gif|svg|webp|woff2?|ttf|json|txt|xml|html?)$/i
+
 export type AppOptions = {
   config: AppConfig
   dataSource: DataSource
@@ -39,9 +46,18 @@ export async function createApp({ config, dataSource, services, version, clientD
   const auth = createPassport(services.users)
   const app = express()
   app.disable('x-powered-by')
-  app.set('trust proxy', 'loopback')
-  app.use(express.json({ limit: '1mb' }))
-  app.use('/api', await createSessionMiddleware(dataSource, { secret: config.sessionSecret, maxAgeMs: config.sessionMaxAgeMs }))
+  app.set('trust proxy', config.trustProxy)
+  app.use(securityHeaders())
+  // No JSON route takes more than a build sheet with its notes; uploads are multipart and have their own limit.
+  app.use(express.json({ limit: JSON_BODY_LIMIT }))
+  app.use(
+    '/api',
+    await createSessionMiddleware(dataSource, {
+      secret: config.sessionSecret,
+      secure: config.cookieSecure,
+      maxAgeMs: config.sessionMaxAgeMs,
+    }),
+  )
   app.use('/api', auth.initialize(), auth.session())
 
   const api = express.Router()
@@ -55,7 +71,12 @@ export async function createApp({ config, dataSource, services, version, clientD
   api.use(userRoutes(services.users))
   api.use(securityEventRoutes(services.securityEvents))
   api.use(importRoutes(services, config))
-  api.use(fieldReportRoutes(services, { photoMaxBytes: config.photoMaxBytes }))
+  api.use(
+    fieldReportRoutes(services, {
+      photoMaxBytes: config.photoMaxBytes,
+      uploadTempDir: path.join(path.dirname(config.uploadTempDir), 'photos-in-progress'),
+    }),
+  )
   api.use(mailRoutes(services.outbox))
   api.use(stockRoutes(services.stock))
   api.use(vehicleRoutes(services.vehicles))
@@ -65,7 +86,12 @@ export async function createApp({ config, dataSource, services, version, clientD
 
   if (clientDir && existsSync(path.join(clientDir, 'index.html'))) {
     app.use(express.static(clientDir, { index: false, maxAge: '1h' }))
-    app.get(/^\/(?!api\/).*/, (_req, res) => res.sendFile(path.join(clientDir, 'index.html')))
+    app.get(/^\/(?!api\/).*/, (req, res, next) => {
+      // A missing file is a 404; only page addresses get the app (part numbers may hold dots, so by file type).
+      if (STATIC_FILE.test(req.path)) return next()
+      res.sendFile(path.join(clientDir, 'index.html'))
+    })
+    app.use((_req, res) => res.status(404).type('text/plain').send('Not found'))
   }
   app.use(errorHandler)
   return app

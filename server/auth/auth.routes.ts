@@ -41,11 +41,9 @@ export function authRoutes(auth: passport.PassportStatic, options: { throttle: S
     res.json(user)
   })
 
-  router.post('/auth/logout', async (req: Request, res: Response) => {
-    if (req.user) {
-      await promisify((done) => req.logout(done))
-      await promisify((done) => req.session.destroy(done))
-    }
+  router.post('/auth/logout', requireSignIn, async (req: Request, res: Response) => {
+    await promisify((done) => req.logout(done))
+    await promisify((done) => req.session.destroy(done))
     res.clearCookie('fitwright.sid')
     res.status(204).end()
   })

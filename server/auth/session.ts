@@ -20,7 +20,10 @@ async function sessionSecret(dataSource: DataSource, configured?: string): Promi
 }
 
 /** Sessions end after eight idle hours, or `maxAgeMs` after sign-in, whichever comes first. */
-export async function createSessionMiddleware(dataSource: DataSource, options: { secret?: string; maxAgeMs: number; now?: () => number }) {
+export async function createSessionMiddleware(
+  dataSource: DataSource,
+  options: { secret?: string; maxAgeMs: number; now?: () => number; secure?: boolean | 'auto' },
+) {
   const store = new DatabaseSessionStore(new SessionRepository(databaseOf(dataSource)), {
     idleMs: EIGHT_HOURS_MS,
     maxAgeMs: options.maxAgeMs,
@@ -33,6 +36,6 @@ export async function createSessionMiddleware(dataSource: DataSource, options: {
     resave: false,
     saveUninitialized: false,
     rolling: true,
-    cookie: { httpOnly: true, sameSite: 'lax', secure: 'auto', maxAge: EIGHT_HOURS_MS },
+    cookie: { httpOnly: true, sameSite: 'lax', secure: options.secure ?? 'auto', maxAge: EIGHT_HOURS_MS },
   })
 }

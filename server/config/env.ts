@@ -1,3 +1,4 @@
+import path from 'node:path'
 import { z } from 'zod'
 
 const flag = z
@@ -25,6 +26,12 @@ const envSchema = z.object({
     .int()
     .positive()
     .default(50 * 1024 * 1024),
+  FITWRIGHT_COOKIE_SECURE: z.enum(['0', '1', 'true', 'false', 'on', 'off', 'auto'], { error: () => 'Use 1, 0 or auto.' }).optional(),
+  FITWRIGHT_TRUST_PROXY: z
+    .string()
+    .trim()
+    .regex(/^[\w.:/, -]+$/, 'Use loopback, a number of proxies, addresses or subnets separated by commas, or false.')
+    .default('loopback'),
   FITWRIGHT_IMPORT_MAX_ROWS: z.coerce.number().int().positive().default(500_000),
   FITWRIGHT_SMTP_URL: z
     .string()
@@ -65,6 +72,12 @@ export type AppConfig = {
   photoMaxBytes: number
   /** Failed sign-ins allowed in 15 minutes per address and e-mail, and per address across e-mails. */
   loginLimits: { perAccount: number; perAddress: number }
+  /** This server's own folder for uploads in progress, beside the database file; emptied at start-up. */
+  uploadTempDir: string
+  /** Session cookie marked Secure: always, never (plain HTTP), or when the request came over HTTPS. */
+  cookieSecure: boolean | 'auto'
+  /** Express's `trust proxy`: which proxies may tell the client's address and protocol. */
+  trustProxy: boolean | number | string
   /** First administrator, created when the database has no users (for use without the demo). */
   firstAdmin?: { email: string; password: string }
 }
@@ -95,9 +108,25 @@ export function loadConfig(env: NodeJS.ProcessEnv = process.env): AppConfig {
     uploadDir: value.FITWRIGHT_UPLOAD_DIR,
     photoMaxBytes: value.FITWRIGHT_PHOTO_MAX_BYTES,
     loginLimits: { perAccount: value.FITWRIGHT_LOGIN_ATTEMPTS, perAddress: value.FITWRIGHT_LOGIN_ATTEMPTS_PER_ADDRESS },
+    uploadTempDir: path.join(path.dirname(value.FITWRIGHT_DB_PATH), 'uploads-in-progress'),
+    cookieSecure: cookieSecure(value.FITWRIGHT_COOKIE_SECURE, value.NODE_ENV),
+    trustProxy: trustProxy(value.FITWRIGHT_TRUST_PROXY),
     firstAdmin:
       value.FITWRIGHT_ADMIN_EMAIL && value.FITWRIGHT_ADMIN_PASSWORD
         ? { email: value.FITWRIGHT_ADMIN_EMAIL, password: value.FITWRIGHT_ADMIN_PASSWORD }
         : undefined,
   }
+}
+
+/** Secure by default in production; plain HTTP there has to be asked for. */
+function cookieSecure(value: string | undefined, env: AppConfig['env']): boolean | 'auto' {
+  if (value === undefined) return env === 'production' ? true : 'auto'
+  if (value === 'auto') return 'auto'
+  return ['1', 'true', 'on'].includes(value)
+}
+
+function trustProxy(value: string): boolean | number | string {
+  if (value === 'true' || value === 'false') return value === 'true'
+  if (/^\d+$/.test(value)) return Number(value)
+  return value
 }

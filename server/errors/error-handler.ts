@@ -3,8 +3,26 @@ import { ZodError } from 'zod'
 import type { ErrorResponse } from '../../shared/schemas/errors'
 import { AppError } from './app-error'
 
+/** Every error answer stays small, however much the request gave to complain about. */
+export const MAX_ERROR_DETAILS = 20
+export const MAX_ERROR_TEXT = 500
+
+const clip = (text: string) => (text.length > MAX_ERROR_TEXT ? `${text.slice(0, MAX_ERROR_TEXT - 1)}…` : text)
+
+/** The body with at most MAX_ERROR_DETAILS details and every text clipped. */
+export function smallError(body: ErrorResponse): ErrorResponse {
+  const { code, message, details } = body.error
+  const error: ErrorResponse['error'] = { code, message: clip(message) }
+  if (details) {
+    error.details = details
+      .slice(0, MAX_ERROR_DETAILS)
+      .map((detail) => ({ ...detail, path: clip(detail.path), message: clip(detail.message) }))
+  }
+  return { error }
+}
+
 function send(res: Response, status: number, body: ErrorResponse) {
-  res.status(status).json(body)
+  res.status(status).json(smallError(body))
 }
 
 /** Field messages of a zod error, with the path written the way a form names a field. */

@@ -35,7 +35,7 @@ function reportField(req: Request) {
 
 export function fieldReportRoutes(
   services: { fieldReports: FieldReportService; fieldReportReview: FieldReportReviewService },
-  limits: { photoMaxBytes: number },
+  limits: { photoMaxBytes: number; uploadTempDir: string },
 ): Router {
   const router = Router()
   const reports = services.fieldReports
@@ -43,7 +43,7 @@ export function fieldReportRoutes(
   const filers = requireRole(...rolesFor('field-reports.file'))
   const reviewers = requireRole(...rolesFor('field-reports.review'))
 
-  router.post('/field-reports', filers, photoUpload(limits.photoMaxBytes), async (req, res) => {
+  router.post('/field-reports', filers, photoUpload(limits.photoMaxBytes, limits.uploadTempDir), async (req, res) => {
     const input = reportField(req)
     const files = (req.files as Express.Multer.File[] | undefined) ?? []
     const uploads = files.map((file) => ({ path: file.path, originalName: file.originalname }))

@@ -1,7 +1,5 @@
-import { mkdirSync } from 'node:fs'
+import { mkdirSync, rmSync } from 'node:fs'
 import { rm } from 'node:fs/promises'
-import { tmpdir } from 'node:os'
-import path from 'node:path'
 import type { NextFunction, Request, RequestHandler, Response } from 'express'
 import multer from 'multer'
 import { FIELD_REPORT_MAX_PHOTOS } from '../../shared/schemas/field-reports'
@@ -24,8 +22,9 @@ function uploadError(error: unknown, maxBytes: number): unknown {
  * A report as multipart: the `report` JSON field and up to eight `photos`,
  * each streamed to a temporary file; the files go when the answer has been sent.
  */
-export function photoUpload(maxBytes: number): RequestHandler {
-  const dir = path.join(tmpdir(), 'fitwright-uploads')
+export function photoUpload(maxBytes: number, dir: string): RequestHandler {
+  // The folder is this server's own: what a crash left in it is cleared at start-up.
+  rmSync(dir, { recursive: true, force: true })
   mkdirSync(dir, { recursive: true })
   const fields = multer({
     dest: dir,

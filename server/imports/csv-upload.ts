@@ -1,6 +1,5 @@
-import { mkdirSync } from 'node:fs'
-import { tmpdir } from 'node:os'
-import path from 'node:path'
+import { mkdirSync, rmSync } from 'node:fs'
+import { rm } from 'node:fs/promises'
 import type { NextFunction, Request, RequestHandler, Response } from 'express'
 import multer from 'multer'
 import { AppError } from '../errors/app-error'
@@ -23,10 +22,11 @@ function uploadError(error: unknown, maxBytes: number): unknown {
 /**
  * One CSV file in the form field `file`, written to a temporary file (so a
  * large upload is streamed, not held in memory) and refused past the size
- * limit. The route removes the file when it is done with it.
+ * limit. The file is removed when the request ends.
  */
-export function csvUpload(maxBytes: number): RequestHandler {
-  const dir = path.join(tmpdir(), 'fitwright-uploads')
+export function csvUpload(maxBytes: number, dir: string): RequestHandler {
+  // The folder is this server's own: what a crash left in it is cleared at start-up.
+  rmSync(dir, { recursive: true, force: true })
   mkdirSync(dir, { recursive: true })
   const single = multer({
     dest: dir,
@@ -34,6 +34,10 @@ export function csvUpload(maxBytes: number): RequestHandler {
     limits: { fileSize: maxBytes, files: 1, fields: 10, fieldSize: 1024 },
   }).single('file')
   return (req: Request, res: Response, next: NextFunction) => {
+    // However the request ends (answered, aborted, failed), its file goes.
+    res.on('close', () => {
+      if (req.file) void rm(req.file.path, { force: true })
+    })
     single(req, res, (error?: unknown) => next(error ? uploadError(error, maxBytes) : undefined))
   }
 }

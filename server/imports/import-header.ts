@@ -21,6 +21,9 @@ export type Header = {
   index: (column: string) => number
 }
 
+/** Names that would reach into an object's prototype when used as an attribute key. */
+const RESERVED_COLUMNS: ReadonlySet<string> = new Set(['__proto__', 'constructor', 'prototype'])
+
 /**
  * Reads and checks the header row. A problem here is a problem with the whole
  * file, so it stops the import with a 400 that names row and column.
@@ -31,6 +34,9 @@ export function readHeader(cells: string[], row: number, spec: HeaderSpec): Head
   const seen = new Set<string>()
   for (const column of columns) {
     if (!column) continue
+    if (RESERVED_COLUMNS.has(column)) {
+      problems.push({ column, message: `Column "${column}" cannot be used as a column name; rename it.` })
+    }
     if (seen.has(column)) problems.push({ column, message: `Column "${column}" appears twice.` })
     seen.add(column)
   }

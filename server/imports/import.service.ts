@@ -70,7 +70,13 @@ function job(type: ImportType): Work {
 function fileError(error: unknown): unknown {
   if (!(error instanceof CsvFileError)) return error
   const status = error.problem === 'too_many_rows' ? 413 : 400
-  const code = { empty: 'empty_file', binary: 'not_text', malformed: 'malformed_csv', too_many_rows: 'too_many_rows' }[error.problem]
+  const code = {
+    empty: 'empty_file',
+    binary: 'not_text',
+    malformed: 'malformed_csv',
+    too_many_rows: 'too_many_rows',
+    header_too_long: 'header_too_long',
+  }[error.problem]
   return new AppError(status, code, error.message)
 }
 

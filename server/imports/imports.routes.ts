@@ -34,7 +34,7 @@ export function importRoutes(services: { imports: ImportService; exports: Export
     res.json(await services.imports.list())
   })
 
-  router.post('/imports', editors, csvUpload(config.importMaxBytes), async (req, res) => {
+  router.post('/imports', editors, csvUpload(config.importMaxBytes, config.uploadTempDir), async (req, res) => {
     const file = req.file
     try {
       const fields = parseBody(importFieldsSchema, req)

@@ -1,10 +1,10 @@
 import { z } from 'zod'
 import { partSchema } from './part'
+import { slotRecord } from './slot-record'
 import { explanationStepSchema, extraPartSchema, modificationSchema, relationSchema, verdictSchema } from './fitment'
 
 /** Slot -> part number. A list is accepted only to answer "two parts in one slot" clearly. */
-export const slotsInputSchema = z.record(
-  z.string(),
+export const slotsInputSchema = slotRecord(
   z.union([z.string().trim().min(1, 'Give a part number.').max(100), z.array(z.string().trim().max(100))]),
 )
 
@@ -162,7 +162,7 @@ export type ChecklistTicks = z.infer<typeof checklistTicksSchema>
 
 export const buildSheetInputSchema = buildContextSchema.extend({
   name: z.string().trim().min(1, 'Give the build a name.').max(120),
-  slots: z.record(z.string(), z.string().trim().min(1).max(100)),
+  slots: slotRecord(z.string().trim().min(1).max(100)),
   notes: z.string().max(4000).default(''),
   checklist: checklistTicksSchema.default({}),
 })
@@ -172,7 +172,7 @@ export type BuildSheetInput = z.infer<typeof buildSheetInputSchema>
 export const buildSheetUpdateSchema = z
   .object({
     name: z.string().trim().min(1, 'Give the build a name.').max(120),
-    slots: z.record(z.string(), z.string().trim().min(1).max(100)),
+    slots: slotRecord(z.string().trim().min(1).max(100)),
     targetPowerKw: buildContextSchema.shape.targetPowerKw.unwrap().nullable(),
     fuelOctane: buildContextSchema.shape.fuelOctane.unwrap().nullable(),
     chassisModelYear: buildContextSchema.shape.chassisModelYear.unwrap().nullable(),

@@ -44,8 +44,12 @@ export const useSessionStore = defineStore('session', () => {
   }
 
   async function signOut() {
-    await authApi.logout()
-    user.value = null
+    try {
+      await authApi.logout()
+    } finally {
+      // A session that had already ended (401) is signed out all the same.
+      user.value = null
+    }
   }
 
   /** Forget the user locally when the server says the session ended. */

@@ -57,6 +57,7 @@ export async function startServer(env: Record<string, string> = {}): Promise<Run
       FITWRIGHT_DB_PATH: path.join(dir, 'e2e.sqlite'),
       FITWRIGHT_UPLOAD_DIR: path.join(dir, 'uploads'),
       FITWRIGHT_MAIL_DIR: path.join(dir, 'mail'),
+      FITWRIGHT_COOKIE_SECURE: 'auto',
       ...env,
     },
     stdio: ['ignore', 'pipe', 'pipe'],

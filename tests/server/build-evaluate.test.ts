@@ -187,8 +187,15 @@ describe('POST /api/builds/evaluate with bad input', () => {
     expectBadRequest(await agent.post('/api/builds/evaluate').send(body), path, message)
   })
 
-  it('names every bad slot at once', async () => {
-    const response = await agent.post('/api/builds/evaluate').send({ slots: { head: 'NOPE', cylinder: 'X' } })
-    expect(response.body.error.details.map((d: { path: string }) => d.path).sort()).toEqual(['slots.cylinder', 'slots.head'])
+  it('names every bad part at once', async () => {
+    const response = await agent.post('/api/builds/evaluate').send({ slots: { head: 'NOPE', block: 'NOPE-2' } })
+    expect(response.body.error.details.map((d: { path: string }) => d.path).sort()).toEqual(['slots.block', 'slots.head'])
+  })
+
+  it('refuses unknown slots in one detail before looking up any part', async () => {
+    const response = await agent.post('/api/builds/evaluate').send({ slots: { head: 'NOPE', cylinder: 'X', spoiler: 'Y' } })
+    expect(response.body.error.details).toEqual([
+      { path: 'slots.cylinder', message: expect.stringMatching(/^Unknown slot "cylinder", "spoiler"\. Slots are: /) },
+    ])
   })
 })

@@ -2,7 +2,10 @@ import { createHash } from 'node:crypto'
 import { Readable } from 'node:stream'
 import Papa from 'papaparse'
 
-export type CsvFileProblem = 'empty' | 'binary' | 'too_many_rows' | 'malformed'
+export type CsvFileProblem = 'empty' | 'binary' | 'too_many_rows' | 'malformed' | 'header_too_long'
+
+/** Longest header line accepted: hundreds of columns fit; a file with no line break does not. */
+export const MAX_HEADER_CHARS = 64 * 1024
 
 /** A problem with the file as a whole: no row of it can be judged. */
 export class CsvFileError extends Error {
@@ -85,6 +88,37 @@ async function* utf8Text(input: Readable, hash: ReturnType<typeof createHash>, o
   }
 }
 
+/**
+ * Enough text to hold the first non-blank line whole. One pass over each new
+ * chunk (a pattern re-run over the growing text took seconds on a long line),
+ * and a header line past MAX_HEADER_CHARS stops the read.
+ */
+async function readHead(text: AsyncGenerator<string>): Promise<string> {
+  let head = ''
+  let lineStart = -1
+  for (;;) {
+    const next = await text.next()
+    if (next.done) return head
+    const from = head.length
+    head += next.value
+    for (let i = from; i < head.length; i += 1) {
+      const char = head.charCodeAt(i)
+      const isBreak = char === 10 || char === 13
+      if (lineStart < 0) {
+        if (!isBreak && char !== 32 && char !== 9 && char !== 0xfeff) lineStart = i
+      } else if (isBreak) {
+        return head
+      }
+    }
+    if (lineStart >= 0 && head.length - lineStart > MAX_HEADER_CHARS) {
+      throw new CsvFileError(
+        'header_too_long',
+        `The first line is longer than ${MAX_HEADER_CHARS / 1024} KB with no line break; the first line must be the header row of column names.`,
+      )
+    }
+  }
+}
+
 const isBlank = (cells: string[]) => cells.every((cell) => cell.trim() === '')
 
 /**
@@ -101,12 +135,7 @@ export async function readCsvStream(input: Readable, options: CsvReadOptions): P
   })
   let head = ''
   try {
-    // Enough text to hold the first non-blank line whole.
-    while (!/\S[^\r\n]*[\r\n]/.test(head)) {
-      const next = await text.next()
-      if (next.done) break
-      head += next.value
-    }
+    head = await readHead(text)
   } catch (error) {
     input.destroy()
     throw error

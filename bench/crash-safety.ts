@@ -1,0 +1,100 @@
+/**
+ * Crash safety of imports: starts the server as a child, commits a large parts
+ * import, kills the child with SIGKILL part-way, and checks that the database
+ * passes PRAGMA integrity_check and holds the parts wholly from before or
+ * wholly from after the import. Run: `npx tsx bench/crash-safety.ts [--rounds 5]`.
+ * A check script, not a test: it takes a minute and needs the machine to itself.
+ */
+import { spawn, type ChildProcess } from 'node:child_process'
+import { mkdtempSync, readdirSync, rmSync } from 'node:fs'
+import { tmpdir } from 'node:os'
+import path from 'node:path'
+import Database from 'better-sqlite3'
+import { DEMO_PASSWORD } from '../server/demo/seed'
+
+const ROWS = 60_000
+const args = process.argv.slice(2)
+const rounds = Number(args[args.indexOf('--rounds') + 1] ?? 0) || 5
+
+function partsCsv(round: number): string {
+  const lines = ['part_number,kind,name']
+  for (let i = 0; i < ROWS; i += 1) lines.push(`TM-CR${round}-${i},other,Crash test spacer ${i}`)
+  return `${lines.join('\n')}\n`
+}
+
+function startServer(dbPath: string): Promise<{ child: ChildProcess; base: string }> {
+  const child = spawn('node_modules/.bin/tsx', ['server/index.ts'], {
+    env: { ...process.env, NODE_ENV: 'test', PORT: '0', HOST: '127.0.0.1', FITWRIGHT_DB_PATH: dbPath, FITWRIGHT_DEMO: '1' },
+    stdio: ['ignore', 'pipe', 'inherit'],
+  })
+  return new Promise((resolve, reject) => {
+    child.stdout!.on('data', (chunk: Buffer) => {
+      const port = /localhost:(\d+)/.exec(chunk.toString())?.[1]
+      if (port) resolve({ child, base: `http://127.0.0.1:${port}` })
+    })
+    child.on('exit', (code) => reject(new Error(`The server stopped before listening (exit ${code}).`)))
+  })
+}
+
+async function signIn(base: string): Promise<string> {
+  const response = await fetch(`${base}/api/auth/login`, {
+    method: 'POST',
+    headers: { 'content-type': 'application/json', origin: base },
+    body: JSON.stringify({ email: 'editor@fitwright.test', password: DEMO_PASSWORD }),
+  })
+  if (!response.ok) throw new Error(`Sign-in failed: ${response.status}`)
+  return response.headers.get('set-cookie')!.split(';')[0]!
+}
+
+function check(dbPath: string, before: number, round: number): string {
+  const db = new Database(dbPath)
+  try {
+    const integrity = db.pragma('integrity_check', { simple: true })
+    const parts = (db.prepare('SELECT count(*) AS n FROM part').get() as { n: number }).n
+    const imported = (db.prepare('SELECT count(*) AS n FROM part WHERE part_number LIKE ?').get(`TM-CR${round}-%`) as { n: number }).n
+    const whole = (parts === before && imported === 0) || (parts === before + ROWS && imported === ROWS)
+    if (integrity !== 'ok' || !whole)
+      throw new Error(`Round ${round}: integrity ${integrity}, ${parts} parts (before ${before}, imported ${imported}).`)
+    return imported === 0 ? 'before' : 'after'
+  } finally {
+    db.close()
+  }
+}
+
+const dir = mkdtempSync(path.join(tmpdir(), 'fitwright-crash-'))
+const dbPath = path.join(dir, 'crash.sqlite')
+try {
+  for (let round = 1; round <= rounds; round += 1) {
+    const { child, base } = await startServer(dbPath)
+    const cookie = await signIn(base)
+    const before = (() => {
+      const db = new Database(dbPath, { readonly: true })
+      const n = (db.prepare('SELECT count(*) AS n FROM part').get() as { n: number }).n
+      db.close()
+      return n
+    })()
+    const form = new FormData()
+    form.set('type', 'parts')
+    form.set('mode', 'commit')
+    form.set('file', new Blob([partsCsv(round)], { type: 'text/csv' }), 'crash.csv')
+    const killAfterMs = 200 + round * 350
+    const upload = fetch(`${base}/api/imports`, { method: 'POST', headers: { cookie, origin: base }, body: form }).catch(() => null)
+    await new Promise((resolve) => setTimeout(resolve, killAfterMs))
+    const exited = new Promise((resolve) => child.once('exit', resolve))
+    child.kill('SIGKILL')
+    await exited
+    const answer = await upload
+    const state = check(dbPath, before, round)
+    const leftovers = readdirSync(path.join(dir, 'uploads-in-progress')).length
+    console.log(
+      `round ${round}: killed after ${killAfterMs} ms (answer ${answer?.status ?? 'none'}); integrity ok, parts wholly ${state}; ${leftovers} upload file(s) left until the next start`,
+    )
+  }
+  const { child } = await startServer(dbPath)
+  const leftovers = readdirSync(path.join(dir, 'uploads-in-progress')).length
+  child.kill('SIGKILL')
+  console.log(`after a restart: ${leftovers} upload file(s) left`)
+  if (leftovers) process.exitCode = 1
+} finally {
+  rmSync(dir, { recursive: true, force: true })
+}
