@@ -5,6 +5,7 @@ import type { DataSource } from 'typeorm'
 import { createPassport } from './auth/passport'
 import { requireSignIn } from './auth/require-role'
 import { createSessionMiddleware } from './auth/session'
+import { csrfProtection } from './auth/csrf'
 import { createSignInThrottle } from './auth/sign-in-throttle'
 import type { AppConfig } from './config/env'
 import { securityHeaders } from './middleware/security-headers'
@@ -59,6 +60,8 @@ export async function createApp({ config, dataSource, services, version, clientD
     }),
   )
   app.use('/api', auth.initialize(), auth.session())
+
+  app.use('/api', csrfProtection())
 
   const api = express.Router()
   api.use(healthRoutes(version))

@@ -7,6 +7,7 @@ import type { SecurityEventService } from '../security/security-events.service'
 import { requireSignIn } from './require-role'
 import { AppError } from '../errors/app-error'
 import { parseBody } from '../middleware/validate'
+import { csrfToken, CSRF_COOKIE } from './csrf'
 
 function promisify(fn: (done: (error?: unknown) => void) => void): Promise<void> {
   return new Promise((resolve, reject) => fn((error) => (error ? reject(error) : resolve())))
@@ -38,6 +39,8 @@ export function authRoutes(auth: passport.PassportStatic, options: { throttle: S
     // A new session id on sign-in, so a session id planted before sign-in is worthless.
     await promisify((done) => req.session.regenerate(done))
     await promisify((done) => req.login(user, done))
+    // The new session gets its own token; the cookie carries it to the page.
+    csrfToken(req, res)
     res.json(user)
   })
 
@@ -45,11 +48,18 @@ export function authRoutes(auth: passport.PassportStatic, options: { throttle: S
     await promisify((done) => req.logout(done))
     await promisify((done) => req.session.destroy(done))
     res.clearCookie('fitwright.sid')
+    res.clearCookie(CSRF_COOKIE)
     res.status(204).end()
   })
 
   router.get('/auth/me', requireSignIn, (req: Request, res: Response) => {
+    csrfToken(req, res)
     res.json(req.user)
+  })
+
+  /** The token state-changing requests send back in x-csrf-token; also before sign-in (for the sign-in itself). */
+  router.get('/auth/csrf', (req: Request, res: Response) => {
+    res.set('Cache-Control', 'no-store').json({ token: csrfToken(req, res) })
   })
 
   return router

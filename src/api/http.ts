@@ -57,20 +57,49 @@ export function notifyUnauthorized() {
   onUnauthorized?.()
 }
 
-async function send(method: string, path: string, options: RequestOptions): Promise<Response> {
+/** The session's CSRF token, which the server keeps in a cookie only our own pages can read. */
+export function csrfHeader(): Record<string, string> {
+  const match = /(?:^|;\s*)fitwright-csrf=([^;]+)/.exec(typeof document === 'undefined' ? '' : document.cookie)
+  return match ? { 'x-csrf-token': decodeURIComponent(match[1]!) } : {}
+}
+
+/** Asks the server for a token (before the first sign-in, or after the session changed). */
+export async function refreshCsrfToken(): Promise<void> {
+  await fetch(apiUrl('/auth/csrf'), { credentials: 'same-origin' }).catch(() => undefined)
+}
+
+async function isCsrfRefusal(response: Response): Promise<boolean> {
+  if (response.status !== 403) return false
+  const body: unknown = await response
+    .clone()
+    .json()
+    .catch(() => null)
+  return errorResponseSchema.safeParse(body).data?.error.code === 'csrf'
+}
+
+async function send(method: string, path: string, options: RequestOptions, retried = false): Promise<Response> {
   const isForm = options.body instanceof FormData
+  const unsafe = method !== 'GET'
   let response: Response
   try {
     response = await fetch(apiUrl(path, options.query), {
       method,
       credentials: 'same-origin',
-      headers: options.body === undefined || isForm ? undefined : { 'Content-Type': 'application/json' },
+      headers: {
+        ...(options.body === undefined || isForm ? {} : { 'Content-Type': 'application/json' }),
+        ...(unsafe ? csrfHeader() : {}),
+      },
       body: options.body === undefined ? undefined : isForm ? (options.body as FormData) : JSON.stringify(options.body),
       signal: options.signal,
     })
   } catch (cause) {
     if (cause instanceof DOMException && cause.name === 'AbortError') throw cause
     throw networkError()
+  }
+  // No token yet, or one from a session that ended: fetch a fresh one and try once more.
+  if (unsafe && !retried && (await isCsrfRefusal(response))) {
+    await refreshCsrfToken()
+    return send(method, path, options, true)
   }
   if (!response.ok) {
     const error = apiErrorFrom(response.status, await response.json().catch(() => null))

@@ -10,7 +10,7 @@ import {
   type ImportStreamLine,
   type ImportType,
 } from '@shared/schemas/imports'
-import { ApiError, apiErrorFrom, apiUrl, networkError, notifyUnauthorized, request } from './http'
+import { ApiError, apiErrorFrom, apiUrl, csrfHeader, networkError, notifyUnauthorized, request } from './http'
 
 /** Sending the file (measured by the browser), then the server's own phases. */
 export type UploadProgress = { type: 'progress'; phase: 'upload'; done: number; total: number } | ImportProgress
@@ -81,6 +81,7 @@ function upload({ file, type, mode, validRowsOnly, onProgress }: UploadRequest):
     form.append('file', file)
     xhr.open('POST', apiUrl('/imports'))
     xhr.setRequestHeader('Accept', 'application/x-ndjson')
+    for (const [name, value] of Object.entries(csrfHeader())) xhr.setRequestHeader(name, value)
     xhr.send(form)
   })
 }

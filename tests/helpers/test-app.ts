@@ -22,6 +22,18 @@ export type TestApp = {
   close: () => Promise<void>
 }
 
+/** Fetches the session's CSRF token and sends it with every later request of the agent (call again after sign-in). */
+export async function withCsrf(agent: ReturnType<typeof request.agent>) {
+  const { body } = await agent.get('/api/auth/csrf')
+  agent.set('x-csrf-token', (body as { token: string }).token)
+  return agent
+}
+
+/** An agent with no one signed in yet, carrying a CSRF token, as the sign-in page has one. */
+export function anonymous(app: Express) {
+  return withCsrf(request.agent(app))
+}
+
 let demoTemplate: Promise<string> | null = null
 
 /**
@@ -61,9 +73,10 @@ export async function createTestApp(options: { demo?: boolean; env?: Record<stri
     config,
     services,
     async signIn(role) {
-      const agent = request.agent(app)
+      const agent = await anonymous(app)
       const response = await agent.post('/api/auth/login').send({ email: `${role}@fitwright.test`, password: DEMO_PASSWORD })
       if (response.status !== 200) throw new Error(`Sign-in as ${role} failed: ${response.status}`)
+      await withCsrf(agent)
       return agent
     },
     async close() {

@@ -1,7 +1,6 @@
-import request from 'supertest'
 import { describe, expect, it } from 'vitest'
 import { loadConfig } from '../../server/config/env'
-import { createTestApp } from '../helpers/test-app'
+import { anonymous, createTestApp } from '../helpers/test-app'
 
 describe('loadConfig', () => {
   it('uses the documented defaults', () => {
@@ -25,9 +24,9 @@ describe('first administrator without the demo', () => {
       demo: false,
       env: { FITWRIGHT_ADMIN_EMAIL: 'boss@shop.test', FITWRIGHT_ADMIN_PASSWORD: 'first-admin-pass' },
     })
-    const login = await request(t.app).post('/api/auth/login').send({ email: 'boss@shop.test', password: 'first-admin-pass' })
+    const login = await (await anonymous(t.app)).post('/api/auth/login').send({ email: 'boss@shop.test', password: 'first-admin-pass' })
     expect(login.body.role).toBe('admin')
-    const demo = await request(t.app).post('/api/auth/login').send({ email: 'admin@fitwright.test', password: 'fitwright-demo' })
+    const demo = await (await anonymous(t.app)).post('/api/auth/login').send({ email: 'admin@fitwright.test', password: 'fitwright-demo' })
     expect(demo.status).toBe(401)
     const parts = await t.dataSource.query('SELECT COUNT(*) AS n FROM part')
     expect(parts[0].n).toBe(0)

@@ -1,8 +1,7 @@
 import bcrypt from 'bcryptjs'
-import request from 'supertest'
 import { afterAll, beforeAll, describe, expect, it } from 'vitest'
 import { DEMO_PASSWORD } from '../../server/demo/seed'
-import { createTestApp, type TestApp } from '../helpers/test-app'
+import { anonymous, createTestApp, type TestApp } from '../helpers/test-app'
 
 let t: TestApp
 beforeAll(async () => {
@@ -58,16 +57,16 @@ describe('new passwords', () => {
 describe('stored hashes', () => {
   it('makes a cheaper stored hash again at cost 12 when the user signs in, and the password still works', async () => {
     expect(bcrypt.getRounds(await storedHash('counter@fitwright.test'))).toBe(10)
-    const first = await request(t.app).post('/api/auth/login').send({ email: 'counter@fitwright.test', password: DEMO_PASSWORD })
+    const first = await (await anonymous(t.app)).post('/api/auth/login').send({ email: 'counter@fitwright.test', password: DEMO_PASSWORD })
     expect(first.status).toBe(200)
     expect(bcrypt.getRounds(await storedHash('counter@fitwright.test'))).toBe(12)
-    const again = await request(t.app).post('/api/auth/login').send({ email: 'counter@fitwright.test', password: DEMO_PASSWORD })
+    const again = await (await anonymous(t.app)).post('/api/auth/login').send({ email: 'counter@fitwright.test', password: DEMO_PASSWORD })
     expect(again.status).toBe(200)
   })
 
   it('leaves the hash alone after a failed sign-in', async () => {
     const before = await storedHash('editor@fitwright.test')
-    await request(t.app).post('/api/auth/login').send({ email: 'editor@fitwright.test', password: 'not the password' })
+    await (await anonymous(t.app)).post('/api/auth/login').send({ email: 'editor@fitwright.test', password: 'not the password' })
     expect(await storedHash('editor@fitwright.test')).toBe(before)
   })
 })

@@ -1,7 +1,7 @@
 import request from 'supertest'
 import { afterAll, beforeAll, describe, expect, it } from 'vitest'
 import { uploadCsv } from '../helpers/imports'
-import { createTestApp, type TestApp } from '../helpers/test-app'
+import { anonymous, createTestApp, type TestApp } from '../helpers/test-app'
 
 type Event = { kind: string; at: string; actorEmail: string | null; address: string | null; detail: string | null }
 
@@ -36,7 +36,7 @@ describe('security events', () => {
   })
 
   it('records a failed sign-in with the e-mail tried', async () => {
-    await request(t.app).post('/api/auth/login').send({ email: 'counter@fitwright.test', password: 'not the password' })
+    await (await anonymous(t.app)).post('/api/auth/login').send({ email: 'counter@fitwright.test', password: 'not the password' })
     expect(await latest('sign_in_failed')).toMatchObject({ actorEmail: 'counter@fitwright.test', address: fromHere })
   })
 

@@ -42,15 +42,23 @@ describe('security headers', () => {
 
   it('marks the session cookie Secure when FITWRIGHT_COOKIE_SECURE=1 and the request came over HTTPS', async () => {
     const app = (t = await createTestApp({ env: { FITWRIGHT_COOKIE_SECURE: '1' } }))
-    const login = (proto: string) =>
-      request(app.app)
+    // The test client never returns a Secure cookie over plain http, so the session cookie is sent by hand.
+    const login = async (proto: string) => {
+      const csrf = await request(app.app).get('/api/auth/csrf').set('X-Forwarded-Proto', proto)
+      const sid = ([] as string[]).concat(csrf.headers['set-cookie'] ?? []).find((c) => c.startsWith('fitwright.sid='))
+      return request(app.app)
         .post('/api/auth/login')
         .set('X-Forwarded-Proto', proto)
+        .set('Cookie', sid?.split(';')[0] ?? '')
+        .set('x-csrf-token', (csrf.body as { token: string }).token)
         .send({ email: 'counter@fitwright.test', password: DEMO_PASSWORD })
+    }
     const overHttps = await login('https')
     expect(overHttps.status).toBe(200)
-    expect(String(overHttps.headers['set-cookie'])).toMatch(/;\s*Secure/i)
-    expect((await login('http')).headers['set-cookie']).toBeUndefined()
+    const sessionCookie = (r: Awaited<ReturnType<typeof login>>) =>
+      ([] as string[]).concat(r.headers['set-cookie'] ?? []).find((c) => c.startsWith('fitwright.sid='))
+    expect(sessionCookie(overHttps)).toMatch(/;\s*Secure/i)
+    expect(sessionCookie(await login('http'))).toBeUndefined()
   })
 })
 

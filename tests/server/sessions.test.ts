@@ -1,7 +1,6 @@
 import { setTimeout as sleep } from 'node:timers/promises'
-import request from 'supertest'
 import { afterAll, beforeAll, describe, expect, it } from 'vitest'
-import { createTestApp, type TestApp } from '../helpers/test-app'
+import { anonymous, withCsrf, createTestApp, type TestApp } from '../helpers/test-app'
 
 let t: TestApp
 beforeAll(async () => {
@@ -17,8 +16,9 @@ async function signedInNewUser(admin: Awaited<ReturnType<TestApp['signIn']>>) {
   const password = `brake drum ${serial} wobble`
   const created = await admin.post('/api/users').send({ email, name: `Session ${serial}`, role: 'counter', password })
   expect(created.status).toBe(201)
-  const agent = request.agent(t.app)
+  const agent = await anonymous(t.app)
   expect((await agent.post('/api/auth/login').send({ email, password })).status).toBe(200)
+  await withCsrf(agent)
   return { id: created.body.id as number, email, password, agent }
 }
 
@@ -30,7 +30,7 @@ describe('sessions end when the account changes', () => {
     const changed = await admin.patch(`/api/users/${user.id}`).send({ password: 'a fresh gasket set' })
     expect(changed.status).toBe(200)
     expect((await user.agent.get('/api/auth/me')).status).toBe(401)
-    const again = await request(t.app).post('/api/auth/login').send({ email: user.email, password: 'a fresh gasket set' })
+    const again = await (await anonymous(t.app)).post('/api/auth/login').send({ email: user.email, password: 'a fresh gasket set' })
     expect(again.status).toBe(200)
   })
 
@@ -40,11 +40,11 @@ describe('sessions end when the account changes', () => {
     const disabled = await admin.patch(`/api/users/${user.id}`).send({ disabled: true })
     expect(disabled.body.disabled).toBe(true)
     expect((await user.agent.get('/api/auth/me')).status).toBe(401)
-    const refused = await request(t.app).post('/api/auth/login').send({ email: user.email, password: user.password })
+    const refused = await (await anonymous(t.app)).post('/api/auth/login').send({ email: user.email, password: user.password })
     expect(refused.status).toBe(403)
     expect(refused.body.error.code).toBe('account_disabled')
     await admin.patch(`/api/users/${user.id}`).send({ disabled: false })
-    expect((await request(t.app).post('/api/auth/login').send({ email: user.email, password: user.password })).status).toBe(200)
+    expect((await (await anonymous(t.app)).post('/api/auth/login').send({ email: user.email, password: user.password })).status).toBe(200)
   })
 
   it('keeps other users signed in when one account is disabled', async () => {

@@ -1,6 +1,5 @@
 import { afterAll, beforeAll, describe, expect, it } from 'vitest'
-import request from 'supertest'
-import { createTestApp, type TestApp } from '../helpers/test-app'
+import { anonymous, createTestApp, type TestApp } from '../helpers/test-app'
 
 let t: TestApp
 beforeAll(async () => {
@@ -25,7 +24,7 @@ describe('/api/users (administrators only)', () => {
       .send({ email: 'New.Counter@Shop.test', name: 'New Counter', role: 'counter', password: 'long-enough-1' })
     expect(created.status).toBe(201)
     expect(created.body.email).toBe('new.counter@shop.test')
-    const login = await request(t.app).post('/api/auth/login').send({ email: 'new.counter@shop.test', password: 'long-enough-1' })
+    const login = await (await anonymous(t.app)).post('/api/auth/login').send({ email: 'new.counter@shop.test', password: 'long-enough-1' })
     expect(login.body.role).toBe('counter')
   })
 
