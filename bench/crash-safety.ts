@@ -12,7 +12,7 @@ import path from 'node:path'
 import Database from 'better-sqlite3'
 import { DEMO_PASSWORD } from '../server/demo/seed'
 
-const ROWS = 60_000
+const ROWS = 200_000
 const args = process.argv.slice(2)
 const rounds = Number(args[args.indexOf('--rounds') + 1] ?? 0) || 5
 
@@ -24,7 +24,16 @@ function partsCsv(round: number): string {
 
 function startServer(dbPath: string): Promise<{ child: ChildProcess; base: string }> {
   const child = spawn('node_modules/.bin/tsx', ['server/index.ts'], {
-    env: { ...process.env, NODE_ENV: 'test', PORT: '0', HOST: '127.0.0.1', FITWRIGHT_DB_PATH: dbPath, FITWRIGHT_DEMO: '1' },
+    env: {
+      ...process.env,
+      NODE_ENV: 'test',
+      PORT: '0',
+      HOST: '127.0.0.1',
+      FITWRIGHT_DB_PATH: dbPath,
+      FITWRIGHT_DEMO: '1',
+      FITWRIGHT_UPLOAD_DIR: path.join(path.dirname(dbPath), 'photos'),
+      FITWRIGHT_MAIL_DIR: path.join(path.dirname(dbPath), 'mail'),
+    },
     stdio: ['ignore', 'pipe', 'inherit'],
   })
   return new Promise((resolve, reject) => {
@@ -36,14 +45,32 @@ function startServer(dbPath: string): Promise<{ child: ChildProcess; base: strin
   })
 }
 
-async function signIn(base: string): Promise<string> {
+type Session = { cookie: string; token: string }
+
+/** A session and its CSRF token, as a script gets them (README, API section). */
+async function csrf(base: string, cookie = ''): Promise<Session> {
+  const response = await fetch(`${base}/api/auth/csrf`, { headers: cookie ? { cookie } : {} })
+  const sid =
+    response.headers
+      .getSetCookie()
+      .find((c) => c.startsWith('fitwright.sid='))
+      ?.split(';')[0] ?? cookie
+  return { cookie: sid, token: ((await response.json()) as { token: string }).token }
+}
+
+async function signIn(base: string): Promise<Session> {
+  const anonymous = await csrf(base)
   const response = await fetch(`${base}/api/auth/login`, {
     method: 'POST',
-    headers: { 'content-type': 'application/json', origin: base },
+    headers: { 'content-type': 'application/json', origin: base, cookie: anonymous.cookie, 'x-csrf-token': anonymous.token },
     body: JSON.stringify({ email: 'editor@fitwright.test', password: DEMO_PASSWORD }),
   })
   if (!response.ok) throw new Error(`Sign-in failed: ${response.status}`)
-  return response.headers.get('set-cookie')!.split(';')[0]!
+  const cookie = response.headers
+    .getSetCookie()
+    .find((c) => c.startsWith('fitwright.sid='))!
+    .split(';')[0]!
+  return csrf(base, cookie)
 }
 
 function check(dbPath: string, before: number, round: number): string {
@@ -51,7 +78,7 @@ function check(dbPath: string, before: number, round: number): string {
   try {
     const integrity = db.pragma('integrity_check', { simple: true })
     const parts = (db.prepare('SELECT count(*) AS n FROM part').get() as { n: number }).n
-    const imported = (db.prepare('SELECT count(*) AS n FROM part WHERE part_number LIKE ?').get(`TM-CR${round}-%`) as { n: number }).n
+    const imported = (db.prepare('SELECT count(*) AS n FROM part WHERE "partNumber" LIKE ?').get(`TM-CR${round}-%`) as { n: number }).n
     const whole = (parts === before && imported === 0) || (parts === before + ROWS && imported === ROWS)
     if (integrity !== 'ok' || !whole)
       throw new Error(`Round ${round}: integrity ${integrity}, ${parts} parts (before ${before}, imported ${imported}).`)
@@ -66,7 +93,10 @@ const dbPath = path.join(dir, 'crash.sqlite')
 try {
   for (let round = 1; round <= rounds; round += 1) {
     const { child, base } = await startServer(dbPath)
-    const cookie = await signIn(base)
+    const session = await signIn(base).catch((error: unknown) => {
+      child.kill('SIGKILL')
+      throw error
+    })
     const before = (() => {
       const db = new Database(dbPath, { readonly: true })
       const n = (db.prepare('SELECT count(*) AS n FROM part').get() as { n: number }).n
@@ -77,8 +107,12 @@ try {
     form.set('type', 'parts')
     form.set('mode', 'commit')
     form.set('file', new Blob([partsCsv(round)], { type: 'text/csv' }), 'crash.csv')
-    const killAfterMs = 200 + round * 350
-    const upload = fetch(`${base}/api/imports`, { method: 'POST', headers: { cookie, origin: base }, body: form }).catch(() => null)
+    const killAfterMs = 40 + round * 60
+    const upload = fetch(`${base}/api/imports`, {
+      method: 'POST',
+      headers: { cookie: session.cookie, origin: base, 'x-csrf-token': session.token },
+      body: form,
+    }).catch(() => null)
     await new Promise((resolve) => setTimeout(resolve, killAfterMs))
     const exited = new Promise((resolve) => child.once('exit', resolve))
     child.kill('SIGKILL')
