@@ -14,7 +14,7 @@ import { DEMO_PASSWORD } from '../server/demo/seed'
 
 const ROWS = 200_000
 const args = process.argv.slice(2)
-const rounds = Number(args[args.indexOf('--rounds') + 1] ?? 0) || 5
+const rounds = Number(args[args.indexOf('--rounds') + 1] ?? 0) || 8
 
 function partsCsv(round: number): string {
   const lines = ['part_number,kind,name']
@@ -107,21 +107,34 @@ try {
     form.set('type', 'parts')
     form.set('mode', 'commit')
     form.set('file', new Blob([partsCsv(round)], { type: 'text/csv' }), 'crash.csv')
-    const killAfterMs = 40 + round * 60
-    const upload = fetch(`${base}/api/imports`, {
+    // The answer streams its phases. The write runs as one synchronous transaction, so its own progress line
+    // only leaves after the commit: the kill is timed from the first line instead, later each round, so the
+    // rounds fall across reading, checking and writing.
+    const killAfterMs = (round - 1) * 150
+    const response = await fetch(`${base}/api/imports`, {
       method: 'POST',
-      headers: { cookie: session.cookie, origin: base, 'x-csrf-token': session.token },
+      headers: { cookie: session.cookie, origin: base, 'x-csrf-token': session.token, accept: 'application/x-ndjson' },
       body: form,
-    }).catch(() => null)
+    })
+    const reader = response.body!.getReader()
+    let seen = ''
+    let answer: { status: number } | null = null
+    for (;;) {
+      const { done, value } = await reader.read()
+      if (done) break
+      seen += new TextDecoder().decode(value)
+      if (/"type":"result"/.test(seen)) answer = { status: 201 }
+      if (/"type":"progress"/.test(seen) || answer) break
+    }
     await new Promise((resolve) => setTimeout(resolve, killAfterMs))
     const exited = new Promise((resolve) => child.once('exit', resolve))
     child.kill('SIGKILL')
     await exited
-    const answer = await upload
+    await reader.cancel().catch(() => undefined)
     const state = check(dbPath, before, round)
     const leftovers = readdirSync(path.join(dir, 'uploads-in-progress')).length
     console.log(
-      `round ${round}: killed after ${killAfterMs} ms (answer ${answer?.status ?? 'none'}); integrity ok, parts wholly ${state}; ${leftovers} upload file(s) left until the next start`,
+      `round ${round}: killed ${killAfterMs} ms after the first progress line (${answer ? 'after the commit answered' : 'before any answer'}); integrity ok, parts wholly ${state}; ${leftovers} upload file(s) left until the next start`,
     )
   }
   const { child } = await startServer(dbPath)
