@@ -17,9 +17,26 @@ async function answer(response: Response): Promise<unknown> {
   return text ? (JSON.parse(text) as unknown) : null
 }
 
-function client(base: string, cookie: string, timeoutMs: number): Client {
+const cookiesOf = (response: Response) =>
+  response.headers
+    .getSetCookie()
+    .map((line) => line.split(';')[0])
+    .join('; ')
+
+/** The session's CSRF token, which every POST/PATCH sends back (README, API section). */
+async function csrfToken(base: string, cookie: string): Promise<{ cookie: string; token: string }> {
+  const response = await fetch(`${base}/api/auth/csrf`, { headers: cookie ? { cookie } : {} })
+  const body = (await answer(response)) as { token: string }
+  return { cookie: cookie || cookiesOf(response), token: body.token }
+}
+
+function client(base: string, cookie: string, token: string, timeoutMs: number): Client {
   const call = (route: string, init: RequestInit) =>
-    fetch(`${base}${route}`, { ...init, headers: { cookie, ...init.headers }, signal: AbortSignal.timeout(timeoutMs) }).then(answer)
+    fetch(`${base}${route}`, {
+      ...init,
+      headers: { cookie, 'x-csrf-token': token, ...init.headers },
+      signal: AbortSignal.timeout(timeoutMs),
+    }).then(answer)
   return {
     get: (route) => call(route, { method: 'GET' }),
     send: (method, route, body) => call(route, { method, body: JSON.stringify(body), headers: { 'content-type': 'application/json' } }),
@@ -33,16 +50,19 @@ function client(base: string, cookie: string, timeoutMs: number): Client {
 }
 
 export async function signIn(base: string, email: string, password: string, timeoutMs = REQUEST_TIMEOUT_MS): Promise<Client> {
+  const before = await csrfToken(base, '')
   const response = await fetch(`${base}/api/auth/login`, {
     method: 'POST',
-    headers: { 'content-type': 'application/json' },
+    headers: { 'content-type': 'application/json', cookie: before.cookie, 'x-csrf-token': before.token },
     body: JSON.stringify({ email, password }),
   })
   await answer(response)
   const cookie = response.headers
     .getSetCookie()
     .map((line) => line.split(';')[0])
+    .filter((line) => line?.startsWith('fitwright.sid='))
     .join('; ')
   if (!cookie) throw new Error(`Signing in as ${email} set no session cookie.`)
-  return client(base, cookie, timeoutMs)
+  const after = await csrfToken(base, cookie)
+  return client(base, cookie, after.token, timeoutMs)
 }
