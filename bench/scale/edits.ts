@@ -7,19 +7,37 @@ import { figureLine, latencyLine, type Line } from './report'
 import { failureReason, type Sample } from './stats'
 
 const fitsAnswer = z.object({
-  results: z.array(z.object({ part: z.object({ partNumber: z.string() }), relation: z.string(), decidedBy: z.string() })),
+  groups: z.array(
+    z.object({
+      total: z.number(),
+      results: z.array(z.object({ part: z.object({ partNumber: z.string() }), relation: z.string(), decidedBy: z.string() })),
+    }),
+  ),
 })
 const EDITS = 5
+const PAGE_SIZE = 200
 
-type Edit = { linkId: number; part: string; other: string }
+type Edit = { linkId: number; part: string; other: string; otherKind: string }
 
 function linkToEdit(bare: BareQueries, part: PickedPart): Edit | undefined {
   return bare.db
     .prepare(
-      `SELECT l.id AS linkId, ? AS part, o.partNumber AS other FROM link l JOIN part o ON o.id = CASE WHEN l.partAId = ? THEN l.partBId ELSE l.partAId END
+      `SELECT l.id AS linkId, ? AS part, o.partNumber AS other, o.kind AS otherKind FROM link l JOIN part o ON o.id = CASE WHEN l.partAId = ? THEN l.partBId ELSE l.partAId END
        WHERE (l.partAId = ? OR l.partBId = ?) AND l.relation = 'fits' AND l.status = 'approved' LIMIT 1`,
     )
     .get(part.number, part.id, part.id, part.id) as Edit | undefined
+}
+
+/** Whether the edited link answers does-not-fit, decided by the link, in its part's what-fits pages of the other part's kind. */
+async function editShown(counter: Client, edit: Edit): Promise<boolean> {
+  const base = `/api/parts/${encodeURIComponent(edit.part)}/fits?kind=${edit.otherKind}&relation=does-not-fit&inferred=0&pageSize=${PAGE_SIZE}`
+  for (let page = 1; ; page++) {
+    const answer = fitsAnswer.parse(await counter.get(`${base}&page=${page}`))
+    const results = answer.groups.flatMap((group) => group.results)
+    if (results.some((result) => result.part.partNumber === edit.other && result.decidedBy === 'link')) return true
+    const total = Math.max(0, ...answer.groups.map((group) => group.total))
+    if (results.length === 0 || page * PAGE_SIZE >= total) return false
+  }
 }
 
 /**
@@ -47,14 +65,9 @@ export async function measureEdits(editor: Client, counter: Client, bare: BareQu
       delay.disable()
       stall.times.push(delay.max / 1e6)
       const started = performance.now()
-      const answer = fitsAnswer.parse(await counter.get(`/api/parts/${encodeURIComponent(edit.part)}/fits`))
+      await counter.get(`/api/parts/${encodeURIComponent(edit.part)}/fits`)
       next.times.push(performance.now() - started)
-      if (
-        answer.results.some(
-          (result) => result.part.partNumber === edit.other && result.relation === 'does-not-fit' && result.decidedBy === 'link',
-        )
-      )
-        shown++
+      if (await editShown(counter, edit)) shown++
     } catch (error) {
       delay.disable()
       busy.failure = stall.failure = next.failure = failureReason(error)

@@ -94,7 +94,11 @@ function gist(body: unknown): string {
   const answer = body as Record<string, unknown>
   const count = (key: string) => (Array.isArray(answer[key]) ? (answer[key] as unknown[]).length : 0)
   if ('total' in answer) return `${count('items')} of ${String(answer.total)} parts`
-  if ('results' in answer) return `${count('results')} results, ${count('truncated')} groups cut`
+  if ('groups' in answer && Array.isArray(answer.groups)) {
+    const groups = answer.groups as { total: number; results: unknown[] }[]
+    const total = groups.reduce((sum, group) => sum + group.total, 0)
+    return `${groups.reduce((sum, group) => sum + group.results.length, 0)} of ${total} results in ${groups.length} groups`
+  }
   if ('found' in answer) return answer.found ? `found, ${count('edges')} steps` : 'no path'
   if ('capped' in answer) return `${count('nodes')} parts, ${count('edges')} links${answer.capped ? ', capped' : ''}`
   if ('verdict' in answer) return `verdict ${String(answer.verdict)}, ${count('pairs')} pairs`

@@ -3,16 +3,17 @@ import { useRoute, useRouter } from 'vue-router'
 import { FIT_PAGE_SIZE_DEFAULT, RELATIONS, type FitsResponse, type Relation } from '@shared/schemas/fitment'
 import type { PartKind } from '@shared/schemas/part-kinds'
 import { fitmentApi } from '@/api/fitment'
-import { filterGroups, groupFits, kindsIn, relationCounts, withPage, type FitFilters } from '@/lib/fit-groups'
-import { queryInt, queryKind, queryOneOf, queryText } from '@/lib/route-query'
+import { filterGroups, groupFits, kindsIn, relationCounts, summariseFits, withPage, type FitFilters } from '@/lib/fit-groups'
+import { queryInt, queryKind, queryKinds, queryOneOf, queryText } from '@/lib/route-query'
 import { useRemote } from './useRemote'
 
 /**
  * The part page: the part, its identical numbers and what fits it. The server
  * answers every group's total and its first page; the filters and the page of
  * one group live in the address (`?kind=block&relation=fits&page=2&inferred=0&stock=1`)
- * so a counter can send exactly this view. Filtering the overview is done here
- * so every filter can show how many answers it holds.
+ * so a counter can send exactly this view, and so do the kinds folded away
+ * (`?fold=gasket,belt`). Filtering the overview is done here so every filter
+ * and the summary can show how many answers it holds.
  */
 export function usePartFits(partNumber: Ref<string>) {
   const route = useRoute()
@@ -33,10 +34,13 @@ export function usePartFits(partNumber: Ref<string>) {
     return kind && relation && page > 1 ? { kind, relation, page, inferred, inStock } : null
   })
 
-  function setFilters(change: Partial<FitFilters>) {
+  const folded = computed(() => queryKinds(route.query.fold))
+
+  function setFilters(change: Partial<FitFilters>, fold: readonly PartKind[] = folded.value) {
     const next = { ...filters.value, page: 1, ...change }
     void router.replace({
       query: {
+        ...(fold.length ? { fold: fold.join(',') } : {}),
         ...(next.relation ? { relation: next.relation } : {}),
         ...(next.kind ? { kind: next.kind } : {}),
         ...(next.inferred ? {} : { inferred: '0' }),
@@ -49,6 +53,22 @@ export function usePartFits(partNumber: Ref<string>) {
   /** Opens a page of one group, keeping the inferred filter. */
   function showPage(kind: PartKind, relation: Relation, page: number) {
     setFilters({ kind, relation, page })
+  }
+
+  /** Folds the kinds given away (or opens them again), keeping the filters and page. */
+  function setFolded(kinds: readonly PartKind[]) {
+    setFilters({ page: filters.value.page }, kinds)
+  }
+  function toggleFold(kind: PartKind) {
+    setFolded(folded.value.includes(kind) ? folded.value.filter((other) => other !== kind) : [...folded.value, kind])
+  }
+
+  /** From the summary: this kind and relation only, open. */
+  function choose(kind: PartKind, relation: Relation) {
+    setFilters(
+      { kind, relation },
+      folded.value.filter((other) => other !== kind),
+    )
   }
 
   const load = () =>
@@ -66,6 +86,7 @@ export function usePartFits(partNumber: Ref<string>) {
   const groups = computed(() => groupFits(visible.value))
   const counts = computed(() => relationCounts(all.value, filters.value))
   const kinds = computed(() => kindsIn(all.value))
+  const summary = computed(() => summariseFits(all.value, filters.value))
   const pageSize = computed(() => remote.data.value?.pageSize ?? FIT_PAGE_SIZE_DEFAULT)
 
   const reload = () => {
@@ -78,6 +99,11 @@ export function usePartFits(partNumber: Ref<string>) {
     filters,
     setFilters,
     showPage,
+    folded,
+    setFolded,
+    toggleFold,
+    choose,
+    summary,
     visible,
     groups,
     counts,

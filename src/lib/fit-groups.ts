@@ -61,3 +61,29 @@ export function withPage(overview: readonly FitGroupPage[], page: readonly FitGr
 function sum(groups: readonly FitGroupPage[]): number {
   return groups.reduce((total, group) => total + group.total, 0)
 }
+
+/** One kind's answers at a glance: per relation, how many are reviewed and how many the rules inferred. */
+export type FitSummaryRow = {
+  kind: PartKind
+  cells: Record<Relation, { reviewed: number; inferred: number }>
+  reviewed: number
+  inferred: number
+}
+
+/**
+ * The part page's summary, before the lists: every kind with answers under the
+ * inferred and stock filters (the kind and relation filters are what the
+ * summary lets a counter choose, so they are not applied). Kinds with reviewed
+ * fits come first, in catalogue order, then those known only by the rules.
+ */
+export function summariseFits(groups: readonly FitGroupPage[], filters: Omit<FitFilters, 'page'>): FitSummaryRow[] {
+  const base = filterGroups(groups, { inferred: filters.inferred })
+  const rows = kindsIn(base).map((kind) => {
+    const cells = Object.fromEntries(RELATIONS.map((relation) => [relation, { reviewed: 0, inferred: 0 }])) as FitSummaryRow['cells']
+    for (const group of base) if (group.kind === kind) cells[group.relation][group.source] += group.total
+    const total = (source: FitGroupPage['source']) => RELATIONS.reduce((sum, relation) => sum + cells[relation][source], 0)
+    return { kind, cells, reviewed: total('reviewed'), inferred: total('inferred') }
+  })
+  const reviewedFits = (row: FitSummaryRow) => row.cells.fits.reviewed + row.cells['fits-with-modification'].reviewed > 0
+  return [...rows.filter(reviewedFits), ...rows.filter((row) => !reviewedFits(row))]
+}

@@ -38,3 +38,9 @@ export function queryNumber(value: QueryValue): number | undefined {
   const parsed = Number(text)
   return Number.isFinite(parsed) ? parsed : undefined
 }
+
+/** A comma-separated list of part kinds (`?fold=gasket,belt`), unknown ones dropped, each once, in catalogue order. */
+export function queryKinds(value: QueryValue): PartKind[] {
+  const given = new Set(queryText(value).split(','))
+  return PART_KINDS.filter((kind) => given.has(kind))
+}

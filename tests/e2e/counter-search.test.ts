@@ -84,6 +84,38 @@ describe.skipIf(!run)('counter: the next customer from the part page', () => {
     await page.setViewportSize({ width: 1366, height: 900 })
   })
 
+  it('opens the part page with a summary whose cells choose a kind and relation, and folds kinds in the address', async () => {
+    await page.goto(`${server.url}/parts/TM-BL-1800`)
+    const summary = page.getByRole('region', { name: 'At a glance' })
+    await expect.poll(() => summary.getByRole('row').count(), within).toBeGreaterThan(2)
+    // Kinds with reviewed fits head the summary.
+    const firstRow = summary.getByRole('row').nth(1)
+    expect(await firstRow.textContent()).toMatch(/\d+ reviewed/)
+    await saveScreenshot(page, 'counter-part-summary')
+    const tall = await page.evaluate(() => document.documentElement.scrollHeight)
+
+    await summary.getByRole('button', { name: 'Fold every kind' }).click()
+    await page.waitForURL(/[?&]fold=/)
+    const toggles = page.locator('.fit-group-list').getByRole('button', { expanded: true })
+    await expect.poll(() => toggles.count(), within).toBe(0)
+    const short = await page.evaluate(() => document.documentElement.scrollHeight)
+    expect(short).toBeLessThan(tall)
+    await page.reload()
+    await expect.poll(() => page.getByRole('button', { name: /^Cylinder head \(/, expanded: false }).count(), within).toBe(1)
+    await page.setViewportSize({ width: 768, height: 1024 })
+    await saveScreenshot(page, 'counter-part-folded-768')
+    await page.setViewportSize({ width: 1366, height: 900 })
+
+    await page.getByRole('button', { name: /^Cylinder head \(/ }).click()
+    await expect.poll(() => page.getByRole('button', { name: /^Cylinder head \(/, expanded: true }).count(), within).toBe(1)
+    expect(new URL(page.url()).searchParams.get('fold')).not.toContain('head,')
+
+    await summary.getByRole('button', { name: 'Cylinder head: fits, show only these' }).click()
+    await page.waitForURL((url) => url.searchParams.get('kind') === 'head' && url.searchParams.get('relation') === 'fits')
+    await expect.poll(() => page.getByRole('list', { name: /^Cylinder head: fits, reviewed/ }).count(), within).toBe(1)
+    expect(await page.getByRole('list', { name: /^Head gasket/ }).count()).toBe(0)
+  })
+
   it('keeps the top-bar search usable on a 768 px tablet, light and dark', async () => {
     await page.setViewportSize({ width: 768, height: 1024 })
     await page.goto(`${server.url}/parts/TM-BL-2010`)

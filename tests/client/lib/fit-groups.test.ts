@@ -1,6 +1,6 @@
 import { describe, expect, it } from 'vitest'
 import type { FitGroupPage } from '@shared/schemas/fitment'
-import { filterGroups, groupFits, kindsIn, relationCounts, withPage } from '@/lib/fit-groups'
+import { filterGroups, groupFits, kindsIn, relationCounts, summariseFits, withPage } from '@/lib/fit-groups'
 import { makeFit, makePart } from '../../helpers/client-factories'
 
 function group(
@@ -66,5 +66,31 @@ describe('what fits, grouped and filtered', () => {
     expect(merged.filter((g) => g.kind !== 'block' || g.relation !== 'fits')).toEqual(
       groups.filter((g) => g.kind !== 'block' || g.relation !== 'fits'),
     )
+  })
+
+  it('summarises each kind by relation and source, kinds with reviewed fits first, whatever kind or relation is chosen', () => {
+    const rows = summariseFits(groups, { kind: 'block', relation: 'does-not-fit', inferred: true })
+    expect(rows.map((row) => [row.kind, row.reviewed, row.inferred])).toEqual([
+      ['block', 2, 40],
+      ['head-gasket', 0, 1],
+      ['intake-manifold', 0, 3],
+    ])
+    expect(rows[0]?.cells).toEqual({
+      fits: { reviewed: 1, inferred: 40 },
+      'fits-with-modification': { reviewed: 1, inferred: 0 },
+      'does-not-fit': { reviewed: 0, inferred: 0 },
+    })
+  })
+
+  it('puts a kind known only from reviewed does-not-fit links after the kinds with reviewed fits, and leaves out inferred answers when they are hidden', () => {
+    const more = [
+      group('head', 'does-not-fit', 'reviewed', ['ZX-HD-1']),
+      group('head-gasket', 'fits', 'reviewed', ['ZX-HG-2']),
+      group('block', 'fits', 'inferred', ['ZX-BL-3'], 7),
+    ]
+    const rows = summariseFits(more, { inferred: false })
+    // The head comes first in catalogue order, but has no reviewed fit.
+    expect(rows.map((row) => row.kind)).toEqual(['head-gasket', 'head'])
+    expect(rows.every((row) => row.inferred === 0)).toBe(true)
   })
 })

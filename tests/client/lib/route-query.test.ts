@@ -1,5 +1,5 @@
 import { describe, expect, it } from 'vitest'
-import { queryInt, queryKind, queryNumber, queryOneOf, queryText } from '@/lib/route-query'
+import { queryInt, queryKind, queryKinds, queryNumber, queryOneOf, queryText } from '@/lib/route-query'
 
 describe('route query readers', () => {
   it.each([
@@ -42,5 +42,11 @@ describe('route query readers', () => {
     ['  ', undefined],
   ] as const)('reads the number %j as %j', (value, expected) => {
     expect(queryNumber(value)).toBe(expected)
+  })
+
+  it('reads a list of kinds in catalogue order, dropping unknown and repeated ones', () => {
+    expect(queryKinds('head-gasket,block,nonsense,block')).toEqual(['block', 'head-gasket'])
+    expect(queryKinds(undefined)).toEqual([])
+    expect(queryKinds(['head', 'block'])).toEqual(['head'])
   })
 })
