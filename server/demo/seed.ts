@@ -5,7 +5,7 @@ import path from 'node:path'
 import type Database from 'better-sqlite3'
 import type { DataSource } from 'typeorm'
 import { z } from 'zod'
-import type { Role } from '../../shared/schemas/auth'
+import type { Role, User } from '../../shared/schemas/auth'
 import { buildSheetInputSchema } from '../../shared/schemas/build'
 import { linkSourceSchema, relationSchema } from '../../shared/schemas/fitment'
 import type { ImportType } from '../../shared/schemas/imports'
@@ -73,22 +73,9 @@ function seedProposedLinks(db: Database.Database, file: string) {
 
 const demoBuildsSchema = z.array(buildSheetInputSchema)
 
-function seedBuilds(db: Database.Database, file: string, ownerId: number) {
-  const insert = db.prepare(
-    `INSERT INTO build_sheet (ownerId, name, notes, slots, targetPowerKw, fuelOctane, chassisModelYear, vin) VALUES (?, ?, ?, ?, ?, ?, ?, ?)`,
-  )
-  for (const build of demoBuildsSchema.parse(JSON.parse(readFileSync(file, 'utf8')))) {
-    insert.run(
-      ownerId,
-      build.name,
-      build.notes,
-      JSON.stringify(build.slots),
-      build.targetPowerKw ?? null,
-      build.fuelOctane ?? null,
-      build.chassisModelYear ?? null,
-      build.vin ?? null,
-    )
-  }
+/** The demo sheets go through the sheet service, so each is judged as a saved sheet is and the list shows its verdict and labour. */
+async function seedBuilds(sheets: Services['sheets'], file: string, owner: User) {
+  for (const build of demoBuildsSchema.parse(JSON.parse(readFileSync(file, 'utf8')))) await sheets.create(build, owner)
 }
 
 const SEEDED_KEY = 'demo-seeded'
@@ -108,7 +95,7 @@ async function seedStock(stock: Services['stock'], file: string) {
 
 export async function seedDemo(
   dataSource: DataSource,
-  services: Pick<Services, 'users' | 'imports' | 'graphIndex' | 'stock' | 'vehicles'>,
+  services: Pick<Services, 'users' | 'imports' | 'graphIndex' | 'stock' | 'vehicles' | 'sheets'>,
   demoDir: string,
 ): Promise<boolean> {
   const { users, imports } = services
@@ -148,11 +135,10 @@ export async function seedDemo(
   for (const vehicle of JSON.parse(readFileSync(path.join(demoDir, 'vehicles.json'), 'utf8')) as unknown[]) {
     await services.vehicles.create(vehicleInputSchema.parse(vehicle))
   }
-  await inTransaction(dataSource, (db) => {
-    seedProposedLinks(db, path.join(demoDir, 'proposed-links.csv'))
-    seedBuilds(db, path.join(demoDir, 'builds.json'), tech.id)
-    db.prepare('INSERT INTO app_setting (key, value) VALUES (?, ?)').run(SEEDED_KEY, new Date().toISOString())
-  })
+  await inTransaction(dataSource, (db) => seedProposedLinks(db, path.join(demoDir, 'proposed-links.csv')))
   services.graphIndex.invalidate()
+  await seedBuilds(services.sheets, path.join(demoDir, 'builds.json'), tech)
+  // Written last: a start cut short before here is reported at the next start.
+  await settings.insert({ key: SEEDED_KEY, value: new Date().toISOString() })
   return true
 }

@@ -81,6 +81,19 @@ describe('/api/builds (build sheets)', () => {
     expect(names).toContain('TK20V head on a TK18 block')
   })
 
+  it('lists the demo sheets judged as saved: each with the verdict and labour its evaluation gives', async () => {
+    const tech = await t.signIn('tech')
+    const listed = (await tech.get('/api/builds')).body as { id: number; verdict: string | null; labourMinutes: number | null }[]
+    expect(listed.length).toBeGreaterThan(1)
+    for (const sheet of listed) {
+      const opened = (await tech.get(`/api/builds/${sheet.id}`)).body
+      const evaluated = (await tech.post('/api/builds/evaluate').send({ slots: opened.slots, ...context(opened) })).body
+      const minutes = evaluated.modifications.reduce((sum: number, m: { timeMinutes: number | null }) => sum + (m.timeMinutes ?? 0), 0)
+      expect(sheet).toMatchObject({ verdict: evaluated.verdict, labourMinutes: minutes })
+    }
+    expect(new Set(listed.map((sheet) => sheet.verdict)).size).toBeGreaterThan(1)
+  })
+
   it('answers 403 to a counter, who may evaluate but not save', async () => {
     const counter = await t.signIn('counter')
     expect((await counter.get('/api/builds')).status).toBe(403)
@@ -99,3 +112,15 @@ describe('/api/builds (build sheets)', () => {
     expect((await tech.get('/api/builds')).body.length).toBe(before)
   })
 })
+
+/** The build context a saved sheet carries, as the planner sends it. */
+function context(sheet: { targetPowerKw: number | null; fuelOctane: number | null; chassisModelYear: number | null; vin: string | null }) {
+  return Object.fromEntries(
+    Object.entries({
+      targetPowerKw: sheet.targetPowerKw,
+      fuelOctane: sheet.fuelOctane,
+      chassisModelYear: sheet.chassisModelYear,
+      vin: sheet.vin,
+    }).filter(([, value]) => value !== null),
+  )
+}
