@@ -50,7 +50,7 @@ export function createServices(dataSource: DataSource, config: AppConfig, rules:
   const outbox = new OutboxService(outboxRows, new Mailer({ smtpUrl: config.smtpUrl, mailDir: config.mailDir, from: config.mailFrom }))
   const fieldReports = new FieldReportService(new FieldReportRepository(databaseOf(dataSource)), parts, photos)
   const fieldReportNotices = new FieldReportNotices(outbox, outboxRows, users, fieldReports, config.publicUrl)
-  const completion = new BuildCompletionService(dataSource, parts, graphIndex, evaluation, modifications)
+  const completion = new BuildCompletionService(parts, graphIndex, evaluation, modifications)
   const shopSettings = new ShopSettingsService(databaseOf(dataSource))
   const sheets = new BuildSheetService(dataSource, parts, evaluation)
   return {
@@ -66,7 +66,7 @@ export function createServices(dataSource: DataSource, config: AppConfig, rules:
     fitment: new FitmentService(
       parts,
       graphIndex,
-      new InferredFits(dataSource, rules),
+      new InferredFits(rules),
       modifications,
       new FieldReportEvidence(databaseOf(dataSource)),
       stockIndex,

@@ -1,9 +1,7 @@
-import type { DataSource } from 'typeorm'
 import { BUILD_SLOTS, isSlotId, matingSlots, type SlotId } from '../../shared/build-template'
 import { AppError } from '../errors/app-error'
 import type { Candidate, Completion } from '../../shared/schemas/build'
 import { SKILL_LEVELS, worstVerdict, type Relation } from '../../shared/schemas/fitment'
-import type { PartAttributes } from '../../shared/schemas/part-attributes'
 import type { BuildEvaluationService, ResolvedBuild } from './build-evaluation.service'
 import type { FitGraph, FitGraphIndex } from '../fitment/fit-graph'
 import type { Part } from '../../shared/schemas/part'
@@ -12,31 +10,14 @@ import type { PartService } from '../catalogue/part.service'
 import { candidatePreference, type Preference } from './candidate-preference'
 import type { Caution } from '../../shared/schemas/build'
 
-type Row = { id: number; partNumber: string; attributes: string; yearTo: number | null }
+/** A candidate as the fit graph holds it: its id, number and rule class (attributes and last year). */
+type Row = { id: number; partNumber: string; ruleClass: number }
 
-/**
- * Reads one request can share across many completions (fill the gaps asks
- * dozens): the catalogue rows of a kind and the skill of a modification.
- */
+/** Reads one request can share across many completions (fill the gaps asks dozens): the skill of a modification. */
 export class CompletionReads {
-  private readonly rows = new Map<SlotId, Promise<Row[]>>()
   private readonly skills = new Map<string, Promise<number>>()
 
-  constructor(
-    private readonly dataSource: DataSource,
-    private readonly modifications: ModificationService,
-  ) {}
-
-  rowsOf(kind: SlotId): Promise<Row[]> {
-    let rows = this.rows.get(kind)
-    if (!rows) {
-      rows = this.dataSource.query('SELECT id, partNumber, attributes, yearTo FROM part WHERE kind = ? ORDER BY partNumber', [
-        kind,
-      ]) as Promise<Row[]>
-      this.rows.set(kind, rows)
-    }
-    return rows
-  }
+  constructor(private readonly modifications: ModificationService) {}
 
   /** Harder work weighs more, so the easiest way to a working build comes first. */
   skillWeight(name: string): Promise<number> {
@@ -53,7 +34,6 @@ const SKILL_WEIGHT = Object.fromEntries(SKILL_LEVELS.map((level, index) => [leve
 
 export class BuildCompletionService {
   constructor(
-    private readonly dataSource: DataSource,
     private readonly parts: PartService,
     private readonly graphIndex: FitGraphIndex,
     private readonly evaluation: BuildEvaluationService,
@@ -78,7 +58,7 @@ export class BuildCompletionService {
 
   /** A fresh set of shared reads, for one request. */
   reads(): CompletionReads {
-    return new CompletionReads(this.dataSource, this.modifications)
+    return new CompletionReads(this.modifications)
   }
 
   /** Candidates for the empty slots of a resolved build (only those in `only`, when given). */
@@ -116,7 +96,7 @@ export class BuildCompletionService {
       ...build,
       parts: {
         ...build.parts,
-        [slot]: { partNumber: row.partNumber, attributes: JSON.parse(row.attributes) as PartAttributes, yearTo: row.yearTo } as Part,
+        [slot]: { partNumber: row.partNumber, ...graph.ruleClasses.input(row.ruleClass) } as Part,
       },
       ids: { ...build.ids, [slot]: row.id },
     }
@@ -135,21 +115,23 @@ export class BuildCompletionService {
 
   /** The best `limit` candidates for a slot, fewest and easiest modifications first, and how many fit in all. */
   private async candidatesFor(slot: SlotId, build: ResolvedBuild, graph: FitGraph, reads: CompletionReads, limit: number) {
-    const rows = await reads.rowsOf(slot)
+    // Every part of the slot's kind, in part-number order, from the graph rather than the part table.
+    const rows: Row[] = graph
+      .partsOfKind(slot)
+      .map((id) => ({ id, partNumber: graph.partNumberOf(id), ruleClass: graph.ruleClasses.classOf(id) }))
     type Judgement = { relation: Relation; modifications: string[]; reasons: string[]; byRule: boolean; preference: Preference } | null
     // The build's own cautions without the candidate: only what a candidate adds counts against it.
     const baseline = await this.evaluation.buildCautions(this.evaluation.prepare(build).facts)
     const accepted: ({ row: Row } & NonNullable<Judgement>)[] = []
     const neighbourIds = matingSlots(slot).flatMap((other) => (build.ids[other] === undefined ? [] : [build.ids[other]!]))
     // Without a reviewed link the rules decide, and parts with the same attributes get the same answer.
-    const byAttributes = new Map<string, Judgement>()
+    const byAttributes = new Map<number, Judgement>()
     for (const row of rows) {
       const linked = neighbourIds.some((id) => graph.linkBetween(row.id, id))
-      const memoKey = `${row.yearTo}|${row.attributes}`
-      let judgement = linked ? undefined : byAttributes.get(memoKey)
+      let judgement = linked ? undefined : byAttributes.get(row.ruleClass)
       if (judgement === undefined) {
         judgement = await this.judge(slot, row, build, graph, baseline)
-        if (!linked) byAttributes.set(memoKey, judgement)
+        if (!linked) byAttributes.set(row.ruleClass, judgement)
       }
       if (judgement) accepted.push({ row, ...judgement })
     }

@@ -59,7 +59,7 @@ export class FitmentService {
       groups.push({ kind: group.kind, relation: group.relation, source: group.source, total: group.fits.length, found })
     }
     if (query.inferred && isSlotId(entity.kind)) {
-      const answer = await this.inferred.find(entity.kind, entity.attributes, entity.yearTo, new Set([...members, ...reviewed.keys()]), {
+      const answer = await this.inferred.find(graph, entity.id, entity.kind, new Set([...members, ...reviewed.keys()]), {
         relation: query.relation,
         kind: query.kind,
         offset,

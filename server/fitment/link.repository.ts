@@ -5,13 +5,14 @@ import type { FitDetails, IdentityDetail, LinkDetail } from './graph/fit-details
 
 export type LinkGraphRow = { id: number; a: number; b: number; relation: Relation; status: ReviewStatus }
 export type IdentityGraphRow = { id: number; a: number; b: number }
-export type PartGraphRow = { id: number; partNumber: string; kind: PartKind }
+/** `attributes` is the stored JSON text, as the rules' classes key it. */
+export type PartGraphRow = { id: number; partNumber: string; kind: PartKind; attributes: string; yearTo: number | null }
 type DetailRow = { id: number; note: string; source: LinkSource }
 type ModificationNameRow = { linkId: number; name: string }
 
 const LINK_GRAPH_COLUMNS = 'SELECT "id", "partAId" AS "a", "partBId" AS "b", "relation", "status" FROM link'
 const IDENTITY_GRAPH_COLUMNS = 'SELECT "id", "partAId" AS "a", "partBId" AS "b" FROM part_identity'
-const PART_GRAPH_COLUMNS = 'SELECT "id", "partNumber", "kind" FROM part'
+const PART_GRAPH_COLUMNS = 'SELECT "id", "partNumber", "kind", "attributes", "yearTo" FROM part'
 
 /**
  * The link, part_identity and link_modification tables as the fit graph reads

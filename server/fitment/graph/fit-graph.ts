@@ -1,6 +1,7 @@
 import { PART_KINDS, type PartKind } from '../../../shared/schemas/part-kinds'
 import { RELATIONS, REVIEW_STATUSES, type Relation, type ReviewStatus } from '../../../shared/schemas/fitment'
 import { EdgeStore, resized } from './edge-store'
+import { AttributeClasses } from './attribute-classes'
 import { IdentityClasses } from './identity-classes'
 import type { FitDetails } from './fit-details'
 
@@ -36,6 +37,8 @@ export class FitGraph {
   readonly links = new LinkStore()
   readonly identities = new EdgeStore()
   readonly byNumber = new Map<string, number>()
+  /** Parts by what the pair rules read of them, for inferring fits without reading the part table. */
+  readonly ruleClasses = new AttributeClasses()
   private readonly classes = new IdentityClasses(this.identities)
   private partNumbers: (string | undefined)[] = []
   private kinds = new Uint8Array(16)
@@ -70,14 +73,27 @@ export class FitGraph {
     return PART_KINDS[this.kinds[id] ?? 0]!
   }
 
-  setPart(id: number, partNumber: string, kind: PartKind) {
+  /** `attributes` is the part's stored JSON text: parts with the same text share a rule class. */
+  setPart(id: number, partNumber: string, kind: PartKind, attributes = '{}', yearTo: number | null = null) {
     const previous = this.partNumbers[id]
+    const previousKind = previous === undefined ? undefined : this.kinds[id]
     if (previous === undefined) this.partTotal++
     else if (previous !== partNumber && this.byNumber.get(previous) === id) this.byNumber.delete(previous)
     this.partNumbers[id] = partNumber
     if (id >= this.kinds.length) this.kinds = resized(this.kinds, Math.max(id + 1, this.kinds.length * 2))
-    this.kinds[id] = KIND_CODE.get(kind) ?? KIND_CODE.get('other')!
+    const kindCode = KIND_CODE.get(kind) ?? KIND_CODE.get('other')!
+    this.kinds[id] = kindCode
     this.byNumber.set(partNumber, id)
+    this.ruleClasses.set(id, kindCode, previousKind, attributes, yearTo)
+  }
+
+  /** The parts of a kind in part-number order, with their rule classes in `ruleClasses`. */
+  partsOfKind(kind: PartKind): readonly number[] {
+    return this.ruleClasses.partsOfKind(
+      KIND_CODE.get(kind)!,
+      (id) => (this.partNumbers[id] === undefined ? undefined : this.kinds[id]),
+      (id) => this.partNumbers[id] ?? '',
+    )
   }
 
   /** A removed part takes its links and identities with it (the database cascades the same way). */
@@ -92,6 +108,7 @@ export class FitGraph {
     })
     for (const identityId of identityIds) this.identities.remove(identityId)
     this.classes.refresh(ends)
+    this.ruleClasses.remove(id, this.kinds[id]!)
     if (this.byNumber.get(partNumber) === id) this.byNumber.delete(partNumber)
     this.partNumbers[id] = undefined
     this.partTotal--

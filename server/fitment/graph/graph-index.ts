@@ -103,7 +103,7 @@ export class FitGraphIndex {
     const repo = this.repository
     for (let after = 0; ;) {
       const rows = await repo.partPage(after, LOAD_PAGE)
-      for (const row of rows) graph.setPart(row.id, row.partNumber, row.kind)
+      for (const row of rows) graph.setPart(row.id, row.partNumber, row.kind, row.attributes, row.yearTo)
       if (rows.length < LOAD_PAGE) break
       after = rows[rows.length - 1]!.id
       await nextTurn()
@@ -139,7 +139,7 @@ export class FitGraphIndex {
       const rows = new Map((await repo.partsById(ids)).map((row) => [row.id, row]))
       for (const id of ids) {
         const row = rows.get(id)
-        if (row) graph.setPart(id, row.partNumber, row.kind)
+        if (row) graph.setPart(id, row.partNumber, row.kind, row.attributes, row.yearTo)
         else graph.removePart(id)
       }
     }
