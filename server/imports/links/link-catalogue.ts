@@ -26,42 +26,55 @@ export type IdentityRecord = {
 }
 
 /**
- * What a links import weighs its rows against, read in a few whole-table
- * queries: looking parts and pairs up in memory is what keeps a 100,000-row
- * import fast.
+ * What a links import weighs its rows against, looked up row by row through
+ * the pair and part-number indexes (memoised), so the work follows the size of
+ * the file, not of the catalogue: a 100-row file never reads a million links.
+ * Only the modification names, a small table, are read whole.
  */
 export function loadLinkCatalogue(db: Database.Database) {
-  const partIds = new Map<string, number>()
-  const keys = new Map<string, string>()
-  for (const [id, partNumber, partKey] of db.prepare('SELECT id, partNumber, partKey FROM part').raw().all() as [
-    number,
-    string,
-    string,
-  ][]) {
-    partIds.set(partNumber, id)
-    keys.set(partKey, partNumber)
-  }
+  const partById = db.prepare('SELECT id FROM part WHERE partNumber = ?').pluck()
+  const partByKey = db.prepare('SELECT partNumber FROM part WHERE partKey = ? ORDER BY partNumber LIMIT 1').pluck()
+  const linkByPair = db.prepare('SELECT * FROM link WHERE partAId = ? AND partBId = ?')
+  const modsOfLink = db.prepare('SELECT linkId, modificationId FROM link_modification WHERE linkId = ?')
+  const identityByPair = db.prepare('SELECT * FROM part_identity WHERE partAId = ? AND partBId = ?')
+
   const modificationIds = new Map<string, number>()
   const modificationNames = new Map<number, string>()
   for (const [id, name] of db.prepare('SELECT id, name FROM modification').raw().all() as [number, string][]) {
     modificationIds.set(name, id)
     modificationNames.set(id, name)
   }
-  const modsByLink = new Map<number, LinkModRecord[]>()
-  for (const mod of db.prepare('SELECT linkId, modificationId FROM link_modification').all() as LinkModRecord[]) {
-    const list = modsByLink.get(mod.linkId)
-    if (list) list.push(mod)
-    else modsByLink.set(mod.linkId, [mod])
-  }
-  const links = new Map<string, StoredLink>()
-  for (const record of db.prepare('SELECT * FROM link').all() as LinkRecord[]) {
-    const mods = modsByLink.get(record.id) ?? []
+  const partIds = memo((number: string) => partById.get(number) as number | undefined)
+  const links = memo((pair: string): StoredLink | undefined => {
+    const [a, b] = pair.split(':').map(Number)
+    const record = linkByPair.get(a, b) as LinkRecord | undefined
+    if (!record) return undefined
+    const mods = modsOfLink.all(record.id) as LinkModRecord[]
     const names = mods.map((mod) => modificationNames.get(mod.modificationId) ?? '').sort()
-    links.set(`${record.partAId}:${record.partBId}`, { record, mods, names })
+    return { record, mods, names }
+  })
+  const identities = memo((pair: string) => {
+    const [a, b] = pair.split(':').map(Number)
+    return identityByPair.get(a, b) as IdentityRecord | undefined
+  })
+  return {
+    partIds,
+    numberForKey: (key: string) => partByKey.get(key) as string | undefined,
+    modificationIds,
+    links,
+    identities,
   }
-  const identities = new Map<string, IdentityRecord>()
-  for (const record of db.prepare('SELECT * FROM part_identity').all() as IdentityRecord[]) {
-    identities.set(`${record.partAId}:${record.partBId}`, record)
+}
+
+/** A lookup asked once per key: a file names the same part on many rows. */
+function memo<T>(read: (key: string) => T): { get(key: string): T } {
+  const known = new Map<string, T>()
+  return {
+    get(key) {
+      if (known.has(key)) return known.get(key) as T
+      const value = read(key)
+      known.set(key, value)
+      return value
+    },
   }
-  return { partIds, numberForKey: (key: string) => keys.get(key), modificationIds, links, identities }
 }

@@ -83,15 +83,10 @@ function fieldChanges(before: PartInput | null, after: PartInput): FieldChange[]
  * Synchronous on the raw connection so a commit can plan and write in one go.
  */
 export function planParts(db: Database.Database, rows: PartRows): PartsPlan {
-  const records = db.prepare('SELECT * FROM part').all() as PartRecord[]
-  const marksByPart = new Map<number, MarkRecord[]>()
-  for (const mark of db.prepare('SELECT * FROM part_mark ORDER BY id').all() as MarkRecord[]) {
-    const list = marksByPart.get(mark.partId)
-    if (list) list.push(mark)
-    else marksByPart.set(mark.partId, [mark])
-  }
-  const byNumber = new Map(records.map((record) => [record.partNumber, record]))
-  const byKey = new Map(records.map((record) => [record.partKey, record]))
+  // Row by row through the number, key and mark indexes: the work follows the file, not the catalogue.
+  const partByNumber = db.prepare('SELECT * FROM part WHERE partNumber = ?')
+  const partByKey = db.prepare('SELECT * FROM part WHERE partKey = ? ORDER BY partNumber LIMIT 1')
+  const marksOf = db.prepare('SELECT * FROM part_mark WHERE partId = ? ORDER BY id')
   const header = rows.header!
   const plan: PartsPlan = { changes: new ChangeList(), issues: [], creates: [], updates: [] }
   const issues = rows.issues.clone()
@@ -102,9 +97,9 @@ export function planParts(db: Database.Database, rows: PartRows): PartsPlan {
   for (const entry of rows.entries()) {
     const { part } = entry
     const [firstRow] = entry.rows as [number]
-    const record = byNumber.get(part.partNumber)
+    const record = partByNumber.get(part.partNumber) as PartRecord | undefined
     if (!record) {
-      const sameKey = byKey.get(normalisePartCode(part.partNumber))
+      const sameKey = partByKey.get(normalisePartCode(part.partNumber)) as PartRecord | undefined
       if (sameKey) {
         reject(
           entry,
@@ -118,7 +113,7 @@ export function planParts(db: Database.Database, rows: PartRows): PartsPlan {
       plan.changes.create(firstRow, part.partNumber, () => fieldChanges(null, part))
       continue
     }
-    const marks = marksByPart.get(record.id) ?? []
+    const marks = marksOf.all(record.id) as MarkRecord[]
     const stored = storedPart(record, marks)
     const checked = checkPart(mergeAbsentColumns(stored, part, header))
     if (!checked.ok) {
