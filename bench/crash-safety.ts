@@ -3,10 +3,18 @@
  * import, kills the child with SIGKILL part-way, and checks that the database
  * passes PRAGMA integrity_check and holds the parts wholly from before or
  * wholly from after the import. Run: `npx tsx bench/crash-safety.ts [--rounds 5]`.
- * A check script, not a test: it takes a minute and needs the machine to itself.
+ * A check script, not a test: it takes a minute or two and needs the machine to itself.
+ *
+ * The write runs as one synchronous transaction, so the server says nothing
+ * while it runs; from outside it shows as the write-ahead log growing (the
+ * transaction's pages spill there before the commit). A first, uncut import
+ * measures how far the log grows during a whole write; each round then kills
+ * the server once the log has grown by a larger share of that, so the kills
+ * land across the open transaction. A round whose parts are wholly from before
+ * although the log had grown was killed inside the transaction.
  */
 import { spawn, type ChildProcess } from 'node:child_process'
-import { mkdtempSync, readdirSync, rmSync } from 'node:fs'
+import { existsSync, mkdtempSync, readdirSync, rmSync, statSync } from 'node:fs'
 import { tmpdir } from 'node:os'
 import path from 'node:path'
 import Database from 'better-sqlite3'
@@ -88,55 +96,115 @@ function check(dbPath: string, before: number, round: number): string {
   }
 }
 
+function walSize(dbPath: string): number {
+  const wal = `${dbPath}-wal`
+  return existsSync(wal) ? statSync(wal).size : 0
+}
+
+function countParts(dbPath: string): number {
+  const db = new Database(dbPath, { readonly: true })
+  try {
+    return (db.prepare('SELECT count(*) AS n FROM part').get() as { n: number }).n
+  } finally {
+    db.close()
+  }
+}
+
+/** Starts a commit of `round`'s file and reads the answer's lines until the write phase begins (or the answer comes). */
+async function startImport(base: string, session: Session, round: number) {
+  const form = new FormData()
+  form.set('type', 'parts')
+  form.set('mode', 'commit')
+  form.set('file', new Blob([partsCsv(round)], { type: 'text/csv' }), 'crash.csv')
+  const response = await fetch(`${base}/api/imports`, {
+    method: 'POST',
+    headers: { cookie: session.cookie, origin: base, 'x-csrf-token': session.token, accept: 'application/x-ndjson' },
+    body: form,
+  })
+  const reader = response.body!.getReader()
+  const decoder = new TextDecoder()
+  let seen = ''
+  const answered = () => /"type":"result"/.test(seen)
+  for (;;) {
+    const { done, value } = await reader.read()
+    if (done) break
+    seen += decoder.decode(value, { stream: true })
+    if (/"phase":"write"/.test(seen) || answered()) break
+  }
+  /** Reads on until the answer (for the uncut import). */
+  const finish = async () => {
+    for (;;) {
+      if (answered()) return true
+      const { done, value } = await reader.read()
+      if (done) return answered()
+      seen += decoder.decode(value, { stream: true })
+    }
+  }
+  return { reader, answered, finish }
+}
+
+/** Polls the log's size every millisecond until it has grown by `bytes` past `from`, or `give up` ms pass. */
+async function logGrown(dbPath: string, from: number, bytes: number, giveUpMs: number): Promise<number> {
+  const started = Date.now()
+  for (;;) {
+    const grown = walSize(dbPath) - from
+    if (grown >= bytes || Date.now() - started > giveUpMs) return grown
+    await new Promise((resolve) => setTimeout(resolve, 1))
+  }
+}
+
 const dir = mkdtempSync(path.join(tmpdir(), 'fitwright-crash-'))
 const dbPath = path.join(dir, 'crash.sqlite')
 try {
+  // Round 0, uncut: how far the log grows while one whole import writes.
+  let fullGrowth = 0
+  {
+    const { child, base } = await startServer(dbPath)
+    const session = await signIn(base)
+    const walBefore = walSize(dbPath)
+    const started = Date.now()
+    const run = await startImport(base, session, 0)
+    let peak = 0
+    const watching = setInterval(() => (peak = Math.max(peak, walSize(dbPath) - walBefore)), 1)
+    const ok = await run.finish()
+    clearInterval(watching)
+    fullGrowth = Math.max(peak, walSize(dbPath) - walBefore)
+    child.kill('SIGKILL')
+    await new Promise((resolve) => child.once('exit', resolve))
+    if (!ok) throw new Error('The uncut import gave no answer.')
+    console.log(
+      `uncut import: ${ROWS.toLocaleString('en')} parts in ${Date.now() - started} ms; the log grew by ${(fullGrowth / 1024).toFixed(0)} KB during the write`,
+    )
+  }
+  let inside = 0
   for (let round = 1; round <= rounds; round += 1) {
     const { child, base } = await startServer(dbPath)
     const session = await signIn(base).catch((error: unknown) => {
       child.kill('SIGKILL')
       throw error
     })
-    const before = (() => {
-      const db = new Database(dbPath, { readonly: true })
-      const n = (db.prepare('SELECT count(*) AS n FROM part').get() as { n: number }).n
-      db.close()
-      return n
-    })()
-    const form = new FormData()
-    form.set('type', 'parts')
-    form.set('mode', 'commit')
-    form.set('file', new Blob([partsCsv(round)], { type: 'text/csv' }), 'crash.csv')
-    // The answer streams its phases. The write runs as one synchronous transaction, so its own progress line
-    // only leaves after the commit: the kill is timed from the first line instead, later each round, so the
-    // rounds fall across reading, checking and writing.
-    const killAfterMs = (round - 1) * 150
-    const response = await fetch(`${base}/api/imports`, {
-      method: 'POST',
-      headers: { cookie: session.cookie, origin: base, 'x-csrf-token': session.token, accept: 'application/x-ndjson' },
-      body: form,
-    })
-    const reader = response.body!.getReader()
-    let seen = ''
-    let answer: { status: number } | null = null
-    for (;;) {
-      const { done, value } = await reader.read()
-      if (done) break
-      seen += new TextDecoder().decode(value)
-      if (/"type":"result"/.test(seen)) answer = { status: 201 }
-      if (/"type":"progress"/.test(seen) || answer) break
-    }
-    await new Promise((resolve) => setTimeout(resolve, killAfterMs))
+    const before = countParts(dbPath)
+    const walBefore = walSize(dbPath)
+    const run = await startImport(base, session, round)
+    // Spread across the write: round r waits for r / (rounds + 1) of the uncut import's growth.
+    const target = Math.max(1, Math.floor((fullGrowth * round) / (rounds + 1)))
+    const grown = run.answered() ? 0 : await logGrown(dbPath, walBefore, target, 60_000)
+    const answeredBeforeKill = run.answered()
     const exited = new Promise((resolve) => child.once('exit', resolve))
     child.kill('SIGKILL')
     await exited
-    await reader.cancel().catch(() => undefined)
+    await run.reader.cancel().catch(() => undefined)
     const state = check(dbPath, before, round)
+    const wasInside = state === 'before' && grown > 0
+    if (wasInside) inside++
     const leftovers = readdirSync(path.join(dir, 'uploads-in-progress')).length
     console.log(
-      `round ${round}: killed ${killAfterMs} ms after the first progress line (${answer ? 'after the commit answered' : 'before any answer'}); integrity ok, parts wholly ${state}; ${leftovers} upload file(s) left until the next start`,
+      `round ${round}: killed once the log had grown by ${(grown / 1024).toFixed(0)} KB of the ${(fullGrowth / 1024).toFixed(0)} KB a whole write adds` +
+        `${answeredBeforeKill ? ' (the commit had answered)' : ''}; integrity ok, parts wholly ${state}` +
+        `${wasInside ? ' (killed inside the open write transaction: rolled back)' : ''}; ${leftovers} upload file(s) left until the next start`,
     )
   }
+  console.log(`${inside} of ${rounds} kills landed inside the open write transaction; every round left the database whole`)
   const { child } = await startServer(dbPath)
   const leftovers = readdirSync(path.join(dir, 'uploads-in-progress')).length
   child.kill('SIGKILL')

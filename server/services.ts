@@ -41,7 +41,8 @@ export function createServices(dataSource: DataSource, config: AppConfig, rules:
   const parts = new PartService(dataSource)
   const graphIndex = new FitGraphIndex(dataSource)
   const modifications = new ModificationService(dataSource)
-  const evaluation = new BuildEvaluationService(dataSource, parts, graphIndex, rules, modifications)
+  const evidence = new FieldReportEvidence(databaseOf(dataSource))
+  const evaluation = new BuildEvaluationService(dataSource, parts, graphIndex, rules, modifications, evidence)
   const photos = new PhotoStorage(config.uploadDir)
   const stockRows = new StockRepository(databaseOf(dataSource))
   const stockIndex = new StockIndex(stockRows)
@@ -63,14 +64,7 @@ export function createServices(dataSource: DataSource, config: AppConfig, rules:
     partLookup: new PartLookupService(dataSource, parts),
     graphIndex,
     modifications,
-    fitment: new FitmentService(
-      parts,
-      graphIndex,
-      new InferredFits(rules),
-      modifications,
-      new FieldReportEvidence(databaseOf(dataSource)),
-      stockIndex,
-    ),
+    fitment: new FitmentService(parts, graphIndex, new InferredFits(rules), modifications, evidence, stockIndex),
     graph: new GraphService(parts, graphIndex),
     substitutes: new SubstitutesService(parts, graphIndex),
     evaluation,

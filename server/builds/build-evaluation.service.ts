@@ -2,7 +2,8 @@ import type { DataSource } from 'typeorm'
 import { BUILD_SLOTS, MATING_PAIRS, type SlotId } from '../../shared/build-template'
 import { DEFERENCE } from '../../shared/advisory'
 import { validateVin, vinModelYear } from '../../shared/engineering/vin'
-import type { AppliedModification, BuildContext, Caution, EvaluateRequest, Evaluation } from '../../shared/schemas/build'
+import type { AppliedModification, BuildContext, Caution, EvaluateRequest, Evaluation, PairJudgement } from '../../shared/schemas/build'
+import type { FieldReportEvidence } from '../field-reports/field-report-evidence'
 import { worstVerdict } from '../../shared/schemas/fitment'
 import type { Part } from '../../shared/schemas/part'
 import type { PartAttributes } from '../../shared/schemas/part-attributes'
@@ -47,6 +48,7 @@ export class BuildEvaluationService {
     private readonly graphIndex: FitGraphIndex,
     private readonly rules: RuleBook,
     private readonly modifications: ModificationService,
+    private readonly evidence: FieldReportEvidence,
   ) {}
 
   async resolve(request: EvaluateRequest): Promise<ResolvedBuild> {
@@ -87,6 +89,15 @@ export class BuildEvaluationService {
     return summariseOutcomes(await this.rules.evaluateBuild(facts)).cautions
   }
 
+  /** The pairs as answered: with the field reports on their deciding links, without the server's working. */
+  private async withEvidence(pairs: JudgedPair[]): Promise<PairJudgement[]> {
+    const evidence = await this.evidence.forLinks(pairs.flatMap((pair) => (pair.linkId === undefined ? [] : [pair.linkId])))
+    return pairs.map(({ rules: _rules, linkModifications: _mods, linkId, ...pair }) => ({
+      ...pair,
+      fieldReports: (linkId !== undefined && evidence.get(linkId)) || pair.fieldReports,
+    }))
+  }
+
   async evaluate(request: EvaluateRequest): Promise<Evaluation> {
     const build = await this.resolve(request)
     const graph = await this.graphIndex.snapshot()
@@ -118,7 +129,7 @@ export class BuildEvaluationService {
       verdict: pairs.length ? worstVerdict(pairs.map((pair) => pair.relation)) : 'unknown',
       compliance: judgeCompliance(cautions, build.context.chassisModelYear),
       missingSlots: BUILD_SLOTS.filter((slot) => !build.parts[slot.id]).map((slot) => slot.id),
-      pairs: pairs.map(({ rules: _rules, linkModifications: _mods, ...pair }) => pair),
+      pairs: await this.withEvidence(pairs),
       modifications: applied.map(({ ruleExtraParts: _extra, ...modification }) => modification),
       partsList,
       cautions,

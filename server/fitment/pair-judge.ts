@@ -6,7 +6,8 @@ import type { Facts, RuleBook } from '../reasoning/rule-book'
 import { summariseOutcomes, type RuleSummary } from '../reasoning/rule-summary'
 import { decidingReason, orderEvidence } from './deciding-reason'
 
-export type JudgedPair = PairJudgement & { rules: RuleSummary; linkModifications: string[] }
+/** `linkId` is the deciding link's, for its field-report evidence; it stays on the server. */
+export type JudgedPair = PairJudgement & { rules: RuleSummary; linkModifications: string[]; linkId?: number }
 
 /**
  * Judges one filled mating pair: a reviewed link (looking through identical
@@ -45,8 +46,10 @@ export async function judgePair(
       ruleIds: summary.ruleIds,
       modifications,
       explanation,
+      fieldReports: { confirmed: 0, contradicted: 0 },
       rules: summary,
       linkModifications: modifications,
+      linkId: found.link.id,
     }
   }
   const relation: Verdict = summary.relation ?? 'unknown'
@@ -69,6 +72,7 @@ export async function judgePair(
     modifications: summary.modifications.map((m) => m.name),
     explanation,
     rules: summary,
+    fieldReports: { confirmed: 0, contradicted: 0 },
     linkModifications: [],
   }
 }

@@ -56,6 +56,8 @@ export const pairJudgementSchema = z.object({
   ruleIds: z.array(z.string()),
   modifications: z.array(z.string()),
   explanation: z.array(explanationStepSchema),
+  /** Field reports on the reviewed link that decided the pair (none when the rules decided). */
+  fieldReports: z.object({ confirmed: z.number().int(), contradicted: z.number().int() }).default({ confirmed: 0, contradicted: 0 }),
 })
 export type PairJudgement = z.infer<typeof pairJudgementSchema>
 

@@ -62,6 +62,18 @@ describe.skipIf(!run)('a tech reports a fit with a photo, an editor approves it,
     const row = page.locator('[data-part="TM-BL-2000"]').first()
     await expect.poll(() => row.textContent(), within).toContain('confirmed by 1 field report')
     await saveScreenshot(page, 'field-report-part-page')
+    await row.getByRole('button', { name: /Why/ }).click()
+    const why = page.getByRole('dialog')
+    await expect.poll(() => why.textContent(), within).toContain('confirmed by 1 field report')
+    await page.keyboard.press('Escape')
+    await why.waitFor({ state: 'hidden' })
+
+    await page.goto(`${server.url}/planner?head=TM-HD-1810&block=TM-BL-2000`)
+    const pairs = page.getByRole('region', { name: /Mating pairs/ })
+    await expect.poll(() => pairs.textContent(), within).toContain('confirmed by 1 field report')
+    await saveScreenshot(page, 'field-report-build-pair')
+
+    await page.goto(`${server.url}/parts/TM-HD-1810?kind=block`)
     await row.getByRole('link', { name: 'confirmed by 1 field report' }).click()
     await page.waitForURL(/\/field-reports\?from=TM-HD-1810&to=TM-BL-2000/)
     await expect.poll(() => page.getByRole('table', { name: 'Field reports' }).textContent(), within).toContain('Approved')

@@ -53,6 +53,7 @@ export function makePair(
     ruleIds: [],
     modifications: [],
     explanation: [{ type: 'rule', text: `${label}: ${relation}` }],
+    fieldReports: { confirmed: 0, contradicted: 0 },
   }
 }
 

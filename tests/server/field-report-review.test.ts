@@ -54,6 +54,14 @@ describe('approving a field report', () => {
     expect(await fitOf('TM-HD-2000', 'TM-BL-1800')).toMatchObject({ fieldReports: { confirmed: 1, contradicted: 0 } })
     // Contradicted, never silently changed: the link still says fits.
     expect(await fitOf('TM-HD-1800', 'TM-BL-1800')).toMatchObject({ relation: 'fits', fieldReports: { confirmed: 0, contradicted: 1 } })
+    // A build with the confirmed pair says so on the pair, and a rule-decided pair carries no report.
+    const build = (
+      await editor.post('/api/builds/evaluate').send({ slots: { head: 'TM-HD-1810', block: 'TM-BL-2000', 'head-gasket': 'TM-HG-2000' } })
+    ).body as { pairs: { slots: string[]; decidedBy: string; fieldReports: { confirmed: number; contradicted: number } }[] }
+    const headOnBlock = build.pairs.find((pair) => pair.slots.includes('head') && pair.slots.includes('block'))
+    expect(headOnBlock).toMatchObject({ decidedBy: 'link', fieldReports: { confirmed: 1, contradicted: 0 } })
+    const byRule = build.pairs.find((pair) => pair.decidedBy === 'rule')
+    expect(byRule?.fieldReports).toEqual({ confirmed: 0, contradicted: 0 })
 
     const links = (await editor.get('/api/links?part=TM-HD-1810')).body.items as { id: number }[]
     const link = links.find((item) => item.id === approved.body.links.created[0])
