@@ -2,6 +2,7 @@ import type { SlotId } from '../../shared/build-template'
 import { staticCompressionRatio } from '../../shared/engineering/compression'
 import { displacementCc } from '../../shared/engineering/displacement'
 import { checkHeadBolt, spacerFix, type HeadBoltInput, type ThreadMaterial } from '../../shared/engineering/fasteners'
+import { checkInjectorCalibration, type CalibrationStatus } from '../../shared/engineering/injector-calibration'
 import { injectorHeadroom } from '../../shared/engineering/injectors'
 import { checkQuench, type QuenchStatus } from '../../shared/engineering/quench'
 import { beltTeethForCentre, centreDistanceForBeltMm } from '../../shared/engineering/timing-belt'
@@ -33,6 +34,13 @@ export type FigureFacts = {
   timing?: { centreMm: number; centreShiftMm?: number; centreShiftAbsMm?: number; beltTeethNeeded?: number }
   injector?: { neededCcMin: number; availableCcMin: number; headroomPct: number; railPressureBar: number }
   quench?: { mm: number; status: QuenchStatus; minMm: number; maxMm: number }
+  injectorCalibration?: {
+    status: CalibrationStatus
+    mismatchPct: number
+    mismatchAbsPct: number
+    tolerancePct: number
+    calibratedCcMin: number
+  }
   engineModelYear?: number
   fuelSystemOpened?: boolean
   electricsTouched?: boolean
@@ -158,6 +166,26 @@ function injector(parts: SlotParts, context: BuildContext): FigureFacts['injecto
   }
 }
 
+/** The fitted injectors against the flow the control unit's fuel map was calibrated for. */
+function injectorCalibration(parts: SlotParts): FigureFacts['injectorCalibration'] {
+  const input = {
+    fittedFlowCcMin: num(parts.injector, 'flowCcMin'),
+    fittedRatedPressureBar: num(parts.injector, 'ratedPressureBar'),
+    calibratedFlowCcMin: num(parts.ecu, 'calibratedInjectorCcMin'),
+    calibratedPressureBar: num(parts.ecu, 'calibratedInjectorPressureBar'),
+  }
+  const { fittedFlowCcMin, fittedRatedPressureBar, calibratedFlowCcMin, calibratedPressureBar } = input
+  if (!fittedFlowCcMin || !fittedRatedPressureBar || !calibratedFlowCcMin || !calibratedPressureBar) return undefined
+  const check = checkInjectorCalibration({ fittedFlowCcMin, fittedRatedPressureBar, calibratedFlowCcMin, calibratedPressureBar })
+  return {
+    status: check.status,
+    mismatchPct: round(check.mismatchPct, 1),
+    mismatchAbsPct: round(Math.abs(check.mismatchPct), 1),
+    tolerancePct: check.tolerancePct,
+    calibratedCcMin: calibratedFlowCcMin,
+  }
+}
+
 /** Quench from the block's deck clearance and the gasket's compressed thickness, against the usual band. */
 function quench(parts: SlotParts): FigureFacts['quench'] {
   const deckClearanceMm = num(parts.block, 'deckClearanceMm')
@@ -197,6 +225,7 @@ export function computeFigures(parts: SlotParts, context: BuildContext = {}): Fi
   figures.timing = timing(parts)
   figures.injector = injector(parts, context)
   figures.quench = quench(parts)
+  figures.injectorCalibration = injectorCalibration(parts)
   if (parts.block?.yearTo) figures.engineModelYear = parts.block.yearTo
   figures.fuelSystemOpened = Boolean(parts['fuel-rail'] || parts.injector || parts['intake-manifold'])
   figures.electricsTouched = Boolean(parts.ecu || parts.harness)

@@ -77,6 +77,9 @@ export const attributeShapes = {
     vvlLampWhenAbsent: z.enum(['off', 'on']),
     connector: code,
     injectorImpedance: z.enum(['high', 'low']),
+    /** The injector flow the unit's fuel map assumes, and the pressure it is rated at. */
+    calibratedInjectorCcMin: mm,
+    calibratedInjectorPressureBar: mm,
   },
   harness: { connector: code, vvlLeads: z.boolean(), injectorPlug: code },
   'intake-manifold': { portPattern: code, fuelRailMount: code },

@@ -41,7 +41,7 @@ describe('POST /api/builds/evaluate on the demo builds', () => {
         'vvl-leads-insulate',
       ],
     ],
-    ['TK20V engine on a TK18 control unit, 1997 car', 'fits-with-modification', ['vvl-lockout']],
+    ['TK20V engine on a TK18 control unit, 1997 car', 'fits-with-modification', ['injector-data-rescale', 'vvl-lockout']],
     ['TK20V fixed-lift head with the OBD-II control unit', 'fits-with-modification', ['vvl-leads-insulate']],
     ['Domed pistons on regular fuel, too much power asked', 'does-not-fit', []],
     ['TK18 head on a TK20V block with torque-to-yield bolts', 'does-not-fit', ['oil-restrictor-remove-duplicate']],
@@ -53,6 +53,23 @@ describe('POST /api/builds/evaluate on the demo builds', () => {
     expect(response.status).toBe(200)
     expect(response.body.verdict).toBe(verdict)
     expect(response.body.modifications.map((m: { name: string }) => m.name).sort()).toEqual(modifications)
+  })
+
+  it('judges injectors against the flow the control unit is calibrated for, both at the same pressure', async () => {
+    // Hand-worked: TK20V injectors flow 250 cc/min and the TK18 unit is calibrated for 190 cc/min, both rated at 3.0 bar,
+    // so the pressures cancel and the mismatch is 250 / 190 - 1 = +31.6 %, beyond the tenth the fuel trims absorb
+    // (orifice law: flow proportional to the square root of the pressure drop, any fluid-mechanics text; the tenth is common practice).
+    const rich = (await evaluate({ slots: { ecu: 'TM-EC-1800', injector: 'TM-IN-2000' } })).body
+    const pair = rich.pairs.find((p: Pair) => p.slots.includes('ecu') && p.slots.includes('injector'))
+    expect(pair).toMatchObject({ relation: 'fits-with-modification', modifications: ['injector-data-rescale'] })
+    expect(pair.reason).toContain('31.6 % more than the 190 cc/min')
+    // The TK18 injector on its own unit: the same flow, no work.
+    const matched = (await evaluate({ slots: { ecu: 'TM-EC-1800', injector: 'TM-IN-1800' } })).body
+    expect(matched.verdict).toBe('fits')
+    expect(matched.modifications).toEqual([])
+    // Smaller than calibrated runs lean: 190 / 250 - 1 = -24 %.
+    const lean = (await evaluate({ slots: { ecu: 'TM-EC-2096', injector: 'TM-IN-1800' } })).body
+    expect(lean.pairs[0].reason).toContain('24 % less than the 250 cc/min')
   })
 
   it('together, the demo builds show every shipped rule file firing', async () => {
