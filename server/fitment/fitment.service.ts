@@ -99,6 +99,7 @@ export class FitmentService {
           modifications: found.modificationNames.flatMap((name) => mods.get(name) ?? []),
           explanation: found.explanation,
           fieldReports: evidence.get(chains.get(found)?.link.id ?? -1) ?? { confirmed: 0, contradicted: 0 },
+          ...linkPartsOf(graph, chains.get(found)),
           stock: this.stock.of(found.partId),
         },
       ]
@@ -153,4 +154,9 @@ function reviewedFound(target: number, chain: Chain): Found {
     modificationNames: [],
     explanation: [],
   }
+}
+
+/** The deciding link's two part numbers, for its field reports. */
+function linkPartsOf(graph: FitGraph, chain: Chain | undefined): { linkParts?: [string, string] } {
+  return chain ? { linkParts: [graph.partNumberOf(chain.link.a), graph.partNumberOf(chain.link.b)] } : {}
 }

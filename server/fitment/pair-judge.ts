@@ -47,6 +47,7 @@ export async function judgePair(
       modifications,
       explanation,
       fieldReports: { confirmed: 0, contradicted: 0 },
+      linkParts: [graph.partNumberOf(found.link.a), graph.partNumberOf(found.link.b)],
       rules: summary,
       linkModifications: modifications,
       linkId: found.link.id,

@@ -58,6 +58,8 @@ export const pairJudgementSchema = z.object({
   explanation: z.array(explanationStepSchema),
   /** Field reports on the reviewed link that decided the pair (none when the rules decided). */
   fieldReports: z.object({ confirmed: z.number().int(), contradicted: z.number().int() }).default({ confirmed: 0, contradicted: 0 }),
+  /** The deciding link's two parts (possibly identical to the chosen ones): its field reports are on it. */
+  linkParts: z.tuple([z.string(), z.string()]).optional(),
 })
 export type PairJudgement = z.infer<typeof pairJudgementSchema>
 

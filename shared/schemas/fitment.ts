@@ -84,6 +84,8 @@ export const fitResultSchema = z.object({
   explanation: z.array(explanationStepSchema),
   /** Approved field reports that found the same on a car, or found otherwise (the link is then worth a second look). */
   fieldReports: z.object({ confirmed: z.number().int(), contradicted: z.number().int() }).default({ confirmed: 0, contradicted: 0 }),
+  /** The two parts of the reviewed link that decided, which may be identical to the parts asked about; the field reports are on it. */
+  linkParts: z.tuple([z.string(), z.string()]).optional(),
   /** What is on the shelf of this part. */
   stock: availabilitySchema.default(NO_STOCK),
 })

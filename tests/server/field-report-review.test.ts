@@ -54,6 +54,13 @@ describe('approving a field report', () => {
     expect(await fitOf('TM-HD-2000', 'TM-BL-1800')).toMatchObject({ fieldReports: { confirmed: 1, contradicted: 0 } })
     // Contradicted, never silently changed: the link still says fits.
     expect(await fitOf('TM-HD-1800', 'TM-BL-1800')).toMatchObject({ relation: 'fits', fieldReports: { confirmed: 0, contradicted: 1 } })
+    // Reached through an identical number, the line names the link its reports are on, and they are found there.
+    const throughIdentical = await fitOf('TM-HD-2000R', 'TM-BL-1800')
+    expect(throughIdentical).toMatchObject({ fieldReports: { confirmed: 1 } })
+    const [linkFrom, linkTo] = (throughIdentical as Fit & { linkParts: [string, string] }).linkParts
+    expect([linkFrom, linkTo].sort()).toEqual(['TM-BL-1800', 'TM-HD-2000'])
+    const reports = (await editor.get(`/api/field-reports?from=${linkFrom}&to=${linkTo}`)).body.items as { id: number }[]
+    expect(reports.map((report) => report.id)).toContain(id)
     // A build with the confirmed pair says so on the pair, and a rule-decided pair carries no report.
     const build = (
       await editor.post('/api/builds/evaluate').send({ slots: { head: 'TM-HD-1810', block: 'TM-BL-2000', 'head-gasket': 'TM-HG-2000' } })
