@@ -1,5 +1,6 @@
 import { validateVin, vinCheckDigit } from '../../../shared/engineering/vin'
 import { type STOCK_COLUMNS } from '../../../shared/import-files'
+import { MAX_CENTS, centsToDecimal, decimalToCents } from '../../../shared/money'
 import { STOCK_CONDITIONS, STOCK_STATUSES, type USED_GRADES, type StockCondition, type StockStatus } from '../../../shared/schemas/stock'
 
 export type StockColumn = (typeof STOCK_COLUMNS)[number]
@@ -24,24 +25,19 @@ export type StockUnit = {
 
 export type Problem = (column: string, message: string) => void
 
-const MONEY = /^(\d{1,9})(?:\.(\d{1,2}))?$/
-const MAX_CENTS = 100_000_000
 const CONDITION = /^(new|remanufactured|used|core)(?:[\s/-]+(?:grade\s*)?([abc]))?$/i
 
-/** A decimal amount in the shop's currency as integer cents, read digit by digit so no floating point rounds it. */
+/** A decimal amount in the shop's currency as integer cents. */
 export function parseMoney(text: string, column: string, problem: Problem): number {
-  const match = MONEY.exec(text)
-  if (!match) {
-    if (/^-\s*\d/.test(text)) problem(column, `${column} cannot be negative (${text}).`)
-    else problem(column, `"${text}" is not an amount; write it as a decimal like 125.50, without a currency sign.`)
-    return 0
-  }
-  const cents = Number(match[1]) * 100 + Number((match[2] ?? '').padEnd(2, '0'))
-  if (cents > MAX_CENTS) problem(column, `${text} is more than ${MAX_CENTS / 100}.`)
-  return cents
+  const reading = decimalToCents(text)
+  if (reading.ok) return reading.cents
+  if (reading.problem === 'negative') problem(column, `${column} cannot be negative (${text}).`)
+  else if (reading.problem === 'too_large') problem(column, `${text} is more than ${MAX_CENTS / 100}.`)
+  else problem(column, `"${text}" is not an amount; write it as a decimal like 125.50, without a currency sign.`)
+  return 0
 }
 
-export const formatMoney = (cents: number) => `${Math.floor(cents / 100)}.${String(cents % 100).padStart(2, '0')}`
+export const formatMoney = centsToDecimal
 
 export function parseCondition(text: string, problem: Problem): { condition: StockCondition; grade: Grade | null } {
   const match = CONDITION.exec(text)
