@@ -24,19 +24,20 @@ export type SiteInput = z.infer<typeof siteInputSchema>
 export const siteSchema = z.object({ id: z.number().int(), name: z.string(), address: z.string() })
 export type Site = z.infer<typeof siteSchema>
 
+/** For used parts: A (like new) to C (worn but serviceable). */
+const gradeSchema = z.enum(USED_GRADES, { error: () => 'Grade is A, B or C.' }).nullable()
+/** Where on the site: shelf, bin, rack. */
+const locationSchema = z.string().trim().max(100)
+const damageNotesSchema = z.string().trim().max(2000)
+
 const stockFields = {
   condition: stockConditionSchema,
-  /** For used parts: A (like new) to C (worn but serviceable). */
-  grade: z
-    .enum(USED_GRADES, { error: () => 'Grade is A, B or C.' })
-    .nullable()
-    .default(null),
+  grade: gradeSchema.default(null),
   mileageKm: z.number().int().min(0, 'Mileage cannot be negative.').max(5_000_000).nullable().default(null),
   donorVin: z.string().trim().toUpperCase().max(17, 'A VIN has 17 characters.').nullable().default(null),
   donorYear: z.number().int().min(1950).max(2100).nullable().default(null),
-  damageNotes: z.string().trim().max(2000).default(''),
-  /** Where on the site: shelf, bin, rack. */
-  location: z.string().trim().max(100).default(''),
+  damageNotes: damageNotesSchema.default(''),
+  location: locationSchema.default(''),
   priceCents: cents('Price'),
   coreChargeCents: cents('Core charge').default(0),
   status: stockStatusSchema.default('available'),
@@ -56,15 +57,16 @@ export const stockInputSchema = z
   })
 export type StockInput = z.infer<typeof stockInputSchema>
 
+// No defaults here: a field left out of a change keeps the unit's value.
 export const stockUpdateSchema = z
   .strictObject({
     site: z.string().trim().min(1).max(100).optional(),
-    location: stockFields.location.optional(),
+    location: locationSchema.optional(),
     priceCents: cents('Price').optional(),
     coreChargeCents: cents('Core charge').optional(),
     status: stockStatusSchema.optional(),
-    damageNotes: stockFields.damageNotes.optional(),
-    grade: stockFields.grade.optional(),
+    damageNotes: damageNotesSchema.optional(),
+    grade: gradeSchema.optional(),
   })
   .refine((value) => Object.keys(value).length > 0, 'Change at least one field.')
 export type StockUpdate = z.infer<typeof stockUpdateSchema>
