@@ -1,4 +1,5 @@
 import { z } from 'zod'
+import { validateVin } from '../engineering/vin'
 
 export const STOCK_CONDITIONS = ['new', 'remanufactured', 'used', 'core'] as const
 export const stockConditionSchema = z.enum(STOCK_CONDITIONS, { error: () => `Condition is one of ${STOCK_CONDITIONS.join(', ')}.` })
@@ -54,6 +55,9 @@ export const stockInputSchema = z
   .superRefine((item, ctx) => {
     if (item.grade && item.condition !== 'used')
       ctx.addIssue({ code: 'custom', path: ['grade'], message: 'Only used parts carry a grade.' })
+    // The donor's VIN is how a used part is traced back to its car, so it must be one that could be read off a car.
+    const vin = item.donorVin ? validateVin(item.donorVin) : null
+    if (vin && !vin.valid) ctx.addIssue({ code: 'custom', path: ['donorVin'], message: `${vin.problems[0] ?? 'Not a VIN'}.` })
   })
 export type StockInput = z.infer<typeof stockInputSchema>
 

@@ -38,3 +38,26 @@ describe('PATCH /api/stock/:id', () => {
     expect(head?.stock.sites).toEqual(['Northgate counter'])
   })
 })
+
+describe('POST /api/stock, the donor VIN', () => {
+  const unit = { partNumber: 'TM-HD-1800', site: 'Hollin yard, lot B', condition: 'used', grade: 'B', priceCents: 9000 }
+
+  it('takes a donor VIN whose check digit agrees', async () => {
+    const created = await counter.post('/api/stock').send({ ...unit, donorVin: '1zzaa11axs1000000' })
+    expect(created.status, JSON.stringify(created.body)).toBe(201)
+    expect(created.body.donorVin).toBe('1ZZAA11AXS1000000')
+  })
+
+  it.each([
+    // X is the check digit of 1ZZAA11A?S1000000 by the 49 CFR 565.15 weights; a 5 there cannot be right.
+    ['a check digit that does not agree', '1ZZAA11A5S1000000', 'Check digit (position 9) is 5'],
+    ['a letter a VIN never holds', '1ZZAA11AXS100000O', 'never contains O'],
+    ['too few characters', '1ZZAA11AXS10000', 'has 15'],
+  ])('refuses %s, naming the donor VIN, and adds nothing', async (_what, donorVin, message) => {
+    const before = (await counter.get('/api/stock?pageSize=200&status=available')).body.total as number
+    const refused = await counter.post('/api/stock').send({ ...unit, donorVin })
+    expect(refused.status).toBe(400)
+    expect(refused.body.error.details).toContainEqual({ path: 'donorVin', message: expect.stringContaining(message) })
+    expect((await counter.get('/api/stock?pageSize=200&status=available')).body.total).toBe(before)
+  })
+})
