@@ -59,6 +59,15 @@ describe.skipIf(!run)('a stock file in the browser', () => {
     await saveScreenshot(page, 'imports-stock-committed')
   })
 
+  it('reverts the stock batch after a question that names what goes back', async () => {
+    const first = page.getByRole('table', { name: 'Import batches' }).locator('tbody tr').first()
+    await first.getByRole('button', { name: /Revert batch/ }).click()
+    const dialog = page.getByRole('alertdialog')
+    expect(await dialog.textContent()).toContain('every stock unit delivery.csv created, changed or removed')
+    await dialog.getByRole('button', { name: 'Revert' }).click()
+    await expect.poll(() => first.textContent(), within).toContain('reverted by Tobias Ferrand')
+  })
+
   it('logged no console errors (the 401 of the session check before sign-in aside)', () => {
     expect(consoleErrors.filter((text) => !text.includes('401'))).toEqual([])
   })

@@ -7,3 +7,11 @@ export const IMPORT_TYPE_LABELS: Readonly<Record<ImportType, string>> = {
   vehicles: 'Vehicles',
   stock: 'Stock',
 }
+
+/** What a batch of each kind writes, as the revert question names it. */
+export const IMPORT_RECORDS: Readonly<Record<ImportType, string>> = {
+  parts: 'part',
+  links: 'link and identity',
+  vehicles: 'vehicle application',
+  stock: 'stock unit',
+}
