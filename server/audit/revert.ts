@@ -71,7 +71,8 @@ function restorer(db: Database.Database) {
  * Puts back the catalogue as it was before the batch: records it updated get
  * their previous rows, records it created go, records it deleted return (with
  * their ids). Synchronous, for the caller's transaction. Answers the parts,
- * links and identities it touched, for the fit graph index.
+ * links and identities it touched, for the fit graph index, and the parts
+ * whose shelves it changed, for the stock index.
  */
 export function revertBatch(db: Database.Database, batchId: number, userName: string): Touched {
   const batch = db.prepare('SELECT status FROM import_batch WHERE id = ?').get(batchId) as { status: string } | undefined
