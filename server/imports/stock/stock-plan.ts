@@ -150,9 +150,15 @@ export function planStock(db: Database.Database, rows: StockRows): StockPlan {
       plan.changes.create(firstRow, key, () => fieldChanges(null, unit))
       continue
     }
+    const differs = (Object.keys(unit) as (keyof StockUnit)[]).some((field) => unit[field] !== before![field])
     const fields = fieldChanges(before, unit)
-    plan.changes.compare(firstRow, key, fields)
-    if (fields.length) plan.updates.push({ partId, siteId, unit, previous: stored })
+    // Values that differ yet read the same in a cell (text the file cannot hold as stored) are still written, and said so.
+    plan.changes.compare(
+      firstRow,
+      key,
+      differs ? (fields.length ? fields : [{ field: 'value', before: 'as stored', after: 'as in the file' }]) : [],
+    )
+    if (differs) plan.updates.push({ partId, siteId, unit, previous: stored })
   }
   plan.changes.rejected(issues.count)
   plan.issues = issues.sorted()
