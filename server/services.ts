@@ -74,7 +74,7 @@ export function createServices(dataSource: DataSource, config: AppConfig, rules:
     shopSettings,
     quotes: new QuoteService(databaseOf(dataSource), evaluation, sheets, shopSettings, stockRows, stockIndex),
     links: new LinkService(dataSource, parts, graphIndex),
-    imports: new ImportService(dataSource, { maxRows: config.importMaxRows }, graphIndex),
+    imports: new ImportService(dataSource, { maxRows: config.importMaxRows }, graphIndex, stockIndex),
     exports: new ExportService(dataSource),
     photos,
     stockIndex,

@@ -1,7 +1,7 @@
 import { Column, Entity, Index, JoinColumn, ManyToOne, PrimaryGeneratedColumn } from 'typeorm'
 import { ImportBatchEntity } from './import-batch.entity'
 
-export type ImportRecordType = 'part' | 'link' | 'identity'
+export type ImportRecordType = 'part' | 'link' | 'identity' | 'vehicle' | 'stock'
 
 /**
  * The previous values of a record a batch updated or deleted, so a revert can

@@ -4,41 +4,19 @@ import { AppError } from '../errors/app-error'
 import type { ImportRecordType } from './import-change.entity'
 import { SQL_NOW, type PreviousRows } from './change-log'
 import { rewritePartWords } from '../catalogue/part-word-writer'
-import type { CatalogueChanges } from '../fitment/fit-graph'
+import type { Touched } from '../imports/import-jobs'
+import { findBlockers } from './revert-blockers'
 
 type ChangeRow = { recordType: ImportRecordType; recordId: number; action: 'updated' | 'deleted'; previousValues: string }
-type Blocker = { batchId: number | null; fileName: string | null; what: string }
 
 const TABLES: Record<ImportRecordType, { table: string; children: Record<string, string> }> = {
   part: { table: 'part', children: { part_mark: 'partId' } },
   link: { table: 'link', children: { link_modification: 'linkId' } },
   identity: { table: 'part_identity', children: {} },
+  vehicle: { table: 'vehicle_application', children: { vehicle_original: 'vehicleId' } },
+  stock: { table: 'stock_item', children: {} },
 }
 const COLUMN = /^[A-Za-z]+$/
-
-/** Later writes that lean on what the batch wrote; while any is in place the batch cannot be undone exactly. */
-function findBlockers(db: Database.Database, batchId: number): Blocker[] {
-  const created = (type: ImportRecordType, table: string) =>
-    `SELECT id FROM ${table} WHERE batchId = @batch AND id NOT IN
-       (SELECT recordId FROM import_change WHERE batchId = @batch AND recordType = '${type}')`
-  const outside = (alias: string) => `(${alias}.batchId IS NULL OR ${alias}.batchId != @batch)`
-  const sql = `
-    SELECT c.batchId AS batchId, 'changed records this batch wrote' AS what FROM import_change c
-      JOIN import_batch b ON b.id = c.batchId WHERE c.previousBatchId = @batch AND b.status = 'committed'
-    UNION SELECT l.batchId, 'links parts this batch added' FROM link l
-      WHERE ${outside('l')} AND (l.partAId IN (${created('part', 'part')}) OR l.partBId IN (${created('part', 'part')}))
-    UNION SELECT i.batchId, 'declares parts this batch added identical' FROM part_identity i
-      WHERE ${outside('i')} AND (i.partAId IN (${created('part', 'part')}) OR i.partBId IN (${created('part', 'part')}))
-    UNION SELECT l.batchId, 'uses modifications this batch proposed' FROM link_modification lm
-      JOIN link l ON l.id = lm.linkId JOIN modification m ON m.id = lm.modificationId
-      WHERE m.batchId = @batch AND ${outside('l')}
-    UNION SELECT e.batchId, 'counts field reports on links this batch added' FROM field_report_link e
-      WHERE e.batchId != @batch AND e.linkId IN (${created('link', 'link')})`
-  const rows = db
-    .prepare(`SELECT x.batchId, x.what, b.fileName FROM (${sql}) x LEFT JOIN import_batch b ON b.id = x.batchId`)
-    .all({ batch: batchId }) as Blocker[]
-  return rows.sort((a, b) => (b.batchId ?? 0) - (a.batchId ?? 0))
-}
 
 /** Rows a revert would write back that point at a part or modification gone since (its batch was reverted). */
 function missingReferences(db: Database.Database, changes: { type: ImportRecordType; rows: PreviousRows }[]): string[] {
@@ -48,8 +26,10 @@ function missingReferences(db: Database.Database, changes: { type: ImportRecordT
   for (const { type, rows } of changes) {
     if (type === 'part') continue
     const main = rows[TABLES[type].table]?.[0] ?? {}
-    for (const column of ['partAId', 'partBId']) {
-      if (!partExists.get(main[column])) missing.push(`part id ${String(main[column])}`)
+    const partColumns = type === 'stock' ? ['partId'] : type === 'vehicle' ? [] : ['partAId', 'partBId']
+    const partIds = [...partColumns.map((column) => main[column]), ...(rows.vehicle_original ?? []).map((original) => original.partId)]
+    for (const id of partIds) {
+      if (!partExists.get(id)) missing.push(`part id ${String(id)}`)
     }
     for (const mod of rows.link_modification ?? []) {
       if (!modificationExists.get(mod.modificationId)) missing.push(`modification id ${String(mod.modificationId)}`)
@@ -91,9 +71,10 @@ function restorer(db: Database.Database) {
  * Puts back the catalogue as it was before the batch: records it updated get
  * their previous rows, records it created go, records it deleted return (with
  * their ids). Synchronous, for the caller's transaction. Answers the parts,
- * links and identities it touched, for the fit graph index.
+ * links and identities it touched, for the fit graph index, and the parts
+ * whose shelves it changed, for the stock index.
  */
-export function revertBatch(db: Database.Database, batchId: number, userName: string): Required<CatalogueChanges> {
+export function revertBatch(db: Database.Database, batchId: number, userName: string): Touched {
   const batch = db.prepare('SELECT status FROM import_batch WHERE id = ?').get(batchId) as { status: string } | undefined
   if (!batch) throw AppError.notFound(`No import batch ${batchId}.`)
   if (batch.status === 'reverted') throw new AppError(409, 'already_reverted', `Batch ${batchId} is already reverted.`)
@@ -127,11 +108,15 @@ export function revertBatch(db: Database.Database, batchId: number, userName: st
   const ids = (table: string) =>
     (db.prepare(`SELECT id FROM ${table} WHERE batchId = ?`).all(batchId) as { id: number }[]).map((row) => row.id)
   const changed = (type: ImportRecordType) => changes.filter((change) => change.type === type).map((change) => change.recordId)
-  const touched = {
+  const catalogue = {
     parts: [...ids('part'), ...changed('part')],
     links: [...ids('link'), ...changed('link')],
     identities: [...ids('part_identity'), ...changed('identity')],
   }
+  const stockParts = new Set(
+    (db.prepare('SELECT "partId" FROM stock_item WHERE "batchId" = ?').all(batchId) as { partId: number }[]).map((row) => row.partId),
+  )
+  for (const change of changes) if (change.type === 'stock') stockParts.add(Number(change.rows.stock_item?.[0]?.partId))
   const restore = restorer(db)
   for (const change of changes) if (change.action === 'updated') restore(change.type, change.recordId, 'updated', change.rows)
   // A field report's approval goes back to the queue with the links it wrote or confirmed.
@@ -139,9 +124,11 @@ export function revertBatch(db: Database.Database, batchId: number, userName: st
   db.prepare(
     `UPDATE field_report SET "status" = 'submitted', "batchId" = NULL, "decidedByName" = NULL, "decidedAt" = NULL, "decisionNote" = '' WHERE "batchId" = ?`,
   ).run(batchId)
-  for (const table of ['link', 'part_identity', 'part', 'modification']) db.prepare(`DELETE FROM ${table} WHERE batchId = ?`).run(batchId)
+  db.prepare('DELETE FROM vehicle_original WHERE "vehicleId" IN (SELECT "id" FROM vehicle_application WHERE "batchId" = ?)').run(batchId)
+  for (const table of ['stock_item', 'vehicle_application', 'link', 'part_identity', 'part', 'modification'])
+    db.prepare(`DELETE FROM ${table} WHERE "batchId" = ?`).run(batchId)
   for (const change of changes) if (change.action === 'deleted') restore(change.type, change.recordId, 'deleted', change.rows)
   rewritePartWords(db, changed('part'))
   db.prepare(`UPDATE import_batch SET status = 'reverted', revertedAt = ${SQL_NOW}, revertedByName = ? WHERE id = ?`).run(userName, batchId)
-  return touched
+  return { catalogue, stockParts: [...stockParts] }
 }

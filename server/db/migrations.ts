@@ -1,5 +1,7 @@
 import { Quotes1796215187917 } from '../migrations/1796215187917-Quotes'
 import { Quotes1796215189078 as PostgresQuotes1796215189078 } from '../migrations/postgres/1796215189078-Quotes'
+import { ImportVehiclesStock1796223370557 } from '../migrations/1796223370557-ImportVehiclesStock'
+import { ImportVehiclesStock1796223379484 as PostgresImportVehiclesStock1796223379484 } from '../migrations/postgres/1796223379484-ImportVehiclesStock'
 import { Vehicles1796213931900 } from '../migrations/1796213931900-Vehicles'
 import { Vehicles1796213933784 as PostgresVehicles1796213933784 } from '../migrations/postgres/1796213933784-Vehicles'
 import { Stock1796213287641 } from '../migrations/1796213287641-Stock'
@@ -38,6 +40,7 @@ export const migrations = [
   Vehicles1796213931900,
   BuildSheetChecklist1796214415051,
   Quotes1796215187917,
+  ImportVehiclesStock1796223370557,
 ]
 
 /** PostgreSQL's, generated from the same entities (`npx tsx server/db/generate-migration.ts Name --postgres`). */
@@ -53,4 +56,5 @@ export const postgresMigrations = [
   PostgresVehicles1796213933784,
   PostgresBuildSheetChecklist1796214105800,
   PostgresQuotes1796215189078,
+  PostgresImportVehiclesStock1796223379484,
 ]

@@ -9,6 +9,8 @@ import { MARK_COLUMNS, PART_COLUMNS, camelToSnake, partCells } from './csv/part-
 import { sqliteConnection } from '../db/sqlite-connection'
 import { LINK_COLUMNS } from './links/link-rows'
 import { pushTo } from '../lib/map-list'
+import { stockCsv } from './stock/stock-export'
+import { vehiclesCsv } from './vehicles/vehicle-export'
 
 type PartRow = Omit<PartInput, 'attributes' | 'marks'> & { id: number; attributes: string }
 
@@ -16,7 +18,7 @@ type PartRow = Omit<PartInput, 'attributes' | 'marks'> & { id: number; attribute
 const KNOWN_COLUMN_ORDER = [...new Set(PART_KINDS.flatMap((kind) => knownAttributes(kind).map((a) => camelToSnake(a.name))))]
 
 /**
- * The catalogue as CSV files in the import format, so that importing an export
+ * The catalogue, vehicles and stock as CSV files in the import format, so that importing an export
  * changes nothing. Links are the approved ones plus identities: proposed and
  * rejected links are review items, and an import would approve them.
  */
@@ -24,7 +26,16 @@ export class ExportService {
   constructor(private readonly dataSource: DataSource) {}
 
   csv(file: ExportFile): string {
-    return file === 'parts.csv' ? this.partsCsv() : this.linksCsv()
+    switch (file) {
+      case 'parts.csv':
+        return this.partsCsv()
+      case 'links.csv':
+        return this.linksCsv()
+      case 'vehicles.csv':
+        return vehiclesCsv(sqliteConnection(this.dataSource))
+      case 'stock.csv':
+        return stockCsv(sqliteConnection(this.dataSource))
+    }
   }
 
   partsCsv(): string {

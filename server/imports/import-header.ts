@@ -1,15 +1,13 @@
-import { normaliseHeader } from './csv/read-csv'
+import type { ImportType } from '../../shared/schemas/imports'
+import { IMPORT_FILES, guessImportType, normaliseHeader } from '../../shared/import-files'
 import { AppError } from '../errors/app-error'
 import { issueDetails } from './import-issues'
 
 export type HeaderSpec = {
-  required: readonly string[]
-  known: readonly string[]
-  /** Whether columns beyond `known` are allowed (a parts file's attributes) or refused. */
+  /** The kind of file expected; its columns come from IMPORT_FILES, and a header of another kind is named as such. */
+  type: ImportType
+  /** Whether columns beyond the known ones are allowed (a parts file's attributes) or refused. */
   extraColumns: 'allowed' | 'refused'
-  /** What this file is called, and the other import's file: a header of the other kind is named as such. */
-  file: string
-  otherFile?: { file: string; columns: readonly string[] }
 }
 
 export type Header = {
@@ -28,7 +26,8 @@ const RESERVED_COLUMNS: ReadonlySet<string> = new Set(['__proto__', 'constructor
  * Reads and checks the header row. A problem here is a problem with the whole
  * file, so it stops the import with a 400 that names row and column.
  */
-export function readHeader(cells: string[], row: number, spec: HeaderSpec): Header {
+export function readHeader(cells: string[], row: number, { type, extraColumns }: HeaderSpec): Header {
+  const spec = IMPORT_FILES[type]
   const columns = cells.map(normaliseHeader)
   const problems: { column: string; message: string }[] = []
   const seen = new Set<string>()
@@ -40,12 +39,15 @@ export function readHeader(cells: string[], row: number, spec: HeaderSpec): Head
     if (seen.has(column)) problems.push({ column, message: `Column "${column}" appears twice.` })
     seen.add(column)
   }
-  if (!spec.known.some((column) => seen.has(column))) {
-    const other = spec.otherFile
-    if (other && other.columns.some((column) => seen.has(column))) {
-      const message = `Row ${row} looks like the header of a ${other.file}, not a ${spec.file}. Upload it as a ${other.file}, or choose a ${spec.file}.`
-      throw new AppError(400, 'wrong_file', message, issueDetails([{ row, column: '', message }]))
-    }
+  const namesNone = !spec.known.some((column) => seen.has(column))
+  const lacksRequired = spec.required.some((column) => !seen.has(column))
+  const guess = namesNone || lacksRequired ? guessImportType(seen) : null
+  if (guess?.complete && guess.type !== type) {
+    const other = IMPORT_FILES[guess.type].file
+    const message = `Row ${row} looks like the header of a ${other}, not a ${spec.file}. Upload it as a ${other}, or choose a ${spec.file}.`
+    throw new AppError(400, 'wrong_file', message, issueDetails([{ row, column: '', message }]))
+  }
+  if (namesNone) {
     throw new AppError(
       400,
       'missing_header',
@@ -56,7 +58,7 @@ export function readHeader(cells: string[], row: number, spec: HeaderSpec): Head
   for (const column of spec.required) {
     if (!seen.has(column)) problems.push({ column, message: `Required column "${column}" is missing.` })
   }
-  if (spec.extraColumns === 'refused') {
+  if (extraColumns === 'refused') {
     for (const column of seen) {
       if (!spec.known.includes(column)) {
         problems.push({ column, message: `Unknown column "${column}"; this file takes ${spec.known.join(', ')}.` })

@@ -1,31 +1,18 @@
 import { createReadStream } from 'node:fs'
-import type Database from 'better-sqlite3'
 import type { DataSource } from 'typeorm'
-import type {
-  ImportBatch,
-  ImportIssue,
-  ImportMode,
-  ImportPhase,
-  ImportProgress,
-  ImportResult,
-  ImportType,
-} from '../../shared/schemas/imports'
+import type { ImportBatch, ImportMode, ImportPhase, ImportProgress, ImportResult, ImportType } from '../../shared/schemas/imports'
 import { CsvFileError, readCsvStream, type CsvReadSummary } from './csv/csv-stream'
 import { inTransaction, sqliteConnection } from '../db/sqlite-connection'
 import { ImportBatchEntity } from '../audit/import-batch.entity'
 import { SecurityEventService } from '../security/security-events.service'
 import { AppError } from '../errors/app-error'
-import type { CatalogueChanges, FitGraphIndex } from '../fitment/fit-graph'
+import type { FitGraphIndex } from '../fitment/fit-graph'
+import type { StockIndex } from '../stock/stock-index'
+import { importWork, type Planned, type Touched, type Work } from './import-jobs'
 import { insertBatch } from '../audit/change-log'
-import { LISTED, type ChangeList } from './import-change-list'
+import { LISTED } from './import-change-list'
 import { issueDetails } from './import-issues'
-import { planLinks } from './links/link-plan'
-import { LinkRows } from './links/link-rows'
-import { writeLinks } from './links/link-write'
-import { planParts } from './parts/part-plan'
-import { PartRows } from './parts/part-rows'
 import { PreviewCache } from './import-preview-cache'
-import { writeParts } from './parts/part-write'
 import { revertBatch } from '../audit/revert'
 
 /** Who imports or reverts; e-mail and address go to the security events. */
@@ -40,31 +27,6 @@ export type ImportRun = {
   validRowsOnly: boolean
   user: ImportUser
   onProgress?: (progress: ImportProgress) => void
-}
-
-type Planned = { changes: ChangeList; errors: ImportIssue[]; write: (batchId: number) => CatalogueChanges }
-
-type Work = { rows: PartRows | LinkRows; plan: (db: Database.Database) => Planned }
-
-function job(type: ImportType): Work {
-  if (type === 'parts') {
-    const rows = new PartRows()
-    return {
-      rows,
-      plan: (db: Database.Database): Planned => {
-        const plan = planParts(db, rows)
-        return { changes: plan.changes, errors: plan.issues, write: (batchId) => ({ parts: writeParts(db, plan, batchId) }) }
-      },
-    }
-  }
-  const rows = new LinkRows()
-  return {
-    rows,
-    plan: (db: Database.Database): Planned => {
-      const plan = planLinks(db, rows)
-      return { changes: plan.changes, errors: plan.issues, write: (batchId) => writeLinks(db, plan, batchId) }
-    },
-  }
 }
 
 function fileError(error: unknown): unknown {
@@ -107,7 +69,7 @@ export function toImportBatch(entity: ImportBatchEntity): ImportBatch {
 }
 
 /**
- * CSV imports of parts and links: read and check the file as it streams in,
+ * CSV imports of parts, links, vehicles and stock: read and check the file as it streams in,
  * then plan against the catalogue and (on commit) write everything in one
  * transaction as a recorded, revertible batch.
  */
@@ -118,6 +80,8 @@ export class ImportService {
     private readonly dataSource: DataSource,
     private readonly limits: { maxRows: number },
     private readonly graphIndex: FitGraphIndex,
+    /** The app's stock index, refreshed after stock imports and reverts (absent where a tool imports catalogue only). */
+    private readonly stockIndex?: StockIndex,
   ) {
     this.events = new SecurityEventService(dataSource)
   }
@@ -129,7 +93,7 @@ export class ImportService {
   }
 
   private async read(input: ImportRun, report: (phase: ImportPhase, done: number, total: number) => void) {
-    const work = job(input.type)
+    const work = importWork(input.type)
     const summary = await readCsvStream(createReadStream(input.filePath, { highWaterMark: 1 << 20 }), {
       maxRows: this.limits.maxRows,
       onHeader: (cells, row) => work.rows.onHeader(cells, row),
@@ -184,10 +148,15 @@ export class ImportService {
       return { answer: result(planned, batchId), touched: planned.write(batchId) }
     })
     this.previews.drop(userId, input.type)
-    await this.graphIndex.applyChanges(committed.touched)
+    await this.afterWrite(committed.touched)
     await this.securityEvent('import', input.user, `batch ${committed.answer.batchId}: ${input.type} from ${input.fileName}`)
     report('write', summary.rows, summary.rows)
     return committed.answer
+  }
+
+  private async afterWrite(touched: Touched) {
+    await this.graphIndex.applyChanges(touched.catalogue)
+    if (touched.stockParts.length) await this.stockIndex?.refresh(touched.stockParts)
   }
 
   async list(): Promise<ImportBatch[]> {
@@ -198,7 +167,7 @@ export class ImportService {
   /** Restores the catalogue as it was before the batch, or says which later write stands in the way. */
   async revert(batchId: number, user: ImportUser): Promise<ImportBatch> {
     const touched = await inTransaction(this.dataSource, (db) => revertBatch(db, batchId, user.name))
-    await this.graphIndex.applyChanges(touched)
+    await this.afterWrite(touched)
     await this.securityEvent('revert', user, `batch ${batchId}`)
     return toImportBatch(await this.dataSource.getRepository(ImportBatchEntity).findOneByOrFail({ id: batchId }))
   }

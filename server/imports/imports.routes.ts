@@ -15,7 +15,7 @@ import type { ImportService } from './import.service'
 import { streamImport, wantsProgress } from './import-stream'
 
 const batchParamsSchema = z.object({ id: z.coerce.number().int().positive('Give a batch id.') })
-const exportParamsSchema = z.object({ file: z.enum(EXPORT_FILES, { error: () => 'Export parts.csv or links.csv.' }) })
+const exportParamsSchema = z.object({ file: z.enum(EXPORT_FILES, { error: () => `Export ${EXPORT_FILES.join(', ')}.` }) })
 
 /** A name safe to show and store: no folders, no control characters, not endless. */
 function cleanFileName(name: string): string {

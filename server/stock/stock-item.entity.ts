@@ -64,6 +64,11 @@ export class StockItemEntity {
   @Column({ type: Date, nullable: true })
   reservedUntil!: Date | null
 
+  /** The import batch that wrote it last, if any; a revert checks the unit is as that batch left it. */
+  @Index()
+  @Column({ type: 'integer', nullable: true })
+  batchId!: number | null
+
   @CreateDateColumn()
   createdAt!: Date
 

@@ -28,4 +28,9 @@ export class VehicleApplicationEntity {
 
   @Column({ type: 'text' })
   engineFamily!: string
+
+  /** The import batch that wrote it last, if any. */
+  @Index()
+  @Column({ type: 'integer', nullable: true })
+  batchId!: number | null
 }

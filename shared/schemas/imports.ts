@@ -1,7 +1,7 @@
 import { z } from 'zod'
 
-export const IMPORT_TYPES = ['parts', 'links'] as const
-export const importTypeSchema = z.enum(IMPORT_TYPES, { error: () => 'Type must be parts or links.' })
+export const IMPORT_TYPES = ['parts', 'links', 'vehicles', 'stock'] as const
+export const importTypeSchema = z.enum(IMPORT_TYPES, { error: () => 'Type must be parts, links, vehicles or stock.' })
 export type ImportType = z.infer<typeof importTypeSchema>
 
 export const IMPORT_MODES = ['preview', 'commit'] as const
@@ -89,5 +89,5 @@ export const importBatchSchema = z.object({
 export type ImportBatch = z.infer<typeof importBatchSchema>
 export const importBatchListSchema = z.array(importBatchSchema)
 
-export const EXPORT_FILES = ['parts.csv', 'links.csv'] as const
+export const EXPORT_FILES = ['parts.csv', 'links.csv', 'vehicles.csv', 'stock.csv'] as const
 export type ExportFile = (typeof EXPORT_FILES)[number]

@@ -1,4 +1,5 @@
 import { z } from 'zod'
+import { validateVin } from '../engineering/vin'
 
 export const STOCK_CONDITIONS = ['new', 'remanufactured', 'used', 'core'] as const
 export const stockConditionSchema = z.enum(STOCK_CONDITIONS, { error: () => `Condition is one of ${STOCK_CONDITIONS.join(', ')}.` })
@@ -24,19 +25,20 @@ export type SiteInput = z.infer<typeof siteInputSchema>
 export const siteSchema = z.object({ id: z.number().int(), name: z.string(), address: z.string() })
 export type Site = z.infer<typeof siteSchema>
 
+/** For used parts: A (like new) to C (worn but serviceable). */
+const gradeSchema = z.enum(USED_GRADES, { error: () => 'Grade is A, B or C.' }).nullable()
+/** Where on the site: shelf, bin, rack. */
+const locationSchema = z.string().trim().max(100)
+const damageNotesSchema = z.string().trim().max(2000)
+
 const stockFields = {
   condition: stockConditionSchema,
-  /** For used parts: A (like new) to C (worn but serviceable). */
-  grade: z
-    .enum(USED_GRADES, { error: () => 'Grade is A, B or C.' })
-    .nullable()
-    .default(null),
+  grade: gradeSchema.default(null),
   mileageKm: z.number().int().min(0, 'Mileage cannot be negative.').max(5_000_000).nullable().default(null),
   donorVin: z.string().trim().toUpperCase().max(17, 'A VIN has 17 characters.').nullable().default(null),
   donorYear: z.number().int().min(1950).max(2100).nullable().default(null),
-  damageNotes: z.string().trim().max(2000).default(''),
-  /** Where on the site: shelf, bin, rack. */
-  location: z.string().trim().max(100).default(''),
+  damageNotes: damageNotesSchema.default(''),
+  location: locationSchema.default(''),
   priceCents: cents('Price'),
   coreChargeCents: cents('Core charge').default(0),
   status: stockStatusSchema.default('available'),
@@ -53,18 +55,22 @@ export const stockInputSchema = z
   .superRefine((item, ctx) => {
     if (item.grade && item.condition !== 'used')
       ctx.addIssue({ code: 'custom', path: ['grade'], message: 'Only used parts carry a grade.' })
+    // The donor's VIN is how a used part is traced back to its car, so it must be one that could be read off a car.
+    const vin = item.donorVin ? validateVin(item.donorVin) : null
+    if (vin && !vin.valid) ctx.addIssue({ code: 'custom', path: ['donorVin'], message: `${vin.problems[0] ?? 'Not a VIN'}.` })
   })
 export type StockInput = z.infer<typeof stockInputSchema>
 
+// No defaults here: a field left out of a change keeps the unit's value.
 export const stockUpdateSchema = z
   .strictObject({
     site: z.string().trim().min(1).max(100).optional(),
-    location: stockFields.location.optional(),
+    location: locationSchema.optional(),
     priceCents: cents('Price').optional(),
     coreChargeCents: cents('Core charge').optional(),
     status: stockStatusSchema.optional(),
-    damageNotes: stockFields.damageNotes.optional(),
-    grade: stockFields.grade.optional(),
+    damageNotes: damageNotesSchema.optional(),
+    grade: gradeSchema.optional(),
   })
   .refine((value) => Object.keys(value).length > 0, 'Change at least one field.')
 export type StockUpdate = z.infer<typeof stockUpdateSchema>

@@ -2,6 +2,7 @@ import { computed, ref, shallowRef, watch } from 'vue'
 import type { ImportMode, ImportResult, ImportType } from '@shared/schemas/imports'
 import { ApiError } from '@/api/http'
 import { importsApi, type UploadProgress } from '@/api/imports'
+import { fileKindHint, headerCells } from '@/lib/import-file-kind'
 
 /**
  * One import from file choice to commit: preview first, then commit the same
@@ -16,10 +17,19 @@ export function useImportUpload() {
   const progress = ref<UploadProgress | null>(null)
   const isBusy = ref(false)
 
+  const header = shallowRef<string[]>([])
+
   watch([file, type], () => {
     result.value = null
     error.value = null
   })
+  // The header is read here so a file of the wrong kind is named before it is sent.
+  watch(file, async (chosen) => {
+    header.value = []
+    const text = chosen ? await chosen.slice(0, 64 * 1024).text() : ''
+    if (file.value === chosen) header.value = headerCells(text)
+  })
+  const kindHint = computed(() => fileKindHint(header.value, type.value))
 
   const isCommitted = computed(() => result.value?.batchId !== undefined)
   const rejectedRows = computed(() => result.value?.counts.rejected ?? 0)
@@ -59,6 +69,7 @@ export function useImportUpload() {
     isCommitted,
     rejectedRows,
     canCommit,
+    kindHint,
     preview: () => send('preview'),
     commit: (validRowsOnly: boolean) => send('commit', validRowsOnly),
   }

@@ -14,6 +14,7 @@ export type NavigationLink = {
 export const NAVIGATION: NavigationLink[] = [
   { name: 'lookup', label: 'Look up', icon: 'pi-search', permission: 'catalogue.read', area: ['part', 'part-substitutes'] },
   { name: 'vehicles', label: 'Vehicles', icon: 'pi-car', permission: 'catalogue.read', area: ['vehicle'] },
+  { name: 'stock', label: 'Stock', icon: 'pi-box', permission: 'stock.manage', area: ['stock-new', 'stock-unit'] },
   { name: 'parts', label: 'Catalogue', icon: 'pi-list', permission: 'catalogue.read' },
   { name: 'review', label: 'Review', icon: 'pi-check-square', permission: 'catalogue.edit' },
   { name: 'imports', label: 'Imports', icon: 'pi-file-import', permission: 'imports.manage' },

@@ -100,6 +100,24 @@ const router = createRouter({
           meta: { permission: 'catalogue.read', title: 'Vehicle' },
         },
         {
+          path: 'stock',
+          name: 'stock',
+          component: () => import('@/views/StockView.vue'),
+          meta: { permission: 'stock.manage', title: 'Stock' },
+        },
+        {
+          path: 'stock/new',
+          name: 'stock-new',
+          component: () => import('@/views/StockUnitView.vue'),
+          meta: { permission: 'stock.manage', title: 'Add a unit' },
+        },
+        {
+          path: 'stock/:id(\\d+)',
+          name: 'stock-unit',
+          component: () => import('@/views/StockUnitView.vue'),
+          meta: { permission: 'stock.manage', title: 'Stock unit' },
+        },
+        {
           path: 'field-reports',
           name: 'field-reports',
           component: () => import('@/views/FieldReportsView.vue'),

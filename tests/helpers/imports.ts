@@ -1,10 +1,11 @@
 import type { DataSource } from 'typeorm'
+import type { ImportType } from '../../shared/schemas/imports'
 import type { TestApp } from './test-app'
 
 type Agent = Awaited<ReturnType<TestApp['signIn']>>
 
 export type UploadOptions = {
-  type: 'parts' | 'links'
+  type: ImportType
   mode?: 'preview' | 'commit'
   validRowsOnly?: boolean
   name?: string

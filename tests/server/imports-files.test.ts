@@ -96,7 +96,7 @@ describe('POST /api/imports, files refused whole', () => {
     expect(noFile.body.error.message).toContain('form field "file"')
     const badType = await uploadCsv(editor, 'a\n1\n', { type: 'gaskets' as 'parts' })
     expect(badType.status).toBe(400)
-    expect(badType.body.error.details[0]).toMatchObject({ path: 'type', message: 'Type must be parts or links.' })
+    expect(badType.body.error.details[0]).toMatchObject({ path: 'type', message: 'Type must be parts, links, vehicles or stock.' })
   })
 })
 

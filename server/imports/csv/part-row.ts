@@ -3,15 +3,16 @@ import { partInputSchema } from '../../../shared/schemas/part-input'
 import { knownAttributes } from '../../../shared/schemas/part-attributes'
 import type { MarkType } from '../../../shared/schemas/part'
 import { PART_KINDS, type PartKind } from '../../../shared/schemas/part-kinds'
+import { IMPORT_FILES, PART_FILE_COLUMNS } from '../../../shared/import-files'
 
 /** Columns of the parts file that are not attributes. */
-export const PART_COLUMNS = ['part_number', 'kind', 'name', 'family', 'year_from', 'year_to', 'notes'] as const
+export const PART_COLUMNS = PART_FILE_COLUMNS
 export const MARK_COLUMNS: Record<string, MarkType> = {
   casting_marks: 'casting',
   stamped_codes: 'stamped',
   superseded_numbers: 'superseded',
 }
-export const REQUIRED_PART_COLUMNS = ['part_number', 'kind', 'name'] as const
+export const REQUIRED_PART_COLUMNS = IMPORT_FILES.parts.required
 
 export type RowError = { column: string; message: string }
 export type PartRowResult = { ok: true; part: PartInput } | { ok: false; errors: RowError[] }

@@ -1,15 +1,9 @@
 import Papa from 'papaparse'
+import { normaliseHeader } from '../../../shared/import-files'
 
 export type CsvTable = { headers: string[]; rows: Record<string, string>[] }
 
-/** Header names as the importers compare them: trimmed, lower case, spaces as underscores. */
-export function normaliseHeader(header: string): string {
-  return header
-    .replace(/^\uFEFF/, '')
-    .trim()
-    .toLowerCase()
-    .replace(/\s+/g, '_')
-}
+export { normaliseHeader }
 
 /** Parses a whole CSV text with a header row (delimiter detected, BOM dropped). */
 export function readCsvText(text: string): CsvTable {

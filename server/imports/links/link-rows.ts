@@ -1,10 +1,10 @@
 import { LINK_SOURCES, RELATIONS, type LinkSource, type Relation } from '../../../shared/schemas/fitment'
 import { restoreCell } from '../../../shared/csv-cells'
-import { MARK_COLUMNS, PART_COLUMNS, splitList } from '../csv/part-row'
+import { splitList } from '../csv/part-row'
 import { readHeader, rowShapeProblems, type Header } from '../import-header'
 import { RowIssues } from '../import-issues'
 
-export const LINK_COLUMNS = ['from_part', 'to_part', 'relation', 'modifications', 'note', 'source'] as const
+export { LINK_COLUMNS } from '../../../shared/import-files'
 export const LINK_FILE_RELATIONS = [...RELATIONS, 'identical'] as const
 export type LinkFileRelation = (typeof LINK_FILE_RELATIONS)[number]
 
@@ -58,13 +58,7 @@ export class LinkRows {
   private at = { from: 0, to: 0, relation: 0, modifications: -1, note: -1, source: -1 }
 
   onHeader(cells: string[], row: number) {
-    const header = readHeader(cells, row, {
-      required: ['from_part', 'to_part', 'relation'],
-      known: LINK_COLUMNS,
-      extraColumns: 'refused',
-      file: 'links file',
-      otherFile: { file: 'parts file', columns: [...PART_COLUMNS, ...Object.keys(MARK_COLUMNS)] },
-    })
+    const header = readHeader(cells, row, { type: 'links', extraColumns: 'refused' })
     this.header = header
     this.at = {
       from: header.index('from_part'),

@@ -1,10 +1,9 @@
 import type { PartInput } from '../../../shared/schemas/part-input'
 import { normalisePartCode } from '../../../shared/schemas/part'
 import { restoreCell } from '../../../shared/csv-cells'
-import { MARK_COLUMNS, PART_COLUMNS, REQUIRED_PART_COLUMNS, parsePartRow, partCells } from '../csv/part-row'
+import { parsePartRow, partCells } from '../csv/part-row'
 import { readHeader, rowShapeProblems, type Header } from '../import-header'
 import { RowIssues } from '../import-issues'
-import { LINK_COLUMNS } from '../links/link-rows'
 
 export type PartEntry = { rows: number[]; part: PartInput; fingerprint: string }
 
@@ -47,13 +46,7 @@ export class PartRows {
   private readonly conflicting = new Set<string>()
 
   onHeader(cells: string[], row: number) {
-    this.header = readHeader(cells, row, {
-      required: REQUIRED_PART_COLUMNS,
-      known: [...PART_COLUMNS, ...Object.keys(MARK_COLUMNS)],
-      extraColumns: 'allowed',
-      file: 'parts file',
-      otherFile: { file: 'links file', columns: LINK_COLUMNS },
-    })
+    this.header = readHeader(cells, row, { type: 'parts', extraColumns: 'allowed' })
   }
 
   onRow(cells: string[], row: number) {

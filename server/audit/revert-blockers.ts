@@ -1,0 +1,34 @@
+import type Database from 'better-sqlite3'
+import type { ImportRecordType } from './import-change.entity'
+
+export type Blocker = { batchId: number | null; fileName: string | null; what: string }
+
+/** Later writes that lean on what the batch wrote; while any is in place the batch cannot be undone exactly. */
+export function findBlockers(db: Database.Database, batchId: number): Blocker[] {
+  const created = (type: ImportRecordType, table: string) =>
+    `SELECT id FROM ${table} WHERE batchId = @batch AND id NOT IN
+       (SELECT recordId FROM import_change WHERE batchId = @batch AND recordType = '${type}')`
+  const outside = (alias: string) => `(${alias}."batchId" IS NULL OR ${alias}."batchId" != @batch)`
+  const sql = `
+    SELECT c.batchId AS batchId, 'changed records this batch wrote' AS what FROM import_change c
+      JOIN import_batch b ON b.id = c.batchId WHERE c.previousBatchId = @batch AND b.status = 'committed'
+    UNION SELECT l.batchId, 'links parts this batch added' FROM link l
+      WHERE ${outside('l')} AND (l.partAId IN (${created('part', 'part')}) OR l.partBId IN (${created('part', 'part')}))
+    UNION SELECT i.batchId, 'declares parts this batch added identical' FROM part_identity i
+      WHERE ${outside('i')} AND (i.partAId IN (${created('part', 'part')}) OR i.partBId IN (${created('part', 'part')}))
+    UNION SELECT l.batchId, 'uses modifications this batch proposed' FROM link_modification lm
+      JOIN link l ON l.id = lm.linkId JOIN modification m ON m.id = lm.modificationId
+      WHERE m.batchId = @batch AND ${outside('l')}
+    UNION SELECT e.batchId, 'counts field reports on links this batch added' FROM field_report_link e
+      WHERE e.batchId != @batch AND e.linkId IN (${created('link', 'link')})
+    UNION SELECT v."batchId", 'names parts this batch added as a vehicle''s original parts' FROM vehicle_original o
+      JOIN vehicle_application v ON v."id" = o."vehicleId" WHERE ${outside('v')} AND o."partId" IN (${created('part', 'part')})
+    UNION SELECT s."batchId", 'puts parts this batch added on the shelf' FROM stock_item s
+      WHERE ${outside('s')} AND s."partId" IN (${created('part', 'part')})
+    UNION SELECT NULL, 'changed a unit this batch wrote since (sold, reserved or edited at the counter)' FROM stock_item s
+      JOIN import_batch sb ON sb."id" = s."batchId" WHERE s."batchId" = @batch AND s."updatedAt" != sb."createdAt"`
+  const rows = db
+    .prepare(`SELECT x.batchId, x.what, b.fileName FROM (${sql}) x LEFT JOIN import_batch b ON b.id = x.batchId`)
+    .all({ batch: batchId }) as Blocker[]
+  return rows.sort((a, b) => (b.batchId ?? 0) - (a.batchId ?? 0))
+}

@@ -1,0 +1,149 @@
+import type Database from 'better-sqlite3'
+import { BUILD_SLOTS, SLOT_IDS, type SlotId } from '../../../shared/build-template'
+import { slotColumn } from '../../../shared/import-files'
+import type { FieldChange, ImportIssue } from '../../../shared/schemas/imports'
+import { normalisePartCode } from '../../../shared/schemas/part'
+import { ChangeList } from '../import-change-list'
+import { describeVehicle, type VehicleEntry, type VehicleKey, type VehicleRows } from './vehicle-rows'
+
+export type VehicleRecord = {
+  id: number
+  yearFrom: number
+  yearTo: number
+  make: string
+  model: string
+  body: string
+  market: string
+  engineFamily: string
+  batchId: number | null
+}
+export type OriginalRecord = { vehicleId: number; slot: string; partId: number }
+
+/** Part ids by slot, as the application will have them. */
+export type Originals = Map<SlotId, number>
+
+export type VehiclesPlan = {
+  changes: ChangeList
+  issues: ImportIssue[]
+  creates: { key: VehicleKey; originals: Originals }[]
+  updates: { previous: VehicleRecord; previousOriginals: OriginalRecord[]; originals: Originals }[]
+}
+
+const SLOT_LABEL = new Map(BUILD_SLOTS.map((slot) => [slot.id, slot.label.toLowerCase()]))
+
+function originalChanges(before: Originals, after: Originals, numberOf: (id: number) => string): FieldChange[] {
+  return SLOT_IDS.flatMap((slot) => {
+    const was = before.get(slot)
+    const is = after.get(slot)
+    if (was === is) return []
+    return [{ field: slotColumn(slot), before: was === undefined ? '' : numberOf(was), after: is === undefined ? '' : numberOf(is) }]
+  })
+}
+
+/**
+ * Weighs the checked applications against the catalogue: every part number
+ * must be a part of the slot's kind, an application the catalogue has gets
+ * its original parts updated, a new one is created. A file without body or
+ * market columns matches on the other fields, as long as that names one
+ * application.
+ */
+export function planVehicles(db: Database.Database, rows: VehicleRows): VehiclesPlan {
+  const parts = new Map<string, { id: number; kind: string }>()
+  const numbers = new Map<number, string>()
+  const keys = new Map<string, string>()
+  for (const part of db.prepare('SELECT "id", "partNumber", "partKey", "kind" FROM part').all() as {
+    id: number
+    partNumber: string
+    partKey: string
+    kind: string
+  }[]) {
+    parts.set(part.partNumber, part)
+    numbers.set(part.id, part.partNumber)
+    keys.set(part.partKey, part.partNumber)
+  }
+  const baseKey = (v: Omit<VehicleKey, 'body' | 'market'>) => JSON.stringify([v.yearFrom, v.yearTo, v.make, v.model, v.engineFamily])
+  const stored = new Map<string, VehicleRecord[]>()
+  for (const vehicle of db.prepare('SELECT * FROM vehicle_application').all() as VehicleRecord[]) {
+    const list = stored.get(baseKey(vehicle))
+    if (list) list.push(vehicle)
+    else stored.set(baseKey(vehicle), [vehicle])
+  }
+  const storedOriginals = new Map<number, OriginalRecord[]>()
+  for (const original of db.prepare('SELECT * FROM vehicle_original').all() as OriginalRecord[]) {
+    const list = storedOriginals.get(original.vehicleId)
+    if (list) list.push(original)
+    else storedOriginals.set(original.vehicleId, [original])
+  }
+  const plan: VehiclesPlan = { changes: new ChangeList(), issues: [], creates: [], updates: [] }
+  const issues = rows.issues.clone()
+  const reject = (entry: VehicleEntry, column: string, message: string) => {
+    for (const row of entry.rows) issues.add(row, column, message)
+  }
+  const numberOf = (id: number) => numbers.get(id) ?? `part id ${id}`
+
+  for (const entry of rows.entries()) {
+    const given = new Map<SlotId, number | null>()
+    let ok = true
+    for (const [slot, partNumber] of entry.originals) {
+      if (!partNumber) {
+        given.set(slot, null)
+        continue
+      }
+      const part = parts.get(partNumber)
+      const column = slotColumn(slot)
+      if (!part) {
+        const similar = keys.get(normalisePartCode(partNumber))
+        reject(
+          entry,
+          column,
+          `No part ${partNumber} in the catalogue${similar ? ` (did you mean ${similar}?)` : ''}; import it in a parts file first.`,
+        )
+        ok = false
+      } else if (part.kind !== slot) {
+        reject(entry, column, `${partNumber} is a ${part.kind} part, not a ${SLOT_LABEL.get(slot) ?? slot}.`)
+        ok = false
+      } else given.set(slot, part.id)
+    }
+    const { key } = entry
+    const matches = (stored.get(baseKey(key)) ?? []).filter(
+      (v) => (key.body === null || v.body === key.body) && (key.market === null || v.market === key.market),
+    )
+    if (matches.length > 1) {
+      const message = `${describeVehicle(key)} matches ${matches.length} applications in the catalogue; add body and market columns to say which.`
+      reject(entry, key.body === null ? 'body' : 'market', message)
+      ok = false
+    }
+    if (!ok) continue
+    const [firstRow] = entry.rows as [number]
+    plan.changes.repeats(entry.rows.length - 1)
+    const match = matches[0]
+    if (!match) {
+      const originals: Originals = new Map([...given].flatMap(([slot, id]) => (id === null ? [] : [[slot, id] as const])))
+      plan.creates.push({ key, originals })
+      plan.changes.create(
+        firstRow,
+        () => describeVehicle(key),
+        () => [
+          { field: 'year_from', before: '', after: String(key.yearFrom) },
+          { field: 'year_to', before: '', after: String(key.yearTo) },
+          ...originalChanges(new Map(), originals, numberOf),
+        ],
+      )
+      continue
+    }
+    const previousOriginals = storedOriginals.get(match.id) ?? []
+    const before: Originals = new Map(previousOriginals.map((o) => [o.slot as SlotId, o.partId]))
+    // A slot column the file does not have keeps the catalogue's part; an empty cell clears it.
+    const after: Originals = new Map(before)
+    for (const [slot, id] of given) {
+      if (id === null) after.delete(slot)
+      else after.set(slot, id)
+    }
+    const fields = originalChanges(before, after, numberOf)
+    plan.changes.compare(firstRow, describeVehicle({ ...key, body: match.body, market: match.market }), fields)
+    if (fields.length) plan.updates.push({ previous: match, previousOriginals, originals: after })
+  }
+  plan.changes.rejected(issues.count)
+  plan.issues = issues.sorted()
+  return plan
+}
