@@ -35,6 +35,12 @@ import { FieldReportEvidence } from './field-reports/field-report-evidence'
 import { FieldReportReviewService } from './field-reports/field-report-review.service'
 import { databaseOf } from './db/sqlite-connection'
 import { SecurityEventService } from './security/security-events.service'
+import { AccountService } from './auth/account.service'
+import { AccountTokenRepository } from './auth/account-token.repository'
+import { ResetThrottle } from './auth/reset-throttle'
+import { SessionRepository } from './auth/session.repository'
+import { SignInThrottleRepository } from './auth/sign-in-throttle.repository'
+import { createSignInThrottle } from './auth/sign-in-throttle'
 
 /** Every service, built once per app around one data source and one rule book. */
 export function createServices(dataSource: DataSource, config: AppConfig, rules: RuleBook) {
@@ -53,12 +59,23 @@ export function createServices(dataSource: DataSource, config: AppConfig, rules:
   const completion = new BuildCompletionService(dataSource, parts, graphIndex, evaluation, modifications)
   const shopSettings = new ShopSettingsService(databaseOf(dataSource))
   const sheets = new BuildSheetService(dataSource, parts, evaluation)
+  const securityEvents = new SecurityEventService(dataSource)
+  const accounts = new AccountService(databaseOf(dataSource), new AccountTokenRepository(databaseOf(dataSource)), {
+    users,
+    outbox,
+    sessions: new SessionRepository(databaseOf(dataSource)),
+    events: securityEvents,
+    resetThrottle: new ResetThrottle(new SignInThrottleRepository(databaseOf(dataSource)), config.resetLimits),
+    signInThrottle: createSignInThrottle(dataSource, config.loginLimits),
+    publicUrl: config.publicUrl,
+  })
   return {
     rules,
     users,
     outbox,
     fieldReportNotices,
-    securityEvents: new SecurityEventService(dataSource),
+    securityEvents,
+    accounts,
     parts,
     partLookup: new PartLookupService(dataSource, parts),
     graphIndex,
