@@ -154,6 +154,12 @@ const router = createRouter({
           meta: { title: 'Your account' },
         },
         {
+          path: 'mail',
+          name: 'mail',
+          component: () => import('@/views/MailView.vue'),
+          meta: { permission: 'users.manage', title: 'Mail' },
+        },
+        {
           path: 'forbidden',
           name: 'forbidden',
           component: () => import('@/views/ForbiddenView.vue'),
