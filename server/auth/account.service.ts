@@ -11,6 +11,9 @@ import { INVITE_PENDING, type UserService } from '../users/user.service'
 import { checkNewPassword, hashPassword } from './password-policy'
 import { inviteMessage, passwordLinkUrl, resetMessage } from './account-mail'
 import type { AccountTokenRepository, TokenHolder } from './account-token.repository'
+import type { AccountTokenPurpose } from './account-token.entity'
+import type { MessageContent } from '../mail/templates'
+import type { SecurityEventKind } from '../../shared/schemas/security-events'
 import type { ResetThrottle } from './reset-throttle'
 import { lockoutMessage, type SignInThrottle } from './sign-in-throttle'
 
@@ -51,37 +54,47 @@ export class AccountService {
     return this.deps.clock?.() ?? new Date()
   }
 
-  /** A fresh token; its hash goes in the table and the token itself only in the mail. */
-  private newToken(hours: number) {
+  /**
+   * Issues a link and queues its mail inside the caller's transaction: a fresh
+   * token whose hash goes in the table and the token itself only in the mail.
+   */
+  private async mailLink(
+    tx: Database,
+    to: { userId: number; email: string },
+    purpose: AccountTokenPurpose,
+    message: (url: string, validHours: number) => MessageContent,
+  ) {
+    const hours = purpose === 'invite' ? INVITE_HOURS : RESET_HOURS
     const token = randomBytes(32).toString('base64url')
-    return { token, tokenHash: sha256(token), expiresAt: new Date(this.now().getTime() + hours * 3_600_000) }
+    const now = this.now()
+    const expiresAt = new Date(now.getTime() + hours * 3_600_000)
+    await this.tokens.issue(tx, { userId: to.userId, purpose, tokenHash: sha256(token), expiresAt }, now)
+    const url = passwordLinkUrl(this.deps.publicUrl, token)
+    await this.deps.outbox.enqueue({
+      kind: purpose === 'invite' ? 'invite' : 'password-reset',
+      recipient: to.email,
+      ...message(url, hours),
+    })
+  }
+
+  private record(kind: SecurityEventKind, acting: Acting, detail: string | null = null) {
+    return this.deps.events.record({ kind, actorId: acting.userId, actorEmail: acting.email, address: acting.address, detail })
   }
 
   /** Makes the user with no password and queues the invitation, all or nothing. */
   async invite(input: UserInviteInput, acting: Acting & { name: string }): Promise<User> {
     const email = input.email.trim().toLowerCase()
-    const { token, tokenHash, expiresAt } = this.newToken(INVITE_HOURS)
-    const now = this.now()
     const userId = await this.db.transaction(async (tx) => {
       if (await this.tokens.emailTaken(tx, email)) {
         throw AppError.conflict(`A user with e-mail ${email} exists already.`, [{ path: 'email', message: 'This e-mail is taken.' }])
       }
-      const id = await this.tokens.insertInvitedUser(tx, { ...input, email }, now)
-      await this.tokens.issue(tx, { userId: id, purpose: 'invite', tokenHash, expiresAt }, now)
-      await this.deps.outbox.enqueue({
-        kind: 'invite',
-        recipient: email,
-        ...inviteMessage({ ...input, invitedBy: acting.name, url: passwordLinkUrl(this.deps.publicUrl, token), validHours: INVITE_HOURS }),
-      })
+      const id = await this.tokens.insertInvitedUser(tx, { ...input, email }, this.now())
+      await this.mailLink(tx, { userId: id, email }, 'invite', (url, validHours) =>
+        inviteMessage({ ...input, invitedBy: acting.name, url, validHours }),
+      )
       return id
     })
-    await this.deps.events.record({
-      kind: 'invite',
-      actorId: acting.userId,
-      actorEmail: acting.email,
-      address: acting.address,
-      detail: email,
-    })
+    await this.record('invite', acting, email)
     const user = await this.deps.users.findById(userId)
     if (!user) throw new Error(`The invited user ${userId} is gone.`)
     return user
@@ -89,30 +102,20 @@ export class AccountService {
 
   /** A new invitation for someone who has not set a password yet; the earlier link stops working. */
   async reinvite(userId: number, acting: Acting & { name: string }): Promise<User> {
-    const user = await this.tokens.userById(userId)
-    if (!user) throw AppError.notFound(`No user with id ${userId}.`)
-    if (user.passwordHash !== INVITE_PENDING)
-      throw AppError.conflict(`${user.name} has set a password already; they can use "Forgot password".`)
-    if (user.disabledAt) throw AppError.conflict(`${user.name} is disabled; enable the account first.`)
-    const found = (await this.deps.users.findById(userId))!
-    const { token, tokenHash, expiresAt } = this.newToken(INVITE_HOURS)
-    const now = this.now()
-    await this.db.transaction(async (tx) => {
-      await this.tokens.issue(tx, { userId, purpose: 'invite', tokenHash, expiresAt }, now)
-      await this.deps.outbox.enqueue({
-        kind: 'invite',
-        recipient: user.email,
-        ...inviteMessage({ ...found, invitedBy: acting.name, url: passwordLinkUrl(this.deps.publicUrl, token), validHours: INVITE_HOURS }),
-      })
-    })
-    await this.deps.events.record({
-      kind: 'invite',
-      actorId: acting.userId,
-      actorEmail: acting.email,
-      address: acting.address,
-      detail: `${user.email} again`,
-    })
-    return found
+    const stored = await this.tokens.userById(userId)
+    const user = await this.deps.users.findById(userId)
+    if (!stored) throw AppError.notFound(`No user with id ${userId}.`)
+    if (stored.passwordHash !== INVITE_PENDING) {
+      throw AppError.conflict(`${stored.name} has set a password already; they can use "Forgot password".`)
+    }
+    if (!user) throw AppError.conflict(`${stored.name} is disabled; enable the account first.`)
+    await this.db.transaction((tx) =>
+      this.mailLink(tx, { userId, email: user.email }, 'invite', (url, validHours) =>
+        inviteMessage({ ...user, invitedBy: acting.name, url, validHours }),
+      ),
+    )
+    await this.record('invite', acting, `${user.email} again`)
+    return user
   }
 
   /**
@@ -122,19 +125,14 @@ export class AccountService {
   async forgotPassword(email: string, address: string): Promise<{ waitSeconds: number | null }> {
     const { retryAfterSeconds, mayMail } = await this.deps.resetThrottle.record(address, email)
     if (retryAfterSeconds !== null) return { waitSeconds: retryAfterSeconds }
-    await this.deps.events.record({ kind: 'password_reset_request', actorEmail: email, address })
+    await this.record('password_reset_request', { email, address })
     const user = await this.tokens.findUser(email)
     if (!user || user.disabledAt || !mayMail) return { waitSeconds: null }
-    const { token, tokenHash, expiresAt } = this.newToken(RESET_HOURS)
-    const now = this.now()
-    await this.db.transaction(async (tx) => {
-      await this.tokens.issue(tx, { userId: user.id, purpose: 'reset', tokenHash, expiresAt }, now)
-      await this.deps.outbox.enqueue({
-        kind: 'password-reset',
-        recipient: user.email,
-        ...resetMessage({ name: user.name, url: passwordLinkUrl(this.deps.publicUrl, token), validHours: RESET_HOURS }),
-      })
-    })
+    await this.db.transaction((tx) =>
+      this.mailLink(tx, { userId: user.id, email: user.email }, 'reset', (url, validHours) =>
+        resetMessage({ name: user.name, url, validHours }),
+      ),
+    )
     return { waitSeconds: null }
   }
 
@@ -160,13 +158,11 @@ export class AccountService {
       throw new AppError(400, 'link_unusable', LINK_UNUSABLE)
     }
     await this.deps.sessions.removeForUser(holder.userId)
-    await this.deps.events.record({
-      kind: 'password_reset',
-      actorId: holder.userId,
-      actorEmail: holder.email,
-      address,
-      detail: holder.purpose === 'invite' ? 'invitation accepted' : 'reset link used',
-    })
+    await this.record(
+      'password_reset',
+      { userId: holder.userId, email: holder.email, address },
+      holder.purpose === 'invite' ? 'invitation accepted' : 'reset link used',
+    )
     return { email: holder.email }
   }
 
@@ -194,12 +190,6 @@ export class AccountService {
     checkNewPassword(input.password)
     await this.tokens.setPassword(userId, await hashPassword(input.password), this.now())
     await this.deps.sessions.removeForUser(userId, acting.sessionId)
-    await this.deps.events.record({
-      kind: 'password_change',
-      actorId: userId,
-      actorEmail: user.email,
-      address: acting.address,
-      detail: `own password of ${user.email}`,
-    })
+    await this.record('password_change', { userId, email: user.email, address: acting.address }, `own password of ${user.email}`)
   }
 }

@@ -17,7 +17,7 @@ async function signInWith(email: string, password: string) {
   return (await anonymous(t.app)).post('/api/auth/login').send({ email, password })
 }
 
-describe('inviting a user, who chooses a password from the mailed link', () => {
+describe('inviting a user, who chooses a password from the mailed link', { timeout: 30_000 }, () => {
   it('makes the account without a password, mails a one-time link, and the link sets the password once', async () => {
     t = await createTestApp()
     const admin = await t.signIn('admin')

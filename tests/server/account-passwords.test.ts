@@ -18,7 +18,7 @@ async function signInWith(email: string, password: string) {
   return (await anonymous(t.app)).post('/api/auth/login').send({ email, password })
 }
 
-describe('"Forgot password": a time-limited, single-use link by mail', () => {
+describe('"Forgot password": a time-limited, single-use link by mail', { timeout: 30_000 }, () => {
   it('answers the same for a known and an unknown e-mail, and mails only the known one', async () => {
     t = await createTestApp()
     const visitor = await anonymous(t.app)
@@ -101,7 +101,7 @@ describe('"Forgot password": a time-limited, single-use link by mail', () => {
   })
 })
 
-describe("changing one's own password, giving the current one", () => {
+describe("changing one's own password, giving the current one", { timeout: 30_000 }, () => {
   it("refuses a wrong current password, then changes it and ends the user's other sessions but this one", async () => {
     t = await createTestApp()
     const tech = await t.signIn('tech')

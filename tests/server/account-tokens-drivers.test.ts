@@ -58,7 +58,7 @@ const PASSWORD = 'torque-in-three-stages-7'
 const ADMIN = { userId: 1, email: 'boss@shop.test', name: 'Shop Boss', address: '127.0.0.1' }
 
 /** The accounts service on one driver, with the outbox read straight from its table (nothing is delivered here). */
-describe.each(drivers)('one-time password links on $name', (driver) => {
+describe.each(drivers)('one-time password links on $name', { timeout: 30_000 }, (driver) => {
   let opened: Awaited<ReturnType<Driver['open']>>
   let accounts: AccountService
   let outbox: OutboxRepository

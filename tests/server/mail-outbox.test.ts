@@ -5,7 +5,7 @@ import { passwordLink, receivedMail } from '../helpers/mailbox'
 let t: TestApp
 afterEach(() => t.close())
 
-describe('GET /api/admin/mail, the outbox an administrator reads', () => {
+describe('GET /api/admin/mail, the outbox an administrator reads', { timeout: 30_000 }, () => {
   it('shows a queued link cut short, delivers it whole, and keeps no working link once sent', async () => {
     t = await createTestApp()
     const admin = await t.signIn('admin')
