@@ -122,6 +122,9 @@ export class UserService {
           disabledAt === undefined ? '' : ', disabledAt = ?'
         } WHERE id = ?`,
       ).run(change.name ?? null, change.role ?? null, passwordHash, ...(disabledAt === undefined ? [] : [disabledAt]), id)
+      // A password set here makes any invitation or reset link still out for the user worthless.
+      if (passwordHash)
+        db.prepare('UPDATE account_token SET usedAt = ? WHERE userId = ? AND usedAt IS NULL').run(sqliteTime(new Date()), id)
       return current
     })
     if (passwordHash || change.disabled === true) {

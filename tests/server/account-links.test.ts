@@ -90,6 +90,15 @@ describe('inviting a user, who chooses a password from the mailed link', { timeo
     expect((await admin.post(`/api/users/${user.id}/invite`)).status).toBe(409)
   })
 
+  it('retires the invitation when an administrator sets the password instead', async () => {
+    t = await createTestApp()
+    const admin = await t.signIn('admin')
+    const { body: user } = await admin.post('/api/users/invite').send({ email: 'handed@shop.test', name: 'Handed Over', role: 'tech' })
+    const { token } = passwordLink((await deliveredTo('handed@shop.test'))[0]!)
+    expect((await admin.patch(`/api/users/${user.id}`).send({ password: NEW_PASSWORD })).body.invitePending).toBe(false)
+    expect((await (await anonymous(t.app)).post('/api/auth/password-link').send({ token })).status).toBe(400)
+  })
+
   it('refuses a taken e-mail, bad input, a common password, and anyone but an administrator', async () => {
     t = await createTestApp()
     const admin = await t.signIn('admin')
