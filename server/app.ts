@@ -72,7 +72,7 @@ export async function createApp({ config, dataSource, services, version, clientD
   api.use(substituteRoutes(services.substitutes))
   api.use(buildRoutes(services))
   api.use(linkRoutes(services.links))
-  api.use(accountRoutes(services.accounts))
+  api.use(accountRoutes(services.accounts, services.ownPassword))
   api.use(userRoutes(services.users))
   api.use(securityEventRoutes(services.securityEvents))
   api.use(importRoutes(services, config))

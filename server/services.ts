@@ -36,6 +36,7 @@ import { FieldReportReviewService } from './field-reports/field-report-review.se
 import { databaseOf } from './db/sqlite-connection'
 import { SecurityEventService } from './security/security-events.service'
 import { AccountService } from './auth/account.service'
+import { OwnPasswordService } from './auth/own-password.service'
 import { AccountTokenRepository } from './auth/account-token.repository'
 import { ResetThrottle } from './auth/reset-throttle'
 import { SessionRepository } from './auth/session.repository'
@@ -60,14 +61,20 @@ export function createServices(dataSource: DataSource, config: AppConfig, rules:
   const shopSettings = new ShopSettingsService(databaseOf(dataSource))
   const sheets = new BuildSheetService(dataSource, parts, evaluation)
   const securityEvents = new SecurityEventService(dataSource)
-  const accounts = new AccountService(databaseOf(dataSource), new AccountTokenRepository(databaseOf(dataSource)), {
+  const accountRows = new AccountTokenRepository(databaseOf(dataSource))
+  const sessions = new SessionRepository(databaseOf(dataSource))
+  const accounts = new AccountService(databaseOf(dataSource), accountRows, {
     users,
     outbox,
-    sessions: new SessionRepository(databaseOf(dataSource)),
+    sessions,
     events: securityEvents,
     resetThrottle: new ResetThrottle(new SignInThrottleRepository(databaseOf(dataSource)), config.resetLimits),
-    signInThrottle: createSignInThrottle(dataSource, config.loginLimits),
     publicUrl: config.publicUrl,
+  })
+  const ownPassword = new OwnPasswordService(accountRows, {
+    sessions,
+    events: securityEvents,
+    signInThrottle: createSignInThrottle(dataSource, config.loginLimits),
   })
   return {
     rules,
@@ -76,6 +83,7 @@ export function createServices(dataSource: DataSource, config: AppConfig, rules:
     fieldReportNotices,
     securityEvents,
     accounts,
+    ownPassword,
     parts,
     partLookup: new PartLookupService(dataSource, parts),
     graphIndex,

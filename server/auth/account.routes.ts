@@ -12,6 +12,7 @@ import { AppError } from '../errors/app-error'
 import { parseBody, parseParams } from '../middleware/validate'
 import { requireRole, requireSignIn } from './require-role'
 import type { AccountService } from './account.service'
+import type { OwnPasswordService } from './own-password.service'
 
 const idParamsSchema = z.object({ id: z.coerce.number().int().positive('Give a user id.') })
 
@@ -23,7 +24,7 @@ function acting(req: Request) {
 }
 
 /** Invitations, "forgot password", mailed links, and changing one's own password. */
-export function accountRoutes(accounts: AccountService): Router {
+export function accountRoutes(accounts: AccountService, ownPassword: OwnPasswordService): Router {
   const router = Router()
   const adminOnly = requireRole(...rolesFor('users.manage'))
 
@@ -58,7 +59,7 @@ export function accountRoutes(accounts: AccountService): Router {
   })
 
   router.post('/auth/change-password', requireSignIn, async (req: Request, res: Response) => {
-    await accounts.changeOwnPassword(req.user!.id, parseBody(changePasswordSchema, req), acting(req))
+    await ownPassword.change(req.user!.id, parseBody(changePasswordSchema, req), acting(req))
     res.status(204).end()
   })
 

@@ -1,5 +1,4 @@
 import { createHash, randomBytes } from 'node:crypto'
-import bcrypt from 'bcryptjs'
 import type { Database } from '../db/database'
 import { AppError } from '../errors/app-error'
 import type { OutboxService } from '../mail/outbox.service'
@@ -15,7 +14,6 @@ import type { AccountTokenPurpose } from './account-token.entity'
 import type { MessageContent } from '../mail/templates'
 import type { SecurityEventKind } from '../../shared/schemas/security-events'
 import type { ResetThrottle } from './reset-throttle'
-import { lockoutMessage, type SignInThrottle } from './sign-in-throttle'
 
 const INVITE_HOURS = 7 * 24
 const RESET_HOURS = 1
@@ -30,11 +28,13 @@ function sha256(token: string): string {
 }
 
 /**
- * Passwords set through mailed links (invitations and resets) and a signed-in
- * user's own change. A link's token is random, kept only as its hash, works
- * once and for a limited time, and a newer link or any password change retires it.
+ * Passwords set through mailed links (invitations and resets). A link's token
+ * is random, kept only as its hash, works once and for a limited time, and a
+ * newer link or any password change retires it.
  */
 export class AccountService {
+  private readonly resetsInFlight = new Set<Promise<void>>()
+
   constructor(
     private readonly db: Database,
     private readonly tokens: AccountTokenRepository,
@@ -44,7 +44,6 @@ export class AccountService {
       sessions: SessionRepository
       events: SecurityEventService
       resetThrottle: ResetThrottle
-      signInThrottle: SignInThrottle
       publicUrl: string
       clock?: () => Date
     },
@@ -119,21 +118,35 @@ export class AccountService {
   }
 
   /**
-   * Queues a reset link when the e-mail belongs to an enabled account. The
-   * caller hears the same either way; only an address asking too often is told to wait.
+   * Answers at once, the same for every address; whether the e-mail has an
+   * enabled account is looked up after the answer, so neither the answer nor
+   * its timing tells. Only an address asking too often is told to wait.
    */
   async forgotPassword(email: string, address: string): Promise<{ waitSeconds: number | null }> {
     const { retryAfterSeconds, mayMail } = await this.deps.resetThrottle.record(address, email)
     if (retryAfterSeconds !== null) return { waitSeconds: retryAfterSeconds }
     await this.record('password_reset_request', { email, address })
+    if (mayMail) {
+      const work = this.mailReset(email).catch((error: unknown) => console.error('Reset mail not queued:', error))
+      this.resetsInFlight.add(work)
+      void work.finally(() => this.resetsInFlight.delete(work))
+    }
+    return { waitSeconds: null }
+  }
+
+  /** Resolves once the reset mails asked for so far are queued (or given up on). */
+  async resetsQueued(): Promise<void> {
+    await Promise.all([...this.resetsInFlight])
+  }
+
+  private async mailReset(email: string) {
     const user = await this.tokens.findUser(email)
-    if (!user || user.disabledAt || !mayMail) return { waitSeconds: null }
+    if (!user || user.disabledAt) return
     await this.db.transaction((tx) =>
       this.mailLink(tx, { userId: user.id, email: user.email }, 'reset', (url, validHours) =>
         resetMessage({ name: user.name, url, validHours }),
       ),
     )
-    return { waitSeconds: null }
   }
 
   private async holder(token: string): Promise<TokenHolder> {
@@ -164,32 +177,5 @@ export class AccountService {
       holder.purpose === 'invite' ? 'invitation accepted' : 'reset link used',
     )
     return { email: holder.email }
-  }
-
-  /**
-   * A signed-in user's own change, proving the current password first (wrong
-   * guesses count as failed sign-ins); the user's other sessions end.
-   */
-  async changeOwnPassword(userId: number, input: { currentPassword: string; password: string }, acting: Acting): Promise<void> {
-    const user = await this.tokens.userById(userId)
-    if (!user) throw AppError.notFound(`No user with id ${userId}.`)
-    const address = acting.address ?? ''
-    const lockout = await this.deps.signInThrottle.lockout(address, user.email)
-    if (lockout) throw new AppError(429, 'too_many_attempts', lockoutMessage(lockout))
-    if (!(await bcrypt.compare(input.currentPassword, user.passwordHash || '-'))) {
-      await this.deps.signInThrottle.recordFailure(address, user.email)
-      throw AppError.badRequest('Your current password is not right.', [
-        { path: 'currentPassword', message: 'This is not your current password.' },
-      ])
-    }
-    if (input.currentPassword === input.password) {
-      throw AppError.badRequest('Choose a password other than the current one.', [
-        { path: 'password', message: 'This is your current password; choose a new one.' },
-      ])
-    }
-    checkNewPassword(input.password)
-    await this.tokens.setPassword(userId, await hashPassword(input.password), this.now())
-    await this.deps.sessions.removeForUser(userId, acting.sessionId)
-    await this.record('password_change', { userId, email: user.email, address: acting.address }, `own password of ${user.email}`)
   }
 }

@@ -10,6 +10,7 @@ afterEach(() => t.close())
 const NEW_PASSWORD = 'torque-in-three-stages-7'
 
 async function delivered() {
+  await t.services.accounts.resetsQueued()
   await t.services.outbox.deliverDue()
   return receivedMail(t.config.mailDir)
 }

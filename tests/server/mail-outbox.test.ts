@@ -10,6 +10,7 @@ describe('GET /api/admin/mail, the outbox an administrator reads', { timeout: 30
     t = await createTestApp()
     const admin = await t.signIn('admin')
     await (await anonymous(t.app)).post('/api/auth/forgot-password').send({ email: 'tech@fitwright.test' })
+    await t.services.accounts.resetsQueued()
     const [queued] = (await admin.get('/api/admin/mail')).body.items
     expect(queued).toMatchObject({ kind: 'password-reset', status: 'queued', attempts: 0, recipient: 'tech@fitwright.test' })
     expect(queued.subject).toBe('Set a new Fitwright password')
