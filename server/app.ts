@@ -11,6 +11,7 @@ import type { AppConfig } from './config/env'
 import { securityHeaders } from './middleware/security-headers'
 import { errorHandler, notFoundApi } from './errors/error-handler'
 import { authRoutes } from './auth/auth.routes'
+import { accountRoutes } from './auth/account.routes'
 import { healthRoutes } from './health/health.routes'
 import { partRoutes } from './catalogue/parts.routes'
 import { userRoutes } from './users/users.routes'
@@ -71,6 +72,7 @@ export async function createApp({ config, dataSource, services, version, clientD
   api.use(substituteRoutes(services.substitutes))
   api.use(buildRoutes(services))
   api.use(linkRoutes(services.links))
+  api.use(accountRoutes(services.accounts, services.ownPassword))
   api.use(userRoutes(services.users))
   api.use(securityEventRoutes(services.securityEvents))
   api.use(importRoutes(services, config))

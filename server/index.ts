@@ -36,8 +36,9 @@ services.outbox.start(5_000, async () => {
 
 function shutdown() {
   server.close(() => {
-    void services.outbox
-      .stop()
+    void services.accounts
+      .resetsQueued()
+      .then(() => services.outbox.stop())
       .then(() => dataSource.destroy())
       .finally(() => process.exit(0))
   })

@@ -35,6 +35,13 @@ import { FieldReportEvidence } from './field-reports/field-report-evidence'
 import { FieldReportReviewService } from './field-reports/field-report-review.service'
 import { databaseOf } from './db/sqlite-connection'
 import { SecurityEventService } from './security/security-events.service'
+import { AccountService } from './auth/account.service'
+import { OwnPasswordService } from './auth/own-password.service'
+import { AccountTokenRepository } from './auth/account-token.repository'
+import { ResetThrottle } from './auth/reset-throttle'
+import { SessionRepository } from './auth/session.repository'
+import { SignInThrottleRepository } from './auth/sign-in-throttle.repository'
+import { createSignInThrottle } from './auth/sign-in-throttle'
 
 /** Every service, built once per app around one data source and one rule book. */
 export function createServices(dataSource: DataSource, config: AppConfig, rules: RuleBook) {
@@ -54,12 +61,30 @@ export function createServices(dataSource: DataSource, config: AppConfig, rules:
   const completion = new BuildCompletionService(parts, graphIndex, evaluation, modifications)
   const shopSettings = new ShopSettingsService(databaseOf(dataSource))
   const sheets = new BuildSheetService(dataSource, parts, evaluation)
+  const securityEvents = new SecurityEventService(dataSource)
+  const accountRows = new AccountTokenRepository(databaseOf(dataSource))
+  const sessions = new SessionRepository(databaseOf(dataSource))
+  const accounts = new AccountService(databaseOf(dataSource), accountRows, {
+    users,
+    outbox,
+    sessions,
+    events: securityEvents,
+    resetThrottle: new ResetThrottle(new SignInThrottleRepository(databaseOf(dataSource)), config.resetLimits),
+    publicUrl: config.publicUrl,
+  })
+  const ownPassword = new OwnPasswordService(accountRows, {
+    sessions,
+    events: securityEvents,
+    signInThrottle: createSignInThrottle(dataSource, config.loginLimits),
+  })
   return {
     rules,
     users,
     outbox,
     fieldReportNotices,
-    securityEvents: new SecurityEventService(dataSource),
+    securityEvents,
+    accounts,
+    ownPassword,
     parts,
     partLookup: new PartLookupService(dataSource, parts),
     graphIndex,

@@ -12,6 +12,7 @@ declare global {
       name: string
       role: Role
       disabled: boolean
+      invitePending: boolean
     }
   }
 }

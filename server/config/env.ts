@@ -21,6 +21,8 @@ const envSchema = z.object({
   FITWRIGHT_SESSION_MAX_AGE_DAYS: z.coerce.number().positive('Use a number of days above 0.').max(366).default(7),
   FITWRIGHT_LOGIN_ATTEMPTS: z.coerce.number().int().positive().default(10),
   FITWRIGHT_LOGIN_ATTEMPTS_PER_ADDRESS: z.coerce.number().int().positive().default(30),
+  FITWRIGHT_RESET_MAILS_PER_EMAIL: z.coerce.number().int().positive().default(3),
+  FITWRIGHT_RESET_REQUESTS_PER_ADDRESS: z.coerce.number().int().positive().default(20),
   FITWRIGHT_IMPORT_MAX_BYTES: z.coerce
     .number()
     .int()
@@ -72,6 +74,8 @@ export type AppConfig = {
   photoMaxBytes: number
   /** Failed sign-ins allowed in 15 minutes per address and e-mail, and per address across e-mails. */
   loginLimits: { perAccount: number; perAddress: number }
+  /** "Forgot password" in an hour: mails to one e-mail, and requests from one address. */
+  resetLimits: { perEmail: number; perAddress: number }
   /** This server's own folder for uploads in progress, beside the database file; emptied at start-up. */
   uploadTempDir: string
   /** Session cookie marked Secure: always, never (plain HTTP), or when the request came over HTTPS. */
@@ -108,6 +112,7 @@ export function loadConfig(env: NodeJS.ProcessEnv = process.env): AppConfig {
     uploadDir: value.FITWRIGHT_UPLOAD_DIR,
     photoMaxBytes: value.FITWRIGHT_PHOTO_MAX_BYTES,
     loginLimits: { perAccount: value.FITWRIGHT_LOGIN_ATTEMPTS, perAddress: value.FITWRIGHT_LOGIN_ATTEMPTS_PER_ADDRESS },
+    resetLimits: { perEmail: value.FITWRIGHT_RESET_MAILS_PER_EMAIL, perAddress: value.FITWRIGHT_RESET_REQUESTS_PER_ADDRESS },
     uploadTempDir: path.join(path.dirname(value.FITWRIGHT_DB_PATH), 'uploads-in-progress'),
     cookieSecure: cookieSecure(value.FITWRIGHT_COOKIE_SECURE, value.NODE_ENV),
     trustProxy: trustProxy(value.FITWRIGHT_TRUST_PROXY),

@@ -9,6 +9,7 @@ import { PartMarkEntity } from '../catalogue/part-mark.entity'
 import { PartEntity } from '../catalogue/part.entity'
 import { PartWordEntity } from '../catalogue/part-word.entity'
 import { SessionEntity } from '../auth/session.entity'
+import { AccountTokenEntity } from '../auth/account-token.entity'
 import { SecurityEventEntity } from '../security/security-event.entity'
 import { SignInThrottleEntity } from '../auth/sign-in-throttle.entity'
 import { UserEntity } from '../users/user.entity'
@@ -46,4 +47,5 @@ export const entities = [
   VehicleApplicationEntity,
   VehicleOriginalEntity,
   QuoteEntity,
+  AccountTokenEntity,
 ]

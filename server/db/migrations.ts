@@ -1,3 +1,5 @@
+import { AccountTokens1796223315452 } from '../migrations/1796223315452-AccountTokens'
+import { AccountTokens1796223318439 as PostgresAccountTokens1796223318439 } from '../migrations/postgres/1796223318439-AccountTokens'
 import { Quotes1796215187917 } from '../migrations/1796215187917-Quotes'
 import { Quotes1796215189078 as PostgresQuotes1796215189078 } from '../migrations/postgres/1796215189078-Quotes'
 import { ImportVehiclesStock1796223370557 } from '../migrations/1796223370557-ImportVehiclesStock'
@@ -40,6 +42,7 @@ export const migrations = [
   Vehicles1796213931900,
   BuildSheetChecklist1796214415051,
   Quotes1796215187917,
+  AccountTokens1796223315452,
   ImportVehiclesStock1796223370557,
 ]
 
@@ -56,5 +59,6 @@ export const postgresMigrations = [
   PostgresVehicles1796213933784,
   PostgresBuildSheetChecklist1796214105800,
   PostgresQuotes1796215189078,
+  PostgresAccountTokens1796223318439,
   PostgresImportVehiclesStock1796223379484,
 ]

@@ -54,9 +54,16 @@ export class OutboxRepository {
     return (await this.db.get<{ at: unknown }>('SELECT MAX("createdAt") AS "at" FROM mail_outbox WHERE "kind" = ?', [kind]))?.at ?? null
   }
 
-  async page(offset: number, limit: number) {
-    const rows = await this.db.all<OutboxRow>(`${COLUMNS} ORDER BY "id" DESC LIMIT ? OFFSET ?`, [limit, offset])
-    const total = await this.db.get<{ total: number }>('SELECT CAST(COUNT(*) AS INTEGER) AS "total" FROM mail_outbox')
+  async page(offset: number, limit: number, status?: OutboxStatus) {
+    const where = status ? 'WHERE "status" = ?' : ''
+    const filter = status ? [status] : []
+    const rows = await this.db.all<OutboxRow>(`${COLUMNS} ${where} ORDER BY "id" DESC LIMIT ? OFFSET ?`, [...filter, limit, offset])
+    const total = await this.db.get<{ total: number }>(`SELECT CAST(COUNT(*) AS INTEGER) AS "total" FROM mail_outbox ${where}`, filter)
     return { rows, total: total?.total ?? 0 }
+  }
+
+  /** Replaces a message's bodies (to drop a one-time link once it is no longer needed). */
+  async rewrite(id: number, text: string, html: string): Promise<void> {
+    await this.db.run('UPDATE mail_outbox SET "text" = ?, "html" = ? WHERE "id" = ?', [text, html, id])
   }
 }

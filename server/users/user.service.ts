@@ -15,9 +15,18 @@ import { BCRYPT_ROUNDS, checkNewPassword, hashPassword, needsRehash } from '../a
 const NO_SUCH_USER_HASH = bcrypt.hashSync('no such user', BCRYPT_ROUNDS)
 /** The seeded demo accounts' cost: their password is published anyway, and seeding stays quick. */
 const DEMO_ROUNDS = 10
+/** The hash of an invited user who has not chosen a password yet: nothing matches it. */
+export const INVITE_PENDING = ''
 
 export function toUser(entity: UserEntity): User {
-  return { id: entity.id, email: entity.email, name: entity.name, role: entity.role, disabled: entity.disabledAt !== null }
+  return {
+    id: entity.id,
+    email: entity.email,
+    name: entity.name,
+    role: entity.role,
+    disabled: entity.disabledAt !== null,
+    invitePending: entity.passwordHash === INVITE_PENDING,
+  }
 }
 
 export class UserService {
@@ -34,8 +43,10 @@ export class UserService {
   /** The user for a right e-mail and password; a disabled account is refused with its own message once the password is right. */
   async verifyCredentials(email: string, password: string): Promise<User | null> {
     const entity = await this.users.findOneBy({ email: email.trim().toLowerCase() })
-    const matches = await bcrypt.compare(password, entity?.passwordHash ?? NO_SUCH_USER_HASH)
-    if (!entity || !matches) return null
+    const pending = !entity || entity.passwordHash === INVITE_PENDING
+    // An invited user without a password yet takes as long to refuse as anyone else.
+    const matches = await bcrypt.compare(password, pending ? NO_SUCH_USER_HASH : entity.passwordHash)
+    if (!entity || pending || !matches) return null
     if (entity.disabledAt) throw new AppError(403, 'account_disabled', 'This account is disabled. Ask an administrator to enable it.')
     // The password is at hand only now, so this is when an older, cheaper hash is made again at today's cost.
     if (needsRehash(entity.passwordHash)) await this.users.update({ id: entity.id }, { passwordHash: await hashPassword(password) })
@@ -111,6 +122,9 @@ export class UserService {
           disabledAt === undefined ? '' : ', disabledAt = ?'
         } WHERE id = ?`,
       ).run(change.name ?? null, change.role ?? null, passwordHash, ...(disabledAt === undefined ? [] : [disabledAt]), id)
+      // A password set here makes any invitation or reset link still out for the user worthless.
+      if (passwordHash)
+        db.prepare('UPDATE account_token SET usedAt = ? WHERE userId = ? AND usedAt IS NULL').run(sqliteTime(new Date()), id)
       return current
     })
     if (passwordHash || change.disabled === true) {

@@ -17,6 +17,8 @@ export const userSchema = z.object({
   role: roleSchema,
   /** A disabled account cannot sign in; an administrator can enable it again. */
   disabled: z.boolean(),
+  /** Invited but has not set a password yet: the invitation link is the only way in. */
+  invitePending: z.boolean().default(false),
 })
 export type User = z.infer<typeof userSchema>
 
@@ -30,7 +32,8 @@ export const ROLE_LABELS: Record<Role, string> = {
 /** bcrypt reads only the first 72 bytes, so a longer password would match others sharing them: refused instead. */
 export const PASSWORD_MAX_BYTES = 72
 
-const password = z
+/** A password someone chooses (the server also refuses common ones). */
+export const newPasswordSchema = z
   .string()
   .min(10, 'Use at least 10 characters.')
   .refine(
@@ -42,7 +45,7 @@ export const userCreateSchema = z.object({
   email: z.string().trim().toLowerCase().pipe(z.email('Enter a valid e-mail address.')),
   name: z.string().trim().min(1, 'Name is required.').max(120),
   role: roleSchema,
-  password,
+  password: newPasswordSchema,
 })
 export type UserCreateInput = z.infer<typeof userCreateSchema>
 
@@ -50,7 +53,7 @@ export const userUpdateSchema = z
   .object({
     name: z.string().trim().min(1, 'Name is required.').max(120).optional(),
     role: roleSchema.optional(),
-    password: password.optional(),
+    password: newPasswordSchema.optional(),
     disabled: z.boolean().optional(),
   })
   .refine((value) => Object.keys(value).length > 0, 'Change at least one of name, role, password or disabled.')

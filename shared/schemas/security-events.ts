@@ -7,6 +7,9 @@ export const SECURITY_EVENT_KINDS = [
   'role_change',
   'disable',
   'enable',
+  'invite',
+  'password_reset_request',
+  'password_reset',
   'import',
   'revert',
 ] as const

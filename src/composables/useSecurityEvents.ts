@@ -10,6 +10,9 @@ export const SECURITY_EVENT_LABELS: Record<SecurityEventKind, string> = {
   role_change: 'Role changed',
   disable: 'Account disabled',
   enable: 'Account enabled',
+  invite: 'User invited',
+  password_reset_request: 'Password reset asked for',
+  password_reset: 'Password set from a mailed link',
   import: 'Import committed',
   revert: 'Import reverted',
 }

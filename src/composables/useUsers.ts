@@ -1,21 +1,23 @@
 import { onMounted, reactive, ref } from 'vue'
 import { useConfirm } from 'primevue/useconfirm'
-import { ROLE_LABELS, ROLES, userCreateSchema, type Role, type User } from '@shared/schemas/auth'
+import { ROLE_LABELS, ROLES, type Role, type User } from '@shared/schemas/auth'
+import { userInviteSchema } from '@shared/schemas/accounts'
+import { accountsApi } from '@/api/accounts'
 import { ApiError } from '@/api/http'
 import { usersApi } from '@/api/users'
 import { fieldMessages, issuesAsFieldErrors, placeFieldMessages } from '@/lib/field-errors'
 import { useNotify } from './useNotify'
 import { useRemote } from './useRemote'
 
-export type UserDraft = { email: string; name: string; role: Role; password: string }
+export type UserDraft = { email: string; name: string; role: Role }
 
-/** The fields the "add a user" form shows; a message for any other goes to the toast. */
-const DRAFT_FIELDS = ['email', 'name', 'role', 'password'] as const
+/** The fields the "invite a user" form shows; a message for any other goes to the toast. */
+const DRAFT_FIELDS = ['email', 'name', 'role'] as const
 
 const ROLE_OPTIONS = ROLES.map((role) => ({ value: role, label: ROLE_LABELS[role] }))
 
 /**
- * The users screen: the list, adding a user, changing a role, disabling and enabling. Every failure
+ * The users screen: the list, inviting a user (again), changing a role, disabling and enabling. Every failure
  * is said: a field's message beside the field, anything else in the toast.
  */
 export function useUsers() {
@@ -24,16 +26,16 @@ export function useUsers() {
   /** Roles chosen in a select but not stored yet (asking, saving); anything else shows what the server holds. */
   const pendingRoles = ref<Partial<Record<number, Role>>>({})
   const list = useRemote<User[]>()
-  const draft = reactive<UserDraft>({ email: '', name: '', role: 'counter', password: '' })
+  const draft = reactive<UserDraft>({ email: '', name: '', role: 'counter' })
   const fieldErrors = ref<Record<string, string>>({})
   const isSaving = ref(false)
 
   const load = () => list.run((signal) => usersApi.list(signal))
   onMounted(load)
 
-  /** Adds the user in the draft; on success the draft is cleared (the role stays for the next one). */
-  async function create(): Promise<User | null> {
-    const parsed = userCreateSchema.safeParse(draft)
+  /** Invites the user in the draft; on success the draft is cleared (the role stays for the next one). */
+  async function invite(): Promise<User | null> {
+    const parsed = userInviteSchema.safeParse(draft)
     if (!parsed.success) {
       fieldErrors.value = fieldMessages(issuesAsFieldErrors(parsed.error.issues))
       return null
@@ -41,18 +43,28 @@ export function useUsers() {
     fieldErrors.value = {}
     isSaving.value = true
     try {
-      const user = await usersApi.create(parsed.data)
-      Object.assign(draft, { email: '', name: '', password: '' })
-      notify.success(`Added ${user.name}`)
+      const user = await accountsApi.invite(parsed.data)
+      Object.assign(draft, { email: '', name: '' })
+      notify.success(`Invitation sent to ${user.name}`, user.email)
       void load()
       return user
     } catch (error) {
       const { messages, unplaced } = placeFieldMessages(error instanceof ApiError ? error.details : [], DRAFT_FIELDS)
       fieldErrors.value = messages
-      if (unplaced || Object.keys(messages).length === 0) notify.failure('User not added', error)
+      if (unplaced || Object.keys(messages).length === 0) notify.failure('User not invited', error)
       return null
     } finally {
       isSaving.value = false
+    }
+  }
+
+  /** A new link for someone whose invitation ran out or went astray; the earlier one stops working. */
+  async function inviteAgain(user: User) {
+    try {
+      await accountsApi.inviteAgain(user.id)
+      notify.success(`New invitation sent to ${user.name}`, user.email)
+    } catch (error) {
+      notify.failure('Invitation not sent', error)
     }
   }
 
@@ -123,7 +135,8 @@ export function useUsers() {
     draft,
     fieldErrors,
     isSaving,
-    create,
+    invite,
+    inviteAgain,
     roleShown,
     askRoleChange,
     askDisabledChange,

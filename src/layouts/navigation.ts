@@ -30,6 +30,7 @@ export const NAVIGATION: NavigationLink[] = [
   },
   { name: 'users', label: 'Users', icon: 'pi-users', permission: 'users.manage' },
   { name: 'security-events', label: 'Security', icon: 'pi-shield', permission: 'users.manage' },
+  { name: 'mail', label: 'Mail', icon: 'pi-envelope', permission: 'users.manage' },
 ]
 
 export function navigationFor(role: Role | undefined): NavigationLink[] {

@@ -17,6 +17,18 @@ const router = createRouter({
   routes: [
     { path: '/sign-in', name: 'sign-in', component: () => import('@/views/SignInView.vue'), meta: { public: true, title: 'Sign in' } },
     {
+      path: '/forgot-password',
+      name: 'forgot-password',
+      component: () => import('@/views/ForgotPasswordView.vue'),
+      meta: { public: true, title: 'Forgot password' },
+    },
+    {
+      path: '/set-password',
+      name: 'set-password',
+      component: () => import('@/views/SetPasswordView.vue'),
+      meta: { public: true, title: 'Choose a password' },
+    },
+    {
       path: '/',
       component: () => import('@/layouts/AppLayout.vue'),
       children: [
@@ -152,6 +164,18 @@ const router = createRouter({
           name: 'security-events',
           component: () => import('@/views/SecurityEventsView.vue'),
           meta: { permission: 'users.manage', title: 'Security events' },
+        },
+        {
+          path: 'account',
+          name: 'account',
+          component: () => import('@/views/AccountView.vue'),
+          meta: { title: 'Your account' },
+        },
+        {
+          path: 'mail',
+          name: 'mail',
+          component: () => import('@/views/MailView.vue'),
+          meta: { permission: 'users.manage', title: 'Mail' },
         },
         {
           path: 'forbidden',

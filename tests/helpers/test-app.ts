@@ -80,6 +80,7 @@ export async function createTestApp(options: { demo?: boolean; env?: Record<stri
       return agent
     },
     async close() {
+      await services.accounts.resetsQueued()
       await services.outbox.stop()
       await dataSource.destroy()
       rmSync(dir, { recursive: true, force: true })

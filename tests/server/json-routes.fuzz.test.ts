@@ -16,6 +16,11 @@ const ROUTES = [
   ['post', '/api/identities'],
   ['post', '/api/users'],
   ['patch', '/api/users/2'],
+  ['post', '/api/users/invite'],
+  ['post', '/api/auth/forgot-password'],
+  ['post', '/api/auth/password-link'],
+  ['post', '/api/auth/set-password'],
+  ['post', '/api/auth/change-password'],
 ] as const
 
 const SLOT_WORDS = ['head', 'block', 'ecu', 'slots', 'name', 'partNumber', 'TM-HD-2000', '__proto__', 'constructor']

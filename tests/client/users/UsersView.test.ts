@@ -44,8 +44,7 @@ async function mountView() {
 async function addUser(wrapper: Awaited<ReturnType<typeof mountView>>) {
   await wrapper.get('#new-user-email').setValue('new.tech@fitwright.test')
   await wrapper.get('#new-user-name').setValue('New Tech')
-  await wrapper.get('#new-user-password').setValue('a-long-enough-passphrase-9')
-  await wrapper.get('form[aria-label="Add a user"]').trigger('submit')
+  await wrapper.get('form[aria-label="Invite a user"]').trigger('submit')
   await flushPromises()
 }
 
@@ -54,8 +53,8 @@ afterEach(() => {
   document.body.innerHTML = ''
 })
 
-describe('UsersView, adding a user', () => {
-  it('says in the toast that the user was not added when the server cannot be reached, and keeps the form filled', async () => {
+describe('UsersView, inviting a user', () => {
+  it('says in the toast that the user was not invited when the server cannot be reached, and keeps the form filled', async () => {
     const calls = stubServer(() => {
       throw new TypeError('Failed to fetch')
     })
@@ -64,7 +63,7 @@ describe('UsersView, adding a user', () => {
     await addUser(wrapper)
 
     expect(calls.filter((call) => call.method === 'POST')).toHaveLength(1)
-    expect(document.body.textContent).toContain('User not added')
+    expect(document.body.textContent).toContain('User not invited')
     expect(document.body.textContent).toContain('Cannot reach the Fitwright server')
     expect((wrapper.get('#new-user-email').element as HTMLInputElement).value).toBe('new.tech@fitwright.test')
     wrapper.unmount()
@@ -91,7 +90,7 @@ describe('UsersView, adding a user', () => {
     await addUser(wrapper)
 
     expect(wrapper.get('#new-user-email-error').text()).toBe('This e-mail is taken.')
-    expect(document.body.textContent).not.toContain('User not added')
+    expect(document.body.textContent).not.toContain('User not invited')
     wrapper.unmount()
   })
 
@@ -99,7 +98,7 @@ describe('UsersView, adding a user', () => {
     const calls = stubServer(() => errorAnswer(500, 'internal', 'not expected'))
     const wrapper = await mountView()
 
-    await wrapper.get('form[aria-label="Add a user"]').trigger('submit')
+    await wrapper.get('form[aria-label="Invite a user"]').trigger('submit')
     await flushPromises()
 
     expect(wrapper.get('#new-user-email-error').text()).toBe('Enter a valid e-mail address.')
@@ -108,7 +107,7 @@ describe('UsersView, adding a user', () => {
     wrapper.unmount()
   })
 
-  it('adds the user, says so, clears the form and loads the list again', async () => {
+  it('invites the user, says so, clears the form and loads the list again', async () => {
     const created = { id: 9, email: 'new.tech@fitwright.test', name: 'New Tech', role: 'counter', disabled: false }
     const calls = stubServer(() => new Response(JSON.stringify(created), { status: 201, headers: { 'Content-Type': 'application/json' } }))
     const wrapper = await mountView()
@@ -116,13 +115,9 @@ describe('UsersView, adding a user', () => {
     await addUser(wrapper)
 
     const post = calls.find((call) => call.method === 'POST')
-    expect(post?.body).toEqual({
-      email: 'new.tech@fitwright.test',
-      name: 'New Tech',
-      role: 'counter',
-      password: 'a-long-enough-passphrase-9',
-    })
-    expect(document.body.textContent).toContain('Added New Tech')
+    expect(post?.path).toBe('/api/users/invite')
+    expect(post?.body).toEqual({ email: 'new.tech@fitwright.test', name: 'New Tech', role: 'counter' })
+    expect(document.body.textContent).toContain('Invitation sent to New Tech')
     expect((wrapper.get('#new-user-email').element as HTMLInputElement).value).toBe('')
     expect(calls.filter((call) => call.method === 'GET')).toHaveLength(2)
     wrapper.unmount()

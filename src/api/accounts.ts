@@ -1,0 +1,33 @@
+import { userSchema } from '@shared/schemas/auth'
+import {
+  forgotPasswordAnswerSchema,
+  passwordLinkInfoSchema,
+  setPasswordAnswerSchema,
+  type ChangePasswordInput,
+  type SetPasswordInput,
+  type UserInviteInput,
+} from '@shared/schemas/accounts'
+import { csrfHeader, refreshCsrfToken, request, requestVoid } from './http'
+
+/** Pages open without a session need a CSRF token too: ask for one first when there is none. */
+async function withToken() {
+  if (Object.keys(csrfHeader()).length === 0) await refreshCsrfToken()
+}
+
+export const accountsApi = {
+  invite: (input: UserInviteInput) => request('POST', '/users/invite', userSchema, { body: input }),
+  inviteAgain: (id: number) => request('POST', `/users/${id}/invite`, userSchema),
+  async forgotPassword(email: string) {
+    await withToken()
+    return request('POST', '/auth/forgot-password', forgotPasswordAnswerSchema, { body: { email } })
+  },
+  async linkInfo(token: string) {
+    await withToken()
+    return request('POST', '/auth/password-link', passwordLinkInfoSchema, { body: { token } })
+  },
+  async setPassword(input: SetPasswordInput) {
+    await withToken()
+    return request('POST', '/auth/set-password', setPasswordAnswerSchema, { body: input })
+  },
+  changePassword: (input: ChangePasswordInput) => requestVoid('POST', '/auth/change-password', { body: input }),
+}
