@@ -8,7 +8,7 @@
  * The write runs as one synchronous transaction, so the server says nothing
  * while it runs; from outside it shows as the write-ahead log growing (the
  * transaction's pages spill there before the commit). A first, uncut import
- * measures how far the log grows during a whole write; each round then kills
+ * measures how far the log grows before its commit shows to another reader; each round then kills
  * the server once the log has grown by a larger share of that, so the kills
  * land across the open transaction. A round whose parts are wholly from before
  * although the log had grown was killed inside the transaction.
@@ -31,7 +31,8 @@ function partsCsv(round: number): string {
 }
 
 function startServer(dbPath: string): Promise<{ child: ChildProcess; base: string }> {
-  const child = spawn('node_modules/.bin/tsx', ['server/index.ts'], {
+  // Node itself with tsx's loader, not the tsx wrapper: a kill must reach the server, not a parent that leaves it running.
+  const child = spawn(process.execPath, ['--import', 'tsx', 'server/index.ts'], {
     env: {
       ...process.env,
       NODE_ENV: 'test',
@@ -101,10 +102,16 @@ function check(dbPath: string, before: number, round: number): string {
  * from its start: a log file left long by an earlier write is reused in place
  * and would not grow until the new write passed its old length.
  */
-function truncateLog(dbPath: string) {
+async function truncateLog(dbPath: string) {
   const db = new Database(dbPath)
   try {
-    db.pragma('wal_checkpoint(TRUNCATE)')
+    // Busy while the server's own beat holds a read: try again shortly.
+    for (let attempt = 0; attempt < 200; attempt++) {
+      const [result] = db.pragma('wal_checkpoint(TRUNCATE)') as { busy: number }[]
+      if (result?.busy === 0 && walSize(dbPath) === 0) return
+      await new Promise((resolve) => setTimeout(resolve, 10))
+    }
+    throw new Error(`The write-ahead log could not be emptied (${walSize(dbPath)} bytes left).`)
   } finally {
     db.close()
   }
@@ -170,25 +177,34 @@ async function logGrown(dbPath: string, from: number, bytes: number, giveUpMs: n
 const dir = mkdtempSync(path.join(tmpdir(), 'fitwright-crash-'))
 const dbPath = path.join(dir, 'crash.sqlite')
 try {
-  // Round 0, uncut: how far the log grows while one whole import writes.
+  // Round 0, uncut: how far the log grows before the import's commit becomes visible to another reader.
   let fullGrowth = 0
   {
     const { child, base } = await startServer(dbPath)
     const session = await signIn(base)
-    truncateLog(dbPath)
+    await truncateLog(dbPath)
     const walBefore = walSize(dbPath)
     const started = Date.now()
+    const probe = new Database(dbPath)
+    const lastRow = probe.prepare('SELECT 1 FROM part WHERE "partNumber" = ?').pluck()
+    let committed = false
+    let committedAfterMs = 0
+    const watching = setInterval(() => {
+      if (committed) return
+      if (lastRow.get(`TM-CR0-${ROWS - 1}`)) {
+        committed = true
+        committedAfterMs = Date.now() - started
+      } else fullGrowth = walSize(dbPath) - walBefore
+    }, 1)
     const run = await startImport(base, session, 0)
-    let peak = 0
-    const watching = setInterval(() => (peak = Math.max(peak, walSize(dbPath) - walBefore)), 1)
     const ok = await run.finish()
     clearInterval(watching)
-    fullGrowth = Math.max(peak, walSize(dbPath) - walBefore)
+    probe.close()
     child.kill('SIGKILL')
     await new Promise((resolve) => child.once('exit', resolve))
-    if (!ok) throw new Error('The uncut import gave no answer.')
+    if (!ok || !committed) throw new Error('The uncut import gave no answer or never committed.')
     console.log(
-      `uncut import: ${ROWS.toLocaleString('en')} parts in ${Date.now() - started} ms; the log grew by ${(fullGrowth / 1024).toFixed(0)} KB during the write`,
+      `uncut import: ${ROWS.toLocaleString('en')} parts committed after ${committedAfterMs} ms, answered after ${Date.now() - started} ms; the log grew by ${(fullGrowth / 1024).toFixed(0)} KB before the commit showed`,
     )
   }
   let inside = 0
@@ -199,23 +215,27 @@ try {
       throw error
     })
     const before = countParts(dbPath)
-    truncateLog(dbPath)
+    await truncateLog(dbPath)
     const walBefore = walSize(dbPath)
-    const run = await startImport(base, session, round)
+    // The log is watched from the moment the file is sent: the server's own lines leave only between turns of
+    // its event loop, so the one saying the write has begun may arrive after the write is done.
+    const running = startImport(base, session, round)
+    running.catch(() => undefined)
     // Spread across the write: round r waits for r / (rounds + 1) of the uncut import's growth.
     const target = Math.max(1, Math.floor((fullGrowth * round) / (rounds + 1)))
-    const grown = run.answered() ? 0 : await logGrown(dbPath, walBefore, target, 60_000)
-    const answeredBeforeKill = run.answered()
+    const grown = await logGrown(dbPath, walBefore, target, 120_000)
     const exited = new Promise((resolve) => child.once('exit', resolve))
     child.kill('SIGKILL')
     await exited
-    await run.reader.cancel().catch(() => undefined)
+    const run = await running.catch(() => null)
+    const answeredBeforeKill = run?.answered() ?? false
+    await run?.reader.cancel().catch(() => undefined)
     const state = check(dbPath, before, round)
     const wasInside = state === 'before' && grown > 0
     if (wasInside) inside++
     const leftovers = readdirSync(path.join(dir, 'uploads-in-progress')).length
     console.log(
-      `round ${round}: killed once the log had grown by ${(grown / 1024).toFixed(0)} KB of the ${(fullGrowth / 1024).toFixed(0)} KB a whole write adds` +
+      `round ${round}: killed once the log had grown by ${(grown / 1024).toFixed(0)} KB of the ${(fullGrowth / 1024).toFixed(0)} KB the uncut write added before its commit` +
         `${answeredBeforeKill ? ' (the commit had answered)' : ''}; integrity ok, parts wholly ${state}` +
         `${wasInside ? ' (killed inside the open write transaction: rolled back)' : ''}; ${leftovers} upload file(s) left until the next start`,
     )
