@@ -52,6 +52,9 @@ describe.skipIf(!run)('technician: a build sheet becomes a printed quote', () =>
 
   it('makes a quote from a demo sheet with the shop, the customer, the units to take, the totals and the cautions', async () => {
     quote = await makeQuoteFromSheet(page, server.url, 'Walk-in, green hatchback')
+    const nav = page.getByRole('navigation', { name: 'Main' })
+    expect(await nav.getByRole('link', { name: 'Quotes' }).getAttribute('aria-current')).toBe('page')
+    expect(await nav.getByRole('link', { name: 'Shop' }).count()).toBe(0)
     const header = page.locator('.quote-header')
     expect(await header.textContent()).toContain('Fitwright demo shop')
     expect(await header.textContent()).toContain('Walk-in, green hatchback')
@@ -95,6 +98,15 @@ describe.skipIf(!run)('technician: a build sheet becomes a printed quote', () =>
     await page.setViewportSize({ width: 1366, height: 900 })
   })
 
+  it('keeps the build sheets list within a tablet with the quote button on each row', async () => {
+    await page.setViewportSize({ width: 768, height: 1024 })
+    await page.goto(`${server.url}/builds`)
+    await page.getByRole('button', { name: `Make a quote for ${SHEET}`, exact: true }).waitFor(within)
+    expect(await page.evaluate(() => document.documentElement.scrollWidth)).toBeLessThanOrEqual(768)
+    await saveScreenshot(page, 'build-sheets-quote-tablet')
+    await page.setViewportSize({ width: 1366, height: 900 })
+  })
+
   it('accepting holds the units; a second quote for the same units is refused, naming the unit that is gone', async () => {
     const second = await makeQuoteFromSheet(page, server.url, 'Second customer')
     await page.goto(`${server.url}/quotes/${quote.id}`)
@@ -107,6 +119,8 @@ describe.skipIf(!run)('technician: a build sheet becomes a printed quote', () =>
     const refusal = page.getByRole('alert').filter({ hasText: 'Not accepted' })
     await expect.poll(() => refusal.textContent(), within).toContain('is gone since the quote was made')
     expect(await refusal.textContent()).toMatch(/The unit of TM-[A-Z]{2}-\d{4} at /)
+    // Asking again would only be refused again: the counter makes a new quote instead.
+    expect(await page.getByRole('button', { name: /^Accept and hold/ }).isDisabled()).toBe(true)
     await saveScreenshot(page, 'quote-refused')
     // The refused accept is the one error answer this test asks for; the browser logs it.
     const expected = consoleErrors.filter((text) => text.includes('409'))
@@ -118,6 +132,55 @@ describe.skipIf(!run)('technician: a build sheet becomes a printed quote', () =>
     await expect.poll(() => rows.count(), within).toBe(2)
     expect(await rows.first().textContent()).toContain('Second customer')
     expect(await rows.nth(1).textContent()).toContain('Accepted')
+    expect(consoleErrors, consoleErrors.join('\n')).toEqual([])
+  })
+
+  it("lets an admin set the shop's details; the next quote, made from the planner, prints them", async () => {
+    await page.getByRole('button', { name: 'Sign out' }).click()
+    await signInAs(page, server.url, 'admin')
+    // Signing out and in asks who is signed in and is told 401 on the way: expected, not a fault.
+    consoleErrors.length = 0
+    await page.getByRole('navigation', { name: 'Main' }).getByRole('link', { name: 'Shop' }).click()
+    await page.waitForURL(/\/settings\/shop$/)
+    await expect.poll(() => page.getByLabel('Labour rate per hour').inputValue(), within).toBe('84.50')
+    await page.getByLabel('Labour rate per hour').fill('84.5.0')
+    await page.getByRole('button', { name: 'Save settings' }).click()
+    expect(await page.getByText('Give the rate per hour as an amount').isVisible()).toBe(true)
+    await page.getByLabel('Shop name').fill('Harl Street Engines')
+    await page.getByLabel('Address (printed under the name)').fill('3 Harl Street, Brackton')
+    await page.getByLabel('Labour rate per hour').fill('90')
+    await page.getByLabel('Tax rate (%)').fill('8.25')
+    await page.getByLabel('Currency (three-letter code)').fill('gbp')
+    await page.getByRole('button', { name: 'Save settings' }).click()
+    await page.getByText('Shop settings saved').waitFor(within)
+    expect(await page.getByText('Give the rate per hour as an amount').count()).toBe(0)
+    expect(await page.getByLabel('Labour rate per hour').getAttribute('class')).not.toContain('p-invalid')
+    await page.waitForTimeout(600)
+    await saveScreenshot(page, 'shop-settings')
+    await page.setViewportSize({ width: 768, height: 1024 })
+    expect(await page.evaluate(() => document.documentElement.scrollWidth)).toBeLessThanOrEqual(768)
+    await saveScreenshot(page, 'shop-settings-tablet')
+    await page.setViewportSize({ width: 1366, height: 900 })
+    await page.reload()
+    await expect.poll(() => page.getByLabel('Tax rate (%)').inputValue(), within).toBe('8.25')
+    expect(await page.getByLabel('Currency (three-letter code)').inputValue()).toBe('GBP')
+
+    await page.goto(`${server.url}/planner?block=TM-BL-1800&head=TM-HD-2000`)
+    const make = page.getByRole('toolbar', { name: 'Build actions' }).getByRole('button', { name: 'Make a quote' })
+    await expect.poll(() => make.isEnabled(), within).toBe(true)
+    await make.click()
+    await page.getByRole('button', { name: 'Make the quote' }).click()
+    await page.waitForURL(/\/quotes\/\d+$/)
+    const header = page.locator('.quote-header')
+    await expect.poll(() => header.textContent(), within).toContain('Harl Street Engines')
+    expect(await header.textContent()).toContain('3 Harl Street, Brackton')
+    const totals = (await page.getByRole('region', { name: 'Totals' }).textContent()) ?? ''
+    expect(totals).toContain('Tax (8.25%)')
+    expect(totals).toContain('£')
+    // Labour at the new rate: £90.00 an hour (CLDR en-GB pattern for GBP).
+    expect(await page.getByRole('region', { name: 'Labour' }).textContent()).toContain('£90.00 / h')
+    await page.getByRole('link', { name: 'Back to the planner' }).click()
+    await page.waitForURL(/\/planner\?.*head=TM-HD-2000/)
     expect(consoleErrors, consoleErrors.join('\n')).toEqual([])
   })
 })
