@@ -6,6 +6,7 @@ import { toIsoTime, type Database } from '../db/database'
 import { AppError } from '../errors/app-error'
 import type { BuildEvaluationService } from '../builds/build-evaluation.service'
 import type { BuildSheetService } from '../builds/build-sheet.service'
+import type { PartRepository } from '../catalogue/part.repository'
 import type { ShopSettingsService } from '../settings/shop-settings.service'
 import type { StockIndex } from '../stock/stock-index'
 import type { StockRepository } from '../stock/stock.repository'
@@ -52,6 +53,7 @@ export class QuoteService {
     private readonly shop: ShopSettingsService,
     private readonly stock: StockRepository,
     private readonly stockIndex: StockIndex,
+    private readonly parts: PartRepository,
   ) {}
 
   async create(request: QuoteRequest, user: User): Promise<Quote> {
@@ -60,13 +62,12 @@ export class QuoteService {
     const shop = await this.shop.get()
     const units = await this.stock.unitsOf(evaluation.partsList.flatMap((line) => (line.partNumber ? [line.partNumber] : [])))
     const sites = new Map((await this.stock.sites()).map((site) => [site.id, site.name]))
-    const lines = quoteLines(
-      evaluation,
-      build.slots,
-      shop,
-      (partNumber) => units.filter((unit) => unit.partNumber === partNumber),
-      (siteId) => sites.get(siteId) ?? `site ${siteId}`,
-    )
+    const listPrices = await this.parts.listPrices(evaluation.partsList.flatMap((line) => (line.partNumber ? [line.partNumber] : [])))
+    const lines = quoteLines(evaluation, build.slots, shop, {
+      unitsOf: (partNumber) => units.filter((unit) => unit.partNumber === partNumber),
+      siteName: (siteId) => sites.get(siteId) ?? `site ${siteId}`,
+      listPriceOf: (partNumber) => listPrices.get(partNumber) ?? null,
+    })
     const body: Body = {
       buildName,
       shop,

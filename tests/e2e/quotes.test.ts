@@ -64,8 +64,9 @@ describe.skipIf(!run)('technician: a build sheet becomes a printed quote', () =>
     // The demo's new TK20V head sits on the Northgate counter's shelf (data/demo/stock.json).
     const head = page.locator('tr', { has: page.getByRole('cell', { name: 'TM-HD-2000', exact: true }) }).first()
     expect(await head.textContent()).toContain('Northgate counter, Aisle 3, shelf 2')
-    const parts = page.getByRole('region', { name: 'Parts and consumables' })
-    expect(await parts.textContent()).toContain('order')
+    // No cam gear on a demo shelf: to order at its demo list price (data/demo/parts/timing.csv).
+    const camGear = page.locator('tr', { has: page.getByRole('cell', { name: 'TM-CG-2000', exact: true }) }).first()
+    expect(await camGear.textContent()).toMatch(/order.*€72\.00.*€72\.00/)
     expect(await page.getByRole('region', { name: 'Labour' }).textContent()).toContain('Base job time')
     const totals = (await page.getByRole('region', { name: 'Totals' }).textContent()) ?? ''
     for (const cents of [quote.totals.partsCents, quote.totals.labourCents, quote.totals.taxCents, quote.totals.totalCents]) {
@@ -75,6 +76,15 @@ describe.skipIf(!run)('technician: a build sheet becomes a printed quote', () =>
     expect(await page.getByRole('region', { name: 'Cautions' }).textContent()).toContain('service manual')
     expect(await page.getByRole('region', { name: 'Sign-off' }).textContent()).toContain("Customer's signature")
     await saveScreenshot(page, 'quote')
+  })
+
+  it('shows the list price on the part page, or that a part has none', async () => {
+    await page.goto(`${server.url}/parts/TM-CG-2000`)
+    await expect.poll(() => page.locator('.part-list-price').textContent(), within).toContain('List price €72.00')
+    await page.goto(`${server.url}/parts/TM-HD-2000`)
+    await expect.poll(() => page.locator('.part-list-price').textContent(), within).toContain('No list price')
+    await page.goto(`${server.url}/quotes/${quote.id}`)
+    await page.getByRole('region', { name: 'Totals' }).waitFor(within)
   })
 
   it('prints as a clean page: no navigation, no buttons, at desktop and tablet width', async () => {
@@ -98,12 +108,22 @@ describe.skipIf(!run)('technician: a build sheet becomes a printed quote', () =>
     await page.setViewportSize({ width: 1366, height: 900 })
   })
 
-  it('keeps the build sheets list within a tablet with the quote button on each row', async () => {
+  it('on a tablet makes the quote from the opened sheet, since the list has no room for it on each row', async () => {
     await page.setViewportSize({ width: 768, height: 1024 })
     await page.goto(`${server.url}/builds`)
-    await page.getByRole('button', { name: `Make a quote for ${SHEET}`, exact: true }).waitFor(within)
+    await page.getByRole('link', { name: `Open ${SHEET}`, exact: true }).click()
+    await page.waitForURL(/\/planner\/\d+/)
+    const make = page.getByRole('toolbar', { name: 'Build actions' }).getByRole('button', { name: 'Make a quote' })
+    await expect.poll(() => make.isEnabled(), within).toBe(true)
+    await make.click()
+    await page.getByLabel('Customer (optional)').fill('Tablet customer')
+    await page.getByRole('button', { name: 'Make the quote' }).click()
+    await page.waitForURL(/\/quotes\/\d+$/)
+    const header = page.locator('.quote-header')
+    await expect.poll(() => header.textContent(), within).toContain('Tablet customer')
+    // Unchanged since it was saved, so the quote names the sheet.
+    expect(await header.textContent()).toContain(SHEET)
     expect(await page.evaluate(() => document.documentElement.scrollWidth)).toBeLessThanOrEqual(768)
-    await saveScreenshot(page, 'build-sheets-quote-tablet')
     await page.setViewportSize({ width: 1366, height: 900 })
   })
 
@@ -129,9 +149,10 @@ describe.skipIf(!run)('technician: a build sheet becomes a printed quote', () =>
 
     await page.goto(`${server.url}/quotes`)
     const rows = page.getByRole('table', { name: 'Quotes' }).locator('tbody tr')
-    await expect.poll(() => rows.count(), within).toBe(2)
+    await expect.poll(() => rows.count(), within).toBe(3)
     expect(await rows.first().textContent()).toContain('Second customer')
-    expect(await rows.nth(1).textContent()).toContain('Accepted')
+    expect(await rows.nth(1).textContent()).toContain('Tablet customer')
+    expect(await rows.nth(2).textContent()).toContain('Accepted')
     expect(consoleErrors, consoleErrors.join('\n')).toEqual([])
   })
 
