@@ -153,6 +153,11 @@ describe.skipIf(!run)('technician: a build sheet becomes a printed quote', () =>
     expect(await rows.first().textContent()).toContain('Second customer')
     expect(await rows.nth(1).textContent()).toContain('Tablet customer')
     expect(await rows.nth(2).textContent()).toContain('Accepted')
+    await saveScreenshot(page, 'quotes-list')
+    await page.setViewportSize({ width: 768, height: 1024 })
+    expect(await page.evaluate(() => document.documentElement.scrollWidth)).toBeLessThanOrEqual(768)
+    await saveScreenshot(page, 'quotes-list-tablet')
+    await page.setViewportSize({ width: 1366, height: 900 })
     expect(consoleErrors, consoleErrors.join('\n')).toEqual([])
   })
 
