@@ -1,7 +1,7 @@
 import { lineCents } from '@shared/quote-totals'
 import type { EvaluateRequest } from '@shared/schemas/build'
 import type { Quote, QuoteLine } from '@shared/schemas/quotes'
-import { formatCount, formatDuration, formatMoney, type FormatOptions } from './format'
+import { formatCount, formatDateTime, formatDuration, formatMoney, type FormatOptions } from './format'
 
 /** What a quote is made from: a saved build sheet, or the planner's build as it stands. */
 export type QuoteBuild = { buildSheetId: number } | EvaluateRequest
@@ -13,6 +13,13 @@ const CONDITION: Record<string, string> = { new: 'new', remanufactured: 'remanuf
 /** The job number printed on a quote: the year it was made and its number, so a customer can quote it back. */
 export function jobNumber(quote: Pick<Quote, 'id' | 'createdAt'>): string {
   return `${new Date(quote.createdAt).getUTCFullYear()}-${String(quote.id).padStart(5, '0')}`
+}
+
+/** What an accepted quote says about its units: held until a time, or that the hold ran out and they went back on the shelf. */
+export function holdNote(quote: Pick<Quote, 'status' | 'reservedUntil'>, now: Date, options: FormatOptions = {}): string | null {
+  if (quote.status !== 'accepted' || !quote.reservedUntil) return null
+  const until = formatDateTime(quote.reservedUntil, options)
+  return new Date(quote.reservedUntil) > now ? `units held until ${until}` : `the hold on its units ran out on ${until}`
 }
 
 /** Parts (with their core charges and the consumables) first, then labour, as a customer reads a job. */

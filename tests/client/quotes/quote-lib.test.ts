@@ -1,6 +1,6 @@
 import { describe, expect, it } from 'vitest'
 import type { QuoteLine } from '@shared/schemas/quotes'
-import { hasUnpricedLines, jobNumber, linePrice, lineQuantity, lineSource, quoteSections } from '@/lib/quote'
+import { hasUnpricedLines, holdNote, jobNumber, linePrice, lineQuantity, lineSource, quoteSections } from '@/lib/quote'
 import { shopSettingsForm, shopSettingsFromForm } from '@/lib/shop-settings-form'
 
 const en = { locale: 'en-GB' }
@@ -44,6 +44,14 @@ const core: QuoteLine = {
 describe('a quote as the customer reads it', () => {
   it('numbers the job by year and quote number', () => {
     expect(jobNumber({ id: 12, createdAt: '2026-12-02T15:00:00.000Z' })).toBe('2026-00012')
+  })
+
+  it('says until when an accepted quote holds its units, and when the hold ran out', () => {
+    const accepted = { status: 'accepted' as const, reservedUntil: '2026-12-05T09:00:00.000Z' }
+    const options = { locale: 'en-GB', timeZone: 'UTC' }
+    expect(holdNote(accepted, new Date('2026-12-02T15:00:00Z'), options)).toBe('units held until 5 Dec 2026, 09:00')
+    expect(holdNote(accepted, new Date('2026-12-06T15:00:00Z'), options)).toBe('the hold on its units ran out on 5 Dec 2026, 09:00')
+    expect(holdNote({ status: 'draft', reservedUntil: null }, new Date(), options)).toBeNull()
   })
 
   it('lists parts with their core charges first and labour after, leaving out an empty section', () => {
