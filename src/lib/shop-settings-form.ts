@@ -10,8 +10,9 @@ export type ShopSettingsForm = {
   labourRate: string
   taxRate: string
   currency: string
-  baseMinutesPerGroup: number
-  reservationHours: number
+  /** Null while the number field is empty. */
+  baseMinutesPerGroup: number | null
+  reservationHours: number | null
 }
 
 /** Field errors use the settings' own keys, so the server's messages land beside the same fields. */
@@ -44,14 +45,16 @@ export function shopSettingsFromForm(form: ShopSettingsForm): { settings: ShopSe
   if (labourRateCents === null) errors.push({ path: 'labourRateCents', message: 'Give the rate per hour as an amount, like 84.50.' })
   const taxRateBasisPoints = parseHundredths(form.taxRate)
   if (taxRateBasisPoints === null) errors.push({ path: 'taxRateBasisPoints', message: 'Give the tax as a percentage, like 20 or 8.25.' })
+  if (form.baseMinutesPerGroup === null) errors.push({ path: 'baseMinutesPerGroup', message: 'Give the minutes per group (0 for none).' })
+  if (form.reservationHours === null) errors.push({ path: 'reservationHours', message: 'Give how many hours a unit stays held.' })
   const parsed = shopSettingsSchema.safeParse({
     name: form.name,
     address: form.address,
     labourRateCents: labourRateCents ?? 0,
     taxRateBasisPoints: taxRateBasisPoints ?? 0,
     currency: form.currency.trim().toUpperCase(),
-    baseMinutesPerGroup: form.baseMinutesPerGroup,
-    reservationHours: form.reservationHours,
+    baseMinutesPerGroup: form.baseMinutesPerGroup ?? 0,
+    reservationHours: form.reservationHours ?? 1,
   })
   if (!parsed.success) errors.push(...issuesAsFieldErrors(parsed.error.issues))
   return errors.length || !parsed.success ? { errors } : { settings: parsed.data }

@@ -104,4 +104,12 @@ describe('the shop settings form', () => {
       'taxRateBasisPoints',
     ])
   })
+
+  it('asks for the minutes and hours when their number fields are left empty', () => {
+    const empty = shopSettingsFromForm({ ...shopSettingsForm(settings), baseMinutesPerGroup: null, reservationHours: null })
+    expect('errors' in empty && empty.errors).toEqual([
+      { path: 'baseMinutesPerGroup', message: 'Give the minutes per group (0 for none).' },
+      { path: 'reservationHours', message: 'Give how many hours a unit stays held.' },
+    ])
+  })
 })
