@@ -16,21 +16,3 @@ export function decimalToCents(text: string): CentsReading {
 
 /** Cents as the decimal a spreadsheet or a form field holds: 47950 as "479.50". */
 export const centsToDecimal = (cents: number) => `${Math.floor(cents / 100)}.${String(cents % 100).padStart(2, '0')}`
-
-/**
- * Amounts typed by a person or read from a CSV cell ("84.5", "1234,50") held
- * as whole hundredths (cents, or basis points for a percentage), parsed from
- * the digits so no floating-point value ever stands for money.
- */
-export function parseHundredths(text: string): number | null {
-  const match = /^\s*(\d{1,9})(?:[.,](\d{1,2}))?\s*$/.exec(text)
-  if (!match) return null
-  return Number(match[1]) * 100 + Number((match[2] ?? '').padEnd(2, '0'))
-}
-
-/** Whole hundredths back as the decimal a form field shows: 8450 is "84.50". */
-export function hundredthsText(value: number): string {
-  const sign = value < 0 ? '-' : ''
-  const whole = Math.abs(value)
-  return `${sign}${Math.floor(whole / 100)}.${String(whole % 100).padStart(2, '0')}`
-}

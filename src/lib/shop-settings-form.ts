@@ -1,6 +1,6 @@
 import type { FieldError } from '@shared/schemas/errors'
 import { shopSettingsSchema, type ShopSettings } from '@shared/schemas/quotes'
-import { hundredthsText, parseHundredths } from '@shared/money'
+import { centsToDecimal, decimalToCents } from '@shared/money'
 import { issuesAsFieldErrors } from './field-errors'
 
 /** The shop settings as the form holds them: money and the tax rate as the decimals a person types. */
@@ -30,8 +30,9 @@ export function shopSettingsForm(settings: ShopSettings): ShopSettingsForm {
   return {
     name: settings.name,
     address: settings.address,
-    labourRate: hundredthsText(settings.labourRateCents),
-    taxRate: hundredthsText(settings.taxRateBasisPoints),
+    labourRate: centsToDecimal(settings.labourRateCents),
+    // Basis points are hundredths of a percent, written the way cents are.
+    taxRate: centsToDecimal(settings.taxRateBasisPoints),
     currency: settings.currency,
     baseMinutesPerGroup: settings.baseMinutesPerGroup,
     reservationHours: settings.reservationHours,
@@ -41,9 +42,11 @@ export function shopSettingsForm(settings: ShopSettings): ShopSettingsForm {
 /** The settings to save, or the message for each field that cannot be saved as typed. */
 export function shopSettingsFromForm(form: ShopSettingsForm): { settings: ShopSettings } | { errors: FieldError[] } {
   const errors: FieldError[] = []
-  const labourRateCents = parseHundredths(form.labourRate)
+  const labourRate = decimalToCents(form.labourRate)
+  const labourRateCents = labourRate.ok ? labourRate.cents : null
   if (labourRateCents === null) errors.push({ path: 'labourRateCents', message: 'Give the rate per hour as an amount, like 84.50.' })
-  const taxRateBasisPoints = parseHundredths(form.taxRate)
+  const taxRate = decimalToCents(form.taxRate)
+  const taxRateBasisPoints = taxRate.ok ? taxRate.cents : null
   if (taxRateBasisPoints === null) errors.push({ path: 'taxRateBasisPoints', message: 'Give the tax as a percentage, like 20 or 8.25.' })
   if (form.baseMinutesPerGroup === null) errors.push({ path: 'baseMinutesPerGroup', message: 'Give the minutes per group (0 for none).' })
   if (form.reservationHours === null) errors.push({ path: 'reservationHours', message: 'Give how many hours a unit stays held.' })

@@ -17,7 +17,7 @@ type Line = { kind: string; partNumber?: string; unitPriceCents: number; toOrder
 
 describe('list price on parts', () => {
   it('reads list_price as a decimal into whole cents, shows it on the part and in the preview', async () => {
-    const csv = `${HEADER}\nTM-XG-0001,other,Gasket kit,129.9\nTM-XG-0002,other,Seal kit,"1234,05"\nTM-XG-0003,other,Clip,\n`
+    const csv = `${HEADER}\nTM-XG-0001,other,Gasket kit,129.9\nTM-XG-0002,other,Seal kit,1234.05\nTM-XG-0003,other,Clip,\n`
     const preview = await uploadCsv(editor, csv, { type: 'parts' })
     expect(preview.body.counts).toMatchObject({ created: 3, rejected: 0 })
     const created = preview.body.changes.find((change: { key: string }) => change.key === 'TM-XG-0001')
@@ -35,6 +35,8 @@ describe('list price on parts', () => {
     ['more than two decimals', '12.345'],
     ['a currency sign', '€12.00'],
     ['words', 'ask'],
+    ['a decimal comma', '"12,50"'],
+    ['more than 1,000,000', '1000000.01'],
   ])('rejects %s at the list_price column and writes nothing', async (_what, cell) => {
     const csv = `${HEADER}\nTM-XG-0001,other,Gasket kit,10.00\nTM-XG-0009,other,Odd kit,${cell}\n`
     const preview = await uploadCsv(editor, csv, { type: 'parts' })

@@ -4,7 +4,7 @@ import { knownAttributes } from '../../../shared/schemas/part-attributes'
 import type { MarkType } from '../../../shared/schemas/part'
 import { PART_KINDS, type PartKind } from '../../../shared/schemas/part-kinds'
 import { IMPORT_FILES, PART_FILE_COLUMNS, PART_LIST_PRICE_COLUMN } from '../../../shared/import-files'
-import { hundredthsText, parseHundredths } from '../../../shared/money'
+import { centsToDecimal, decimalToCents } from '../../../shared/money'
 
 /** Columns of the parts file that are not attributes. */
 export const PART_COLUMNS = PART_FILE_COLUMNS
@@ -34,13 +34,19 @@ export function splitList(cell: string | undefined): string[] {
     .filter(Boolean)
 }
 
+const LIST_PRICE_PROBLEMS = {
+  negative: 'a list price cannot be negative',
+  not_an_amount: 'write it like 129.90, without a currency sign',
+  too_large: 'a list price is at most 1000000.00',
+} as const
+
 function parseListPrice(cell: string | undefined, errors: RowError[]): number | null {
   const text = (cell ?? '').trim()
   if (!text) return null
-  const cents = parseHundredths(text)
-  if (cents === null)
-    errors.push({ column: LIST_PRICE_COLUMN, message: `"${text}" is not a price: write it like 129.90, without a currency sign.` })
-  return cents
+  const reading = decimalToCents(text)
+  if (reading.ok) return reading.cents
+  errors.push({ column: LIST_PRICE_COLUMN, message: `"${text}" is not a price: ${LIST_PRICE_PROBLEMS[reading.problem]}.` })
+  return null
 }
 
 function parseYear(cell: string | undefined, column: string, errors: RowError[]): number | null {
@@ -171,7 +177,7 @@ export function partCells(part: PartInput): Record<string, string> {
     year_from: cellText(part.yearFrom),
     year_to: cellText(part.yearTo),
     notes: part.notes,
-    [LIST_PRICE_COLUMN]: part.listPriceCents === null ? '' : hundredthsText(part.listPriceCents),
+    [LIST_PRICE_COLUMN]: part.listPriceCents === null ? '' : centsToDecimal(part.listPriceCents),
   }
   for (const [column, type] of Object.entries(MARK_COLUMNS)) {
     cells[column] = part.marks
