@@ -81,6 +81,7 @@ describe.skipIf(!run)('technician: a build sheet becomes a printed quote', () =>
   it('shows the list price on the part page, or that a part has none', async () => {
     await page.goto(`${server.url}/parts/TM-CG-2000`)
     await expect.poll(() => page.locator('.part-list-price').textContent(), within).toContain('List price €72.00')
+    await saveScreenshot(page, 'part-list-price')
     await page.goto(`${server.url}/parts/TM-HD-2000`)
     await expect.poll(() => page.locator('.part-list-price').textContent(), within).toContain('No list price')
     await page.goto(`${server.url}/quotes/${quote.id}`)
