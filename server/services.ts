@@ -28,6 +28,7 @@ import { StockService } from './stock/stock.service'
 import { VehicleRepository } from './vehicles/vehicle.repository'
 import { VehicleService } from './vehicles/vehicle.service'
 import { QuoteService } from './quotes/quote.service'
+import { PartRepository } from './catalogue/part.repository'
 import { ShopSettingsService } from './settings/shop-settings.service'
 import { OutboxRepository } from './mail/outbox.repository'
 import { OutboxService } from './mail/outbox.service'
@@ -97,7 +98,15 @@ export function createServices(dataSource: DataSource, config: AppConfig, rules:
     fill: new BuildFillService(graphIndex, evaluation, completion),
     sheets,
     shopSettings,
-    quotes: new QuoteService(databaseOf(dataSource), evaluation, sheets, shopSettings, stockRows, stockIndex),
+    quotes: new QuoteService(
+      databaseOf(dataSource),
+      evaluation,
+      sheets,
+      shopSettings,
+      stockRows,
+      stockIndex,
+      new PartRepository(databaseOf(dataSource)),
+    ),
     links: new LinkService(dataSource, parts, graphIndex),
     imports: new ImportService(dataSource, { maxRows: config.importMaxRows }, graphIndex, stockIndex),
     exports: new ExportService(dataSource),

@@ -9,6 +9,8 @@ import type { ImportType } from './schemas/imports'
 
 export const PART_FILE_COLUMNS = ['part_number', 'kind', 'name', 'family', 'year_from', 'year_to', 'notes'] as const
 export const PART_MARK_COLUMNS = ['casting_marks', 'stamped_codes', 'superseded_numbers'] as const
+/** Optional: the price a quote charges for the part when no unit is on a shelf, a decimal in the shop's currency. */
+export const PART_LIST_PRICE_COLUMN = 'list_price'
 export const LINK_COLUMNS = ['from_part', 'to_part', 'relation', 'modifications', 'note', 'source'] as const
 
 /** A slot's column in a vehicles file: the slot id with underscores (`head_gasket`). */
@@ -41,7 +43,11 @@ export type ImportFileSpec = {
 }
 
 export const IMPORT_FILES: Readonly<Record<ImportType, ImportFileSpec>> = {
-  parts: { file: 'parts file', required: ['part_number', 'kind', 'name'], known: [...PART_FILE_COLUMNS, ...PART_MARK_COLUMNS] },
+  parts: {
+    file: 'parts file',
+    required: ['part_number', 'kind', 'name'],
+    known: [...PART_FILE_COLUMNS, PART_LIST_PRICE_COLUMN, ...PART_MARK_COLUMNS],
+  },
   links: { file: 'links file', required: ['from_part', 'to_part', 'relation'], known: LINK_COLUMNS },
   vehicles: { file: 'vehicles file', required: REQUIRED_VEHICLE_COLUMNS, known: [...VEHICLE_COLUMNS, ...VEHICLE_SLOT_COLUMNS] },
   stock: { file: 'stock file', required: REQUIRED_STOCK_COLUMNS, known: STOCK_COLUMNS },

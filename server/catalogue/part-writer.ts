@@ -14,6 +14,7 @@ export function partColumns(part: PartInput) {
     yearTo: part.yearTo,
     notes: part.notes,
     attributes: part.attributes,
+    listPriceCents: part.listPriceCents,
   }
 }
 
@@ -24,7 +25,7 @@ export function markRows(partId: number, part: PartInput) {
 /** Inserts new parts with their marks, inside the caller's transaction; their ids by part number. */
 export function insertPartRows(db: Database.Database, parts: PartInput[]): Map<string, number> {
   const insertPart = db.prepare(
-    'INSERT INTO part (partNumber, partKey, kind, name, family, yearFrom, yearTo, notes, attributes) VALUES (@partNumber, @partKey, @kind, @name, @family, @yearFrom, @yearTo, @notes, @attributes)',
+    'INSERT INTO part (partNumber, partKey, kind, name, family, yearFrom, yearTo, notes, attributes, listPriceCents) VALUES (@partNumber, @partKey, @kind, @name, @family, @yearFrom, @yearTo, @notes, @attributes, @listPriceCents)',
   )
   const insertMark = db.prepare('INSERT INTO part_mark (partId, type, value, valueKey) VALUES (@partId, @type, @value, @valueKey)')
   const ids = new Map<string, number>()

@@ -38,6 +38,10 @@ export class PartEntity {
   @Column({ type: 'simple-json' })
   attributes!: PartAttributes
 
+  /** The price to quote when no unit is on a shelf, in cents of the shop's currency; null when none is known. */
+  @Column({ type: 'integer', nullable: true })
+  listPriceCents!: number | null
+
   /** The import batch that wrote it last, if any. */
   @Index()
   @Column({ type: 'integer', nullable: true })

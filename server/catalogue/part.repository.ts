@@ -17,10 +17,12 @@ type PartRow = {
   yearTo: number | null
   notes: string
   attributes: string
+  listPriceCents: number | null
 }
 type MarkRow = { partId: number; type: MarkType; value: string }
 
-const PART_COLUMNS = 'p."id", p."partNumber", p."kind", p."name", p."family", p."yearFrom", p."yearTo", p."notes", p."attributes"'
+const PART_COLUMNS =
+  'p."id", p."partNumber", p."kind", p."name", p."family", p."yearFrom", p."yearTo", p."notes", p."attributes", p."listPriceCents"'
 
 function sortMarks(marks: { type: MarkType; value: string }[]) {
   return marks.sort((a, b) => MARK_TYPES.indexOf(a.type) - MARK_TYPES.indexOf(b.type) || a.value.localeCompare(b.value))
@@ -82,6 +84,19 @@ export class PartRepository {
       [key],
     )
     return row ? (await this.withMarks([row]))[0] : undefined
+  }
+
+  /** List prices by part number, for the parts that have one (what a quote charges for a part to order). */
+  async listPrices(partNumbers: readonly string[]): Promise<Map<string, number>> {
+    const prices = new Map<string, number>()
+    for (const list of chunks([...new Set(partNumbers)])) {
+      const rows = await this.db.all<{ partNumber: string; listPriceCents: number }>(
+        `SELECT "partNumber", "listPriceCents" FROM part WHERE "listPriceCents" IS NOT NULL AND "partNumber" IN (${placeholders(list.length)})`,
+        list,
+      )
+      for (const row of rows) prices.set(row.partNumber, Number(row.listPriceCents))
+    }
+    return prices
   }
 
   async count(): Promise<number> {

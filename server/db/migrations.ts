@@ -1,6 +1,8 @@
 import { AccountTokens1796223315452 } from '../migrations/1796223315452-AccountTokens'
 import { AccountTokens1796223318439 as PostgresAccountTokens1796223318439 } from '../migrations/postgres/1796223318439-AccountTokens'
 import { Quotes1796215187917 } from '../migrations/1796215187917-Quotes'
+import { PartListPrice1796226633835 } from '../migrations/1796226633835-PartListPrice'
+import { PartListPrice1796226637373 as PostgresPartListPrice1796226637373 } from '../migrations/postgres/1796226637373-PartListPrice'
 import { Quotes1796215189078 as PostgresQuotes1796215189078 } from '../migrations/postgres/1796215189078-Quotes'
 import { ImportVehiclesStock1796223370557 } from '../migrations/1796223370557-ImportVehiclesStock'
 import { ImportVehiclesStock1796223379484 as PostgresImportVehiclesStock1796223379484 } from '../migrations/postgres/1796223379484-ImportVehiclesStock'
@@ -44,6 +46,7 @@ export const migrations = [
   Quotes1796215187917,
   AccountTokens1796223315452,
   ImportVehiclesStock1796223370557,
+  PartListPrice1796226633835,
 ]
 
 /** PostgreSQL's, generated from the same entities (`npx tsx server/db/generate-migration.ts Name --postgres`). */
@@ -61,4 +64,5 @@ export const postgresMigrations = [
   PostgresQuotes1796215189078,
   PostgresAccountTokens1796223318439,
   PostgresImportVehiclesStock1796223379484,
+  PostgresPartListPrice1796226637373,
 ]

@@ -5,7 +5,7 @@ import { MARK_TYPES, type MarkType } from '../../shared/schemas/part'
 import { PART_KINDS, type PartKind } from '../../shared/schemas/part-kinds'
 import { knownAttributes } from '../../shared/schemas/part-attributes'
 import { toCsv } from '../../shared/csv-cells'
-import { MARK_COLUMNS, PART_COLUMNS, camelToSnake, partCells } from './csv/part-row'
+import { LIST_PRICE_COLUMN, MARK_COLUMNS, PART_COLUMNS, camelToSnake, partCells } from './csv/part-row'
 import { sqliteConnection } from '../db/sqlite-connection'
 import { LINK_COLUMNS } from './links/link-rows'
 import { pushTo } from '../lib/map-list'
@@ -41,7 +41,9 @@ export class ExportService {
   partsCsv(): string {
     const db = sqliteConnection(this.dataSource)
     const rows = db
-      .prepare('SELECT id, partNumber, kind, name, family, yearFrom, yearTo, notes, attributes FROM part ORDER BY partNumber')
+      .prepare(
+        'SELECT id, partNumber, kind, name, family, yearFrom, yearTo, notes, attributes, listPriceCents FROM part ORDER BY partNumber',
+      )
       .all() as PartRow[]
     const marks = new Map<number, { type: MarkType; value: string }[]>()
     const markRows = db.prepare('SELECT partId, type, value FROM part_mark ORDER BY value').all() as {
@@ -61,10 +63,16 @@ export class ExportService {
       return partCells(part)
     })
     const fixed: string[] = [...PART_COLUMNS, ...Object.keys(MARK_COLUMNS)]
-    const used = new Set(cells.flatMap((row) => Object.keys(row).filter((column) => !fixed.includes(column) && row[column] !== '')))
+    // The list price is optional in the format: written only when some part has one, as importing then leaves it as it is.
+    const priced = cells.some((row) => row[LIST_PRICE_COLUMN] !== '') ? [LIST_PRICE_COLUMN] : []
+    const used = new Set(
+      cells.flatMap((row) =>
+        Object.keys(row).filter((column) => !fixed.includes(column) && column !== LIST_PRICE_COLUMN && row[column] !== ''),
+      ),
+    )
     const known = KNOWN_COLUMN_ORDER.filter((column) => used.has(column))
     const unknown = [...used].filter((column) => !known.includes(column)).sort()
-    const header = [...fixed, ...known, ...unknown]
+    const header = [...fixed, ...priced, ...known, ...unknown]
     return toCsv([header, ...cells.map((row) => header.map((column) => row[column] ?? ''))])
   }
 

@@ -12,18 +12,21 @@ export function unitOrder(a: UnitRow, b: UnitRow): number {
   return (RANK.get(a.condition) ?? 9) - (RANK.get(b.condition) ?? 9) || a.priceCents - b.priceCents || a.id - b.id
 }
 
+/** What the shop has and charges: the units on its shelves, its sites' names, and the list price of a part to order. */
+export type Shelf = {
+  unitsOf: (partNumber: string) => UnitRow[]
+  siteName: (siteId: number) => string
+  listPriceOf: (partNumber: string) => number | null
+}
+
 /**
  * The lines of a quote: each part from the parts list with the unit to take
- * (site, shelf, condition, price) or "to order", a core charge where the unit
- * carries one, the consumables, and labour for the job at the shop's rate.
+ * (site, shelf, condition, price) or "to order" at the part's list price (no
+ * price when it has none), a core charge where the unit carries one, the
+ * consumables, and labour for the job at the shop's rate.
  */
-export function quoteLines(
-  evaluation: Evaluation,
-  slots: Record<string, unknown>,
-  shop: ShopSettings,
-  unitsOf: (partNumber: string) => UnitRow[],
-  siteName: (siteId: number) => string,
-): QuoteLine[] {
+export function quoteLines(evaluation: Evaluation, slots: Record<string, unknown>, shop: ShopSettings, shelf: Shelf): QuoteLine[] {
+  const { unitsOf, siteName, listPriceOf } = shelf
   const lines: QuoteLine[] = []
   const taken = new Set<number>()
   for (const item of evaluation.partsList) {
@@ -66,9 +69,9 @@ export function quoteLines(
       lines.push({
         kind: item.category === 'consumable' ? 'consumable' : 'part',
         partNumber: item.partNumber,
-        description: `${item.description} (to order)`,
+        description: item.description,
         quantity: left,
-        unitPriceCents: 0,
+        unitPriceCents: listPriceOf(item.partNumber) ?? 0,
         toOrder: true,
       })
     }

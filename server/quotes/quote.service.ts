@@ -1,11 +1,12 @@
 import type { User } from '../../shared/schemas/auth'
 import type { EvaluateRequest } from '../../shared/schemas/build'
-import type { Quote, QuoteRequest } from '../../shared/schemas/quotes'
+import type { Quote, QuoteRequest, QuoteSummary } from '../../shared/schemas/quotes'
 import { quoteTotals } from '../../shared/quote-totals'
 import { toIsoTime, type Database } from '../db/database'
 import { AppError } from '../errors/app-error'
 import type { BuildEvaluationService } from '../builds/build-evaluation.service'
 import type { BuildSheetService } from '../builds/build-sheet.service'
+import type { PartRepository } from '../catalogue/part.repository'
 import type { ShopSettingsService } from '../settings/shop-settings.service'
 import type { StockIndex } from '../stock/stock-index'
 import type { StockRepository } from '../stock/stock.repository'
@@ -21,17 +22,22 @@ type QuoteRow = {
   reservedUntil: unknown
   createdAt: unknown
 }
-type Body = Pick<Quote, 'shop' | 'vehicle' | 'lines' | 'totals' | 'cautions'>
+type Body = Pick<Quote, 'shop' | 'vehicle' | 'lines' | 'totals' | 'cautions'> & { buildName?: string | null }
+
+/** The newest quotes a list shows; older ones stay reachable by their number. */
+const LIST_LIMIT = 200
 
 const COLUMNS = 'SELECT "id", "status", "customer", "buildSheetId", "body", "createdByName", "reservedUntil", "createdAt" FROM quote'
 
 function toQuote(row: QuoteRow): Quote {
+  const body = JSON.parse(row.body) as Body
   return {
     id: row.id,
     status: row.status,
     customer: row.customer,
     buildSheetId: row.buildSheetId,
-    ...(JSON.parse(row.body) as Body),
+    ...body,
+    buildName: body.buildName ?? null,
     createdBy: row.createdByName,
     createdAt: toIsoTime(row.createdAt),
     reservedUntil: row.reservedUntil ? toIsoTime(row.reservedUntil) : null,
@@ -47,22 +53,23 @@ export class QuoteService {
     private readonly shop: ShopSettingsService,
     private readonly stock: StockRepository,
     private readonly stockIndex: StockIndex,
+    private readonly parts: PartRepository,
   ) {}
 
   async create(request: QuoteRequest, user: User): Promise<Quote> {
-    const { build, buildSheetId } = await this.buildOf(request, user)
+    const { build, buildSheetId, buildName } = await this.buildOf(request, user)
     const evaluation = await this.evaluation.evaluate(build)
     const shop = await this.shop.get()
     const units = await this.stock.unitsOf(evaluation.partsList.flatMap((line) => (line.partNumber ? [line.partNumber] : [])))
     const sites = new Map((await this.stock.sites()).map((site) => [site.id, site.name]))
-    const lines = quoteLines(
-      evaluation,
-      build.slots,
-      shop,
-      (partNumber) => units.filter((unit) => unit.partNumber === partNumber),
-      (siteId) => sites.get(siteId) ?? `site ${siteId}`,
-    )
+    const listPrices = await this.parts.listPrices(evaluation.partsList.flatMap((line) => (line.partNumber ? [line.partNumber] : [])))
+    const lines = quoteLines(evaluation, build.slots, shop, {
+      unitsOf: (partNumber) => units.filter((unit) => unit.partNumber === partNumber),
+      siteName: (siteId) => sites.get(siteId) ?? `site ${siteId}`,
+      listPriceOf: (partNumber) => listPrices.get(partNumber) ?? null,
+    })
     const body: Body = {
+      buildName,
       shop,
       vehicle: { modelYear: build.chassisModelYear ?? null, vin: build.vin ?? null },
       lines,
@@ -74,6 +81,24 @@ export class QuoteService {
       [request.customer, buildSheetId, JSON.stringify(body), user.name, new Date()],
     )
     return this.get(id)
+  }
+
+  async list(): Promise<QuoteSummary[]> {
+    const rows = await this.db.all<QuoteRow>(`${COLUMNS} ORDER BY "id" DESC LIMIT ${LIST_LIMIT}`)
+    return rows.map((row) => {
+      const quote = toQuote(row)
+      return {
+        id: quote.id,
+        status: quote.status,
+        customer: quote.customer,
+        buildName: quote.buildName,
+        totalCents: quote.totals.totalCents,
+        currency: quote.shop.currency,
+        createdBy: quote.createdBy,
+        createdAt: quote.createdAt,
+        reservedUntil: quote.reservedUntil,
+      }
+    })
   }
 
   async get(id: number): Promise<Quote> {
@@ -117,11 +142,15 @@ export class QuoteService {
     return this.get(id)
   }
 
-  private async buildOf(request: QuoteRequest, user: User): Promise<{ build: EvaluateRequest; buildSheetId: number | null }> {
+  private async buildOf(
+    request: QuoteRequest,
+    user: User,
+  ): Promise<{ build: EvaluateRequest; buildSheetId: number | null; buildName: string | null }> {
     if ('buildSheetId' in request) {
       const sheet = await this.sheets.get(request.buildSheetId, user)
       return {
         buildSheetId: sheet.id,
+        buildName: sheet.name,
         build: {
           slots: sheet.slots,
           targetPowerKw: sheet.targetPowerKw ?? undefined,
@@ -132,6 +161,6 @@ export class QuoteService {
       }
     }
     const { customer: _customer, ...build } = request
-    return { build, buildSheetId: null }
+    return { build, buildSheetId: null, buildName: null }
   }
 }

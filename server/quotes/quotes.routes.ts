@@ -15,6 +15,9 @@ export function quoteRoutes(services: { quotes: QuoteService; shopSettings: Shop
   router.post('/quotes', quoters, async (req, res) => {
     res.status(201).json(await services.quotes.create(parseBody(quoteRequestSchema, req), req.user!))
   })
+  router.get('/quotes', quoters, async (_req, res) => {
+    res.json(await services.quotes.list())
+  })
   router.get('/quotes/:id', quoters, async (req, res) => {
     res.json(await services.quotes.get(parseParams(idParams, req).id))
   })

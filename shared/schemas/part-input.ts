@@ -22,6 +22,14 @@ export const partInputSchema = z
     notes: z.string().max(4000).default(''),
     attributes: z.record(z.string(), z.union([z.string(), z.number(), z.boolean()])).default({}),
     marks: z.array(partMarkSchema).default([]),
+    /** In cents; the parts file writes it as a decimal (`list_price`). */
+    listPriceCents: z
+      .number()
+      .int('The list price is in whole cents.')
+      .min(0, 'The list price cannot be negative.')
+      .max(100_000_000, 'The list price is at most 1,000,000.')
+      .nullable()
+      .default(null),
   })
   .superRefine((part, ctx) => {
     if (part.yearFrom !== null && part.yearTo !== null && part.yearFrom > part.yearTo) {

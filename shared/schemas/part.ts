@@ -20,6 +20,8 @@ export const partSchema = z.object({
   notes: z.string(),
   attributes: z.record(z.string(), z.union([z.string(), z.number(), z.boolean()])),
   marks: z.array(partMarkSchema),
+  /** The price to quote when no unit is on a shelf, in cents of the shop's currency. */
+  listPriceCents: z.number().int().nullable().optional(),
 })
 export type Part = z.infer<typeof partSchema>
 

@@ -54,6 +54,8 @@ export const quoteSchema = z.object({
   status: z.enum(['draft', 'accepted']),
   customer: z.string(),
   buildSheetId: z.number().int().nullable(),
+  /** The build sheet's name when the quote was made from one (older quotes have none). */
+  buildName: z.string().nullable().default(null),
   shop: shopSettingsSchema,
   vehicle: z.object({ modelYear: z.number().nullable(), vin: z.string().nullable() }),
   lines: z.array(quoteLineSchema),
@@ -70,3 +72,17 @@ export const quoteSchema = z.object({
   reservedUntil: z.string().nullable(),
 })
 export type Quote = z.infer<typeof quoteSchema>
+
+/** One line of the quotes list: who it is for and what it comes to, without its lines. */
+export const quoteSummarySchema = z.object({
+  id: z.number().int(),
+  status: z.enum(['draft', 'accepted']),
+  customer: z.string(),
+  buildName: z.string().nullable(),
+  totalCents: z.number().int(),
+  currency: z.string(),
+  createdBy: z.string(),
+  createdAt: z.string(),
+  reservedUntil: z.string().nullable(),
+})
+export type QuoteSummary = z.infer<typeof quoteSummarySchema>

@@ -21,6 +21,7 @@ export const NAVIGATION: NavigationLink[] = [
   { name: 'graph-home', label: 'Fit graph', icon: 'pi-sitemap', permission: 'catalogue.read', area: ['graph', 'graph-path'] },
   { name: 'planner', label: 'Build planner', icon: 'pi-wrench', permission: 'builds.evaluate', area: ['planner-sheet'] },
   { name: 'builds', label: 'Build sheets', icon: 'pi-folder-open', permission: 'builds.save' },
+  { name: 'quotes', label: 'Quotes', icon: 'pi-receipt', permission: 'builds.evaluate', area: ['quote'] },
   {
     name: 'field-reports',
     label: 'Field reports',
@@ -31,6 +32,7 @@ export const NAVIGATION: NavigationLink[] = [
   { name: 'users', label: 'Users', icon: 'pi-users', permission: 'users.manage' },
   { name: 'security-events', label: 'Security', icon: 'pi-shield', permission: 'users.manage' },
   { name: 'mail', label: 'Mail', icon: 'pi-envelope', permission: 'users.manage' },
+  { name: 'shop-settings', label: 'Shop', icon: 'pi-building', permission: 'users.manage' },
 ]
 
 export function navigationFor(role: Role | undefined): NavigationLink[] {

@@ -51,3 +51,21 @@ export function formatDuration(minutes: number, options: FormatOptions = {}): st
 export function formatCents(cents: number, options: FormatOptions = {}): string {
   return formatDecimal(cents / 100, 2, options)
 }
+
+/**
+ * Money held in integer cents with its currency ("€1,234.50" in en-GB for EUR).
+ * Always two decimals: the amounts are kept in hundredths whatever the currency.
+ */
+export function formatMoney(cents: number, currency: string, options: FormatOptions = {}): string {
+  return new Intl.NumberFormat(options.locale, {
+    style: 'currency',
+    currency,
+    minimumFractionDigits: 2,
+    maximumFractionDigits: 2,
+  }).format(cents / 100)
+}
+
+/** A rate in basis points as a percentage: 825 is "8.25%", 2000 is "20%". */
+export function formatBasisPoints(basisPoints: number, options: FormatOptions = {}): string {
+  return new Intl.NumberFormat(options.locale, { style: 'percent', maximumFractionDigits: 2 }).format(basisPoints / 10000)
+}

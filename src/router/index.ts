@@ -94,6 +94,18 @@ const router = createRouter({
           meta: { permission: 'builds.save', title: 'Build sheets' },
         },
         {
+          path: 'quotes',
+          name: 'quotes',
+          component: () => import('@/views/QuotesView.vue'),
+          meta: { permission: 'builds.evaluate', title: 'Quotes' },
+        },
+        {
+          path: 'quotes/:id(\\d+)',
+          name: 'quote',
+          component: () => import('@/views/QuoteView.vue'),
+          meta: { permission: 'builds.evaluate', title: 'Quote' },
+        },
+        {
           path: 'review',
           name: 'review',
           component: () => import('@/views/ReviewView.vue'),
@@ -176,6 +188,12 @@ const router = createRouter({
           name: 'mail',
           component: () => import('@/views/MailView.vue'),
           meta: { permission: 'users.manage', title: 'Mail' },
+        },
+        {
+          path: 'settings/shop',
+          name: 'shop-settings',
+          component: () => import('@/views/ShopSettingsView.vue'),
+          meta: { permission: 'users.manage', title: 'Shop settings' },
         },
         {
           path: 'forbidden',

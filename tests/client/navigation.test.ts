@@ -3,10 +3,10 @@ import { isCurrentArea, navigationFor, NAVIGATION } from '@/layouts/navigation'
 
 describe('navigationFor', () => {
   it.each([
-    ['counter', ['lookup', 'parts', 'graph-home', 'planner'], ['builds', 'users']],
-    ['tech', ['lookup', 'parts', 'graph-home', 'planner', 'builds'], ['users']],
-    ['editor', ['lookup', 'parts', 'graph-home', 'planner', 'builds'], ['users']],
-    ['admin', ['lookup', 'parts', 'graph-home', 'planner', 'builds', 'users'], []],
+    ['counter', ['lookup', 'parts', 'graph-home', 'planner', 'quotes'], ['builds', 'users', 'shop-settings']],
+    ['tech', ['lookup', 'parts', 'graph-home', 'planner', 'builds', 'quotes'], ['users', 'shop-settings']],
+    ['editor', ['lookup', 'parts', 'graph-home', 'planner', 'builds', 'quotes'], ['users', 'shop-settings']],
+    ['admin', ['lookup', 'parts', 'graph-home', 'planner', 'builds', 'quotes', 'users', 'shop-settings'], []],
   ] as const)('shows a %s the areas the role may use and none it may not', (role, shown, hidden) => {
     const names = navigationFor(role).map((link) => link.name)
     for (const name of shown) expect(names).toContain(name)
@@ -23,5 +23,6 @@ describe('navigationFor', () => {
     expect(isCurrentArea(link('graph-home'), 'graph-path')).toBe(true)
     expect(isCurrentArea(link('planner'), 'planner-sheet')).toBe(true)
     expect(isCurrentArea(link('planner'), 'builds')).toBe(false)
+    expect(isCurrentArea(link('quotes'), 'quote')).toBe(true)
   })
 })

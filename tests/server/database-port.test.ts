@@ -131,4 +131,14 @@ describe.each(drivers)('the data port on $name', (driver) => {
     expect((await parts.byMarkKey('C771'))?.marks).toEqual([{ type: 'casting', value: 'C-77/1' }])
     expect((await parts.byIds([id, -1])).map((part) => part.partNumber)).toEqual(['PT-HD-0100'])
   })
+
+  it('reads list prices as whole cents through the part repository, leaving out parts without one', async () => {
+    const priced = await addPart('PT-HD-0200')
+    await addPart('PT-HD-0201')
+    await db.run('UPDATE part SET "listPriceCents" = ? WHERE "id" = ?', [12990, priced])
+    const parts = new PartRepository(db)
+    expect(await parts.listPrices(['PT-HD-0200', 'PT-HD-0201', 'PT-NONE'])).toEqual(new Map([['PT-HD-0200', 12990]]))
+    expect((await parts.byNumber('PT-HD-0200'))?.listPriceCents).toBe(12990)
+    expect((await parts.byNumber('PT-HD-0201'))?.listPriceCents).toBeNull()
+  })
 })

@@ -85,6 +85,7 @@ describe('GET /api/graph/neighbourhood/:partNumber', () => {
         notes: '',
         attributes: {},
         marks: [],
+        listPriceCents: null,
       }))
       const ids = insertPartRows(db, [{ ...spokes[0]!, partNumber: hubNumber }, ...spokes])
       const hub = ids.get(hubNumber)!

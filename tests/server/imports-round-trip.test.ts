@@ -62,6 +62,7 @@ function partFor(kind: PartKind): fc.Arbitrary<PartInput> {
       known,
       unknown,
       marks: fc.uniqueArray(mark, { maxLength: 3, selector: (m) => `${m.type}:${m.value}` }),
+      listPriceCents: fc.option(fc.integer({ min: 0, max: 100_000_000 })),
     })
     .map(({ years: [a, b], known, unknown, ...rest }) => {
       const [yearFrom, yearTo] = a !== null && b !== null && a > b ? [b, a] : [a, b]
@@ -120,7 +121,7 @@ async function writeCatalogue(dataSource: DataSource, { parts, links }: Catalogu
 /** The catalogue by natural keys only: ids and timestamps may differ between two databases. */
 async function readCatalogue(dataSource: DataSource) {
   const parts = (await dataSource.query(
-    'SELECT partNumber, kind, name, family, yearFrom, yearTo, notes, attributes FROM part ORDER BY partNumber',
+    'SELECT partNumber, kind, name, family, yearFrom, yearTo, notes, attributes, listPriceCents FROM part ORDER BY partNumber',
   )) as {
     attributes: string
   }[]

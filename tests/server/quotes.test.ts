@@ -1,3 +1,4 @@
+import request from 'supertest'
 import { afterEach, beforeEach, describe, expect, it } from 'vitest'
 import { createTestApp, type TestApp } from '../helpers/test-app'
 
@@ -67,6 +68,34 @@ describe('quotes for the whole job', () => {
     expect((await tech.post('/api/quotes').send({ buildSheetId: 99999 })).status).toBe(404)
     expect((await tech.post('/api/quotes').send({ slots: { block: 'TM-NOPE' } })).status).toBe(400)
     expect((await tech.post('/api/quotes/12345/accept')).status).toBe(404)
+  })
+
+  it('lists quotes newest first with the build, the customer and the total in the shop currency', async () => {
+    const sheets = (await tech.get('/api/builds')).body as { id: number; name: string }[]
+    const sheet = sheets.find((s) => s.name === 'TK20V head on a TK18 block')!
+    const older = (await tech.post('/api/quotes').send({ slots: SLOTS, customer: 'Walk-in' })).body as { id: number }
+    const newer = (await tech.post('/api/quotes').send({ buildSheetId: sheet.id, customer: 'R. Okafor' })).body as {
+      id: number
+      buildName: string | null
+      totals: { totalCents: number }
+    }
+    expect(newer.buildName).toBe('TK20V head on a TK18 block')
+    const counter = await t.signIn('counter')
+    const list = await counter.get('/api/quotes')
+    expect(list.status).toBe(200)
+    const mine = (list.body as { id: number }[]).filter((q) => q.id === older.id || q.id === newer.id)
+    expect(mine).toEqual([
+      expect.objectContaining({
+        id: newer.id,
+        customer: 'R. Okafor',
+        buildName: 'TK20V head on a TK18 block',
+        totalCents: newer.totals.totalCents,
+        currency: 'EUR',
+        status: 'draft',
+      }),
+      expect.objectContaining({ id: older.id, customer: 'Walk-in', buildName: null }),
+    ])
+    expect((await request(t.app).get('/api/quotes')).status).toBe(401)
   })
 
   it('lets only one of two counters racing for the last unit reserve it', async () => {

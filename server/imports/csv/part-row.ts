@@ -3,7 +3,8 @@ import { partInputSchema } from '../../../shared/schemas/part-input'
 import { knownAttributes } from '../../../shared/schemas/part-attributes'
 import type { MarkType } from '../../../shared/schemas/part'
 import { PART_KINDS, type PartKind } from '../../../shared/schemas/part-kinds'
-import { IMPORT_FILES, PART_FILE_COLUMNS } from '../../../shared/import-files'
+import { IMPORT_FILES, PART_FILE_COLUMNS, PART_LIST_PRICE_COLUMN } from '../../../shared/import-files'
+import { centsToDecimal, decimalToCents } from '../../../shared/money'
 
 /** Columns of the parts file that are not attributes. */
 export const PART_COLUMNS = PART_FILE_COLUMNS
@@ -12,6 +13,8 @@ export const MARK_COLUMNS: Record<string, MarkType> = {
   stamped_codes: 'stamped',
   superseded_numbers: 'superseded',
 }
+/** Optional: the price to quote when no unit is on a shelf, as a decimal in the shop's currency ("129.90"). */
+export const LIST_PRICE_COLUMN = PART_LIST_PRICE_COLUMN
 export const REQUIRED_PART_COLUMNS = IMPORT_FILES.parts.required
 
 export type RowError = { column: string; message: string }
@@ -31,6 +34,21 @@ export function splitList(cell: string | undefined): string[] {
     .filter(Boolean)
 }
 
+const LIST_PRICE_PROBLEMS = {
+  negative: 'a list price cannot be negative',
+  not_an_amount: 'write it like 129.90, without a currency sign',
+  too_large: 'a list price is at most 1000000.00',
+} as const
+
+function parseListPrice(cell: string | undefined, errors: RowError[]): number | null {
+  const text = (cell ?? '').trim()
+  if (!text) return null
+  const reading = decimalToCents(text)
+  if (reading.ok) return reading.cents
+  errors.push({ column: LIST_PRICE_COLUMN, message: `"${text}" is not a price: ${LIST_PRICE_PROBLEMS[reading.problem]}.` })
+  return null
+}
+
 function parseYear(cell: string | undefined, column: string, errors: RowError[]): number | null {
   const text = (cell ?? '').trim()
   if (!text) return null
@@ -43,7 +61,7 @@ function parseYear(cell: string | undefined, column: string, errors: RowError[])
 
 /** Any column but the part's own fields and the mark lists holds an attribute. */
 export function isAttributeColumn(column: string): boolean {
-  return !(PART_COLUMNS as readonly string[]).includes(column) && !(column in MARK_COLUMNS)
+  return !(PART_COLUMNS as readonly string[]).includes(column) && column !== LIST_PRICE_COLUMN && !(column in MARK_COLUMNS)
 }
 
 const knownTypes = new Map(
@@ -103,6 +121,7 @@ export function parsePartRow(row: Record<string, string>): PartRowResult {
   const kind = (knownKind ? kindText : PART_KINDS[0]) as PartKind
   const yearFrom = parseYear(row.year_from, 'year_from', errors)
   const yearTo = parseYear(row.year_to, 'year_to', errors)
+  const listPriceCents = parseListPrice(row[LIST_PRICE_COLUMN], errors)
   const attributes = knownKind ? typedAttributes(kind, row, errors) : {}
   const marks = Object.entries(MARK_COLUMNS).flatMap(([column, type]) => splitList(row[column]).map((value) => ({ type, value })))
   const checked = checkPart({
@@ -115,6 +134,7 @@ export function parsePartRow(row: Record<string, string>): PartRowResult {
     notes: row.notes ?? '',
     attributes,
     marks,
+    listPriceCents,
   })
   if (!checked.ok) {
     const reported = new Set(errors.map((error) => error.column))
@@ -131,7 +151,12 @@ export function checkPart(candidate: PartInput): PartRowResult {
     ok: false,
     errors: parsed.error.issues.map((issue) => {
       const [first, second] = issue.path.map(String)
-      const column = first === 'attributes' && second ? attributeColumn(candidate.kind, second) : camelToSnake(first ?? 'row')
+      const column =
+        first === 'attributes' && second
+          ? attributeColumn(candidate.kind, second)
+          : first === 'listPriceCents'
+            ? LIST_PRICE_COLUMN
+            : camelToSnake(first ?? 'row')
       return { column, message: issue.message }
     }),
   }
@@ -152,6 +177,7 @@ export function partCells(part: PartInput): Record<string, string> {
     year_from: cellText(part.yearFrom),
     year_to: cellText(part.yearTo),
     notes: part.notes,
+    [LIST_PRICE_COLUMN]: part.listPriceCents === null ? '' : centsToDecimal(part.listPriceCents),
   }
   for (const [column, type] of Object.entries(MARK_COLUMNS)) {
     cells[column] = part.marks

@@ -4,7 +4,7 @@ import type { MarkType } from '../../../shared/schemas/part'
 import type { PartInput } from '../../../shared/schemas/part-input'
 import type { PartKind } from '../../../shared/schemas/part-kinds'
 import { normalisePartCode } from '../../../shared/schemas/part'
-import { MARK_COLUMNS, attributeKeyForColumn, checkPart, isAttributeColumn, partCells } from '../csv/part-row'
+import { LIST_PRICE_COLUMN, MARK_COLUMNS, attributeKeyForColumn, checkPart, isAttributeColumn, partCells } from '../csv/part-row'
 import { ChangeList } from '../import-change-list'
 import type { Header } from '../import-header'
 import { partFingerprint, type PartEntry, type PartRows } from './part-rows'
@@ -20,6 +20,7 @@ export type PartRecord = {
   yearTo: number | null
   notes: string
   attributes: string
+  listPriceCents: number | null
   batchId: number | null
   createdAt: string
   updatedAt: string
@@ -48,6 +49,7 @@ function storedPart(record: PartRecord, marks: MarkRecord[]): PartInput {
     notes: record.notes,
     attributes: JSON.parse(record.attributes) as PartInput['attributes'],
     marks: marks.map((mark) => ({ type: mark.type, value: mark.value })),
+    listPriceCents: record.listPriceCents,
   }
 }
 
@@ -64,6 +66,7 @@ function mergeAbsentColumns(stored: PartInput, incoming: PartInput, header: Head
     yearFrom: keep('year_from') ? stored.yearFrom : incoming.yearFrom,
     yearTo: keep('year_to') ? stored.yearTo : incoming.yearTo,
     notes: keep('notes') ? stored.notes : incoming.notes,
+    listPriceCents: keep(LIST_PRICE_COLUMN) ? stored.listPriceCents : incoming.listPriceCents,
     attributes: { ...Object.fromEntries(keptAttributes), ...incoming.attributes },
     marks: [...stored.marks.filter((mark) => keep(MARK_COLUMN_OF[mark.type])), ...incoming.marks],
   }

@@ -12,7 +12,17 @@ const sortedEntries = (record: Record<string, unknown>) => Object.entries(record
 /** Everything about a part but its number, in a form two parts compare equal by. */
 export function partFingerprint(part: PartInput): string {
   const marks = part.marks.map((mark) => `${mark.type}:${mark.value}`).sort()
-  return JSON.stringify([part.kind, part.name, part.family, part.yearFrom, part.yearTo, part.notes, sortedEntries(part.attributes), marks])
+  return JSON.stringify([
+    part.kind,
+    part.name,
+    part.family,
+    part.yearFrom,
+    part.yearTo,
+    part.notes,
+    sortedEntries(part.attributes),
+    marks,
+    part.listPriceCents,
+  ])
 }
 
 /** A list cell may name a mark twice; the catalogue keeps it once. */

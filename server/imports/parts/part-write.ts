@@ -8,10 +8,10 @@ import { rewritePartWords } from '../../catalogue/part-word-writer'
 /** Writes a parts plan with prepared statements; the caller holds the transaction. Answers the ids of the parts written. */
 export function writeParts(db: Database.Database, plan: PartsPlan, batchId: number): number[] {
   const insertPart = db.prepare(
-    'INSERT INTO part (partNumber, partKey, kind, name, family, yearFrom, yearTo, notes, attributes, batchId) VALUES (?, ?, ?, ?, ?, ?, ?, ?, ?, ?)',
+    'INSERT INTO part (partNumber, partKey, kind, name, family, yearFrom, yearTo, notes, attributes, listPriceCents, batchId) VALUES (?, ?, ?, ?, ?, ?, ?, ?, ?, ?, ?)',
   )
   const updatePart = db.prepare(
-    `UPDATE part SET kind = ?, name = ?, family = ?, yearFrom = ?, yearTo = ?, notes = ?, attributes = ?, batchId = ?, updatedAt = ${SQL_NOW} WHERE id = ?`,
+    `UPDATE part SET kind = ?, name = ?, family = ?, yearFrom = ?, yearTo = ?, notes = ?, attributes = ?, listPriceCents = ?, batchId = ?, updatedAt = ${SQL_NOW} WHERE id = ?`,
   )
   const insertMark = db.prepare('INSERT INTO part_mark (partId, type, value, valueKey) VALUES (?, ?, ?, ?)')
   const deleteMarks = db.prepare('DELETE FROM part_mark WHERE partId = ?')
@@ -25,7 +25,7 @@ export function writeParts(db: Database.Database, plan: PartsPlan, batchId: numb
     written.push(id)
     record('part', id, 'updated', previous.part.batchId, { part: [previous.part], part_mark: previous.marks })
     const c = partColumns(part)
-    updatePart.run(c.kind, c.name, c.family, c.yearFrom, c.yearTo, c.notes, JSON.stringify(c.attributes), batchId, id)
+    updatePart.run(c.kind, c.name, c.family, c.yearFrom, c.yearTo, c.notes, JSON.stringify(c.attributes), c.listPriceCents, batchId, id)
     deleteMarks.run(id)
     writeMarks(id, part)
   }
@@ -41,6 +41,7 @@ export function writeParts(db: Database.Database, plan: PartsPlan, batchId: numb
       c.yearTo,
       c.notes,
       JSON.stringify(c.attributes),
+      c.listPriceCents,
       batchId,
     )
     const id = Number(result.lastInsertRowid)

@@ -75,11 +75,11 @@ describe('BuildSheetsView', () => {
     expect(wrapper.text()).toContain('No build sheet matches.')
   })
 
-  it('keeps Rename and Delete as separate labelled buttons for each sheet', async () => {
+  it('keeps Make a quote, Rename and Delete as separate labelled buttons for each sheet', async () => {
     const wrapper = await mountList()
     const row = wrapper.findAll('tbody tr')[1]!
     const labels = row.findAll('button').map((button) => button.attributes('aria-label'))
-    expect(labels).toEqual(['Rename Race head', 'Delete Race head'])
+    expect(labels).toEqual(['Make a quote for Race head', 'Rename Race head', 'Delete Race head'])
     expect(row.get('button[aria-label="Delete Race head"]').classes()).toContain('delete')
   })
 

@@ -1,5 +1,5 @@
 import { describe, expect, it } from 'vitest'
-import { formatCount, formatDate, formatDateTime, formatDecimal, formatDuration } from '@/lib/format'
+import { formatBasisPoints, formatCount, formatDate, formatDateTime, formatDecimal, formatDuration, formatMoney } from '@/lib/format'
 
 // Expected strings are the Unicode CLDR patterns for each locale (medium date, short time,
 // decimal grouping, short units), as published in the CLDR charts; they are not read back from our code.
@@ -39,6 +39,22 @@ describe('formatting for the browser locale', () => {
     [0, '0 mins'],
   ])('writes %d minutes of labour as %s in en-GB', (minutes, expected) => {
     expect(formatDuration(minutes, { locale: 'en-GB' })).toBe(expected)
+  })
+
+  // CLDR currency patterns: en-GB puts the symbol first, de-DE after the amount with a no-break space (U+00A0).
+  it.each([
+    ['en-GB', 123450, 'EUR', '€1,234.50'],
+    ['en-GB', 5, 'GBP', '£0.05'],
+    ['de-DE', 123450, 'EUR', '1.234,50\u00a0€'],
+    ['en-GB', -1999, 'USD', '-US$19.99'],
+  ])('writes %s money from integer cents: %d %s → %s', (locale, cents, currency, expected) => {
+    expect(formatMoney(cents, currency, { locale })).toBe(expected)
+  })
+
+  it('writes a tax rate held in basis points as a percentage', () => {
+    expect(formatBasisPoints(2000, { locale: 'en-GB' })).toBe('20%')
+    expect(formatBasisPoints(825, { locale: 'en-GB' })).toBe('8.25%')
+    expect(formatBasisPoints(825, { locale: 'de-DE' })).toBe('8,25\u00a0%')
   })
 
   it('uses the runtime default locale when none is given, as the browser does', () => {
