@@ -15,13 +15,15 @@ type LinkRow = Omit<Link, 'modifications' | 'createdAt' | 'updatedAt'> & {
 }
 
 const LINK_SELECT = `SELECT l.id, a.partNumber AS "from", b.partNumber AS "to", l.relation, l.note, l.source, l.status, l.createdAt, l.updatedAt,
-  (SELECT group_concat(m.name, ';') FROM link_modification lm JOIN modification m ON m.id = lm.modificationId WHERE lm.linkId = l.id) AS modifications
+  (SELECT group_concat(m.name, ';') FROM link_modification lm JOIN modification m ON m.id = lm.modificationId WHERE lm.linkId = l.id) AS modifications,
+  (SELECT COUNT(*) FROM field_report_link e WHERE e.linkId = l.id AND e.agrees = 0) AS contradictedBy
   FROM link l JOIN part a ON a.id = l.partAId JOIN part b ON b.id = l.partBId`
 
 function toLink(row: LinkRow): Link {
   return {
     ...row,
     modifications: row.modifications ? row.modifications.split(';').sort() : [],
+    contradictedBy: Number(row.contradictedBy ?? 0),
     createdAt: new Date(`${row.createdAt}Z`).toISOString(),
     updatedAt: new Date(`${row.updatedAt}Z`).toISOString(),
   }
@@ -35,9 +37,10 @@ export class LinkService {
     private readonly graphIndex: FitGraphIndex,
   ) {}
 
-  async list(query: { status?: ReviewStatus; part?: string; page: number; pageSize: number }): Promise<LinkList> {
+  async list(query: { status?: ReviewStatus; part?: string; contradicted?: boolean; page: number; pageSize: number }): Promise<LinkList> {
     const where: string[] = []
     const params: unknown[] = []
+    if (query.contradicted) where.push('l.id IN (SELECT e.linkId FROM field_report_link e WHERE e.agrees = 0)')
     if (query.status) {
       where.push('l.status = ?')
       params.push(query.status)

@@ -18,12 +18,19 @@ export const linkSchema = z.object({
   status: reviewStatusSchema,
   createdAt: z.string(),
   updatedAt: z.string(),
+  /** Approved field reports that found this pair otherwise: the link is worth a second look. */
+  contradictedBy: z.number().int().default(0),
 })
 export type Link = z.infer<typeof linkSchema>
 
 export const linkListQuerySchema = z.object({
   status: reviewStatusSchema.optional(),
   part: z.string().trim().max(100).optional(),
+  /** Only links an approved field report found otherwise. */
+  contradicted: z
+    .enum(['0', '1'], { error: () => 'Contradicted must be 0 or 1.' })
+    .optional()
+    .transform((value) => value === '1'),
   page: z.coerce.number().int().min(1).default(1),
   pageSize: z.coerce.number().int().min(1).max(200).default(50),
 })

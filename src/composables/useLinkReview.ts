@@ -5,13 +5,22 @@ import { ApiError } from '@/api/http'
 import { linksApi } from '@/api/links'
 import { useRemote } from './useRemote'
 
-/** The editor's review queue: links proposed from the field, approved or rejected one by one. */
+/**
+ * The editor's review queue: links proposed from the field, approved or
+ * rejected one by one, and approved links a field report found otherwise,
+ * which stay as they are until an editor looks at the reports.
+ */
 export function useLinkReview() {
   const queue = useRemote<LinkList>()
+  const contradicted = useRemote<LinkList>()
   const busyId = ref<number | null>(null)
   const actionError = ref<ApiError | null>(null)
 
-  const load = () => queue.run((signal) => linksApi.list({ status: 'proposed', pageSize: 200 }, signal))
+  const load = () =>
+    Promise.all([
+      queue.run((signal) => linksApi.list({ status: 'proposed', pageSize: 200 }, signal)),
+      contradicted.run((signal) => linksApi.list({ status: 'approved', contradicted: '1', pageSize: 200 }, signal)),
+    ])
 
   async function review(link: Link, status: Extract<ReviewStatus, 'approved' | 'rejected'>): Promise<Link | null> {
     busyId.value = link.id
@@ -28,5 +37,5 @@ export function useLinkReview() {
     }
   }
 
-  return { ...queue, load, review, busyId, actionError }
+  return { ...queue, contradicted, load, review, busyId, actionError }
 }

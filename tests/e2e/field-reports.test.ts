@@ -1,7 +1,11 @@
+import { mkdtempSync, rmSync } from 'node:fs'
+import { tmpdir } from 'node:os'
+import path from 'node:path'
 import sharp from 'sharp'
 import type { Page } from 'playwright-core'
 import { afterAll, beforeAll, describe, expect, it } from 'vitest'
 import { browserAvailable, openBrowserSession, saveScreenshot, signInAs, type BrowserSession, type RunningServer } from '../helpers/browser'
+import { receivedMail } from '../helpers/mailbox'
 
 const run = browserAvailable()
 const within = { timeout: 10_000 }
@@ -12,12 +16,16 @@ describe.skipIf(!run)('a tech reports a fit with a photo, an editor approves it,
   let page: Page
   let consoleErrors: string[] = []
   let reportUrl = ''
+  const mailDir = mkdtempSync(path.join(tmpdir(), 'fitwright-e2e-reports-mail-'))
 
   beforeAll(async () => {
-    session = await openBrowserSession({ viewport: { width: 1366, height: 900 } })
+    session = await openBrowserSession({ viewport: { width: 1366, height: 900 } }, { FITWRIGHT_MAIL_DIR: mailDir })
     ;({ server, page, consoleErrors } = session)
   })
-  afterAll(() => session?.close())
+  afterAll(async () => {
+    await session?.close()
+    rmSync(mailDir, { recursive: true, force: true })
+  })
 
   it('files a report with a photo from the report form', async () => {
     await signInAs(page, server.url, 'tech')
@@ -57,6 +65,16 @@ describe.skipIf(!run)('a tech reports a fit with a photo, an editor approves it,
     await saveScreenshot(page, 'field-report-approved')
   })
 
+  it('tells the tech by mail that the report was approved, with the way back to it', async () => {
+    const reportId = /\/field-reports\/(\d+)$/.exec(reportUrl)![1]!
+    // The outbox delivers on the server's beat, apart from the request.
+    const toTech = () => receivedMail(mailDir).filter((mail) => mail.to === 'tech@fitwright.test')
+    await expect.poll(() => toTech().map((mail) => mail.subject), { timeout: 30_000 }).toContain(`Field report #${reportId} approved`)
+    const approval = toTech().find((mail) => mail.subject === `Field report #${reportId} approved`)!
+    expect(approval.text).toContain('An editor approved your report')
+    expect(approval.text).toContain(`/field-reports/${reportId}`)
+  })
+
   it('shows the new fit on the part page as confirmed by one field report', async () => {
     await page.goto(`${server.url}/parts/TM-HD-1810?kind=block`)
     const row = page.locator('[data-part="TM-BL-2000"]').first()
@@ -75,7 +93,12 @@ describe.skipIf(!run)('a tech reports a fit with a photo, an editor approves it,
 
     await page.goto(`${server.url}/parts/TM-HD-1810?kind=block`)
     await row.getByRole('link', { name: 'confirmed by 1 field report' }).click()
-    await page.waitForURL(/\/field-reports\?from=TM-HD-1810&to=TM-BL-2000/)
+    // The reports on the link itself, whichever way round it was stored.
+    await page.waitForURL(
+      (url) =>
+        url.pathname === '/field-reports' &&
+        [url.searchParams.get('from'), url.searchParams.get('to')].sort().join() === 'TM-BL-2000,TM-HD-1810',
+    )
     await expect.poll(() => page.getByRole('table', { name: 'Field reports' }).textContent(), within).toContain('Approved')
     expect(consoleErrors, consoleErrors.join('\n')).toEqual([])
   })

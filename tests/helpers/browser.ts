@@ -117,8 +117,12 @@ export type BrowserSession = {
 }
 
 /** A production server on a fresh demo database and one browser page, for one test file. */
-export async function openBrowserSession(options: BrowserContextOptions = {}): Promise<BrowserSession> {
-  const server = await startServer()
+/** `serverEnv` adds settings to the server's environment (e.g. where the local SMTP fake keeps its mail). */
+export async function openBrowserSession(
+  options: BrowserContextOptions = {},
+  serverEnv: Record<string, string> = {},
+): Promise<BrowserSession> {
+  const server = await startServer(serverEnv)
   const browser = await launchBrowser()
   const context = await browser.newContext({ viewport: { width: 1280, height: 900 }, ...options })
   const page = await context.newPage()

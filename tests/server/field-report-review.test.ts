@@ -54,6 +54,16 @@ describe('approving a field report', () => {
     expect(await fitOf('TM-HD-2000', 'TM-BL-1800')).toMatchObject({ fieldReports: { confirmed: 1, contradicted: 0 } })
     // Contradicted, never silently changed: the link still says fits.
     expect(await fitOf('TM-HD-1800', 'TM-BL-1800')).toMatchObject({ relation: 'fits', fieldReports: { confirmed: 0, contradicted: 1 } })
+    // The contradicted link waits in the editor's review list, still approved and unchanged.
+    const contradicted = (await editor.get('/api/links?contradicted=1')).body.items as {
+      from: string
+      to: string
+      status: string
+      contradictedBy: number
+    }[]
+    expect(contradicted).toEqual([expect.objectContaining({ status: 'approved', contradictedBy: 1 })])
+    expect([contradicted[0]!.from, contradicted[0]!.to].sort()).toEqual(['TM-BL-1800', 'TM-HD-1800'])
+    expect((await editor.get('/api/links?contradicted=2')).status).toBe(400)
     // Reached through an identical number, the line names the link its reports are on, and they are found there.
     const throughIdentical = await fitOf('TM-HD-2000R', 'TM-BL-1800')
     expect(throughIdentical).toMatchObject({ fieldReports: { confirmed: 1 } })
