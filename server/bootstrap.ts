@@ -46,7 +46,10 @@ export async function prepareDatabase(config: AppConfig): Promise<Prepared> {
     rules,
   )
   await services.modifications.syncShipped(rules.loaded.modifications)
-  const seeded = config.demo ? await seedDemo(dataSource, services, path.join(projectRoot, 'data', 'demo')) : false
+  // The demo seed writes through imports, which still need SQLite.
+  if (config.demo && config.databaseUrl)
+    console.warn('The demo scenario is seeded only into the embedded SQLite database; skipped on PostgreSQL.')
+  const seeded = config.demo && !config.databaseUrl ? await seedDemo(dataSource, services, path.join(projectRoot, 'data', 'demo')) : false
   if (config.firstAdmin && (await services.users.count()) === 0) {
     await services.users.create({ ...config.firstAdmin, name: 'Administrator', role: 'admin' })
   }

@@ -1,6 +1,6 @@
 import type { DataSource } from 'typeorm'
-import { inTransaction } from '../db/sqlite-connection'
-import { SQL_NOW } from '../audit/change-log'
+import { databaseOf } from '../db/sqlite-connection'
+import { placeholders } from '../db/database'
 import { In } from 'typeorm'
 import type { Modification } from '../../shared/schemas/fitment'
 import { ModificationEntity } from './modification.entity'
@@ -46,14 +46,8 @@ export class ModificationService {
    * One transaction; entries that already read the same are left alone.
    */
   async syncShipped(specs: ModificationSpec[]): Promise<void> {
-    await inTransaction(this.dataSource, (db) => {
-      const find = db.prepare('SELECT * FROM modification WHERE name = ?')
-      const upsert = db.prepare(
-        `INSERT INTO modification (name, title, summary, steps, extraParts, consumables, skillLevel, timeMinutes, cautions, status, source)
-         VALUES (@name, @title, @summary, @steps, @extraParts, @consumables, @skillLevel, @timeMinutes, @cautions, 'approved', 'rules')
-         ON CONFLICT(name) DO UPDATE SET title = @title, summary = @summary, steps = @steps, extraParts = @extraParts, consumables = @consumables,
-           skillLevel = @skillLevel, timeMinutes = @timeMinutes, cautions = @cautions, status = 'approved', source = 'rules', updatedAt = ${SQL_NOW}`,
-      )
+    const columns = ['name', 'title', 'summary', 'steps', 'extraParts', 'consumables', 'skillLevel', 'timeMinutes', 'cautions'] as const
+    await databaseOf(this.dataSource).transaction(async (tx) => {
       for (const spec of specs) {
         const row = {
           ...spec,
@@ -62,12 +56,26 @@ export class ModificationService {
           consumables: JSON.stringify(spec.consumables),
           cautions: JSON.stringify(spec.cautions),
         }
-        const current = find.get(spec.name) as Record<string, unknown> | undefined
+        const current = await tx.get<Record<string, unknown>>('SELECT * FROM modification WHERE "name" = ?', [spec.name])
+        const values = columns.map((column) => row[column] ?? null)
+        if (!current) {
+          await tx.run(
+            `INSERT INTO modification (${columns.map((c) => `"${c}"`).join(', ')}, "status", "source")
+             VALUES (${placeholders(columns.length)}, 'approved', 'rules')`,
+            values,
+          )
+          continue
+        }
         const same =
-          current?.status === 'approved' &&
-          current.source === 'rules' &&
-          (Object.keys(row) as (keyof typeof row)[]).every((key) => current[key] === row[key])
-        if (!same) upsert.run(row)
+          current.status === 'approved' && current.source === 'rules' && columns.every((column) => current[column] === row[column])
+        if (same) continue
+        await tx.run(
+          `UPDATE modification SET ${columns
+            .slice(1)
+            .map((c) => `"${c}" = ?`)
+            .join(', ')}, "status" = 'approved', "source" = 'rules', "updatedAt" = ? WHERE "name" = ?`,
+          [...values.slice(1), new Date(), spec.name],
+        )
       }
     })
   }

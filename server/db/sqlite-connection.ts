@@ -4,6 +4,7 @@ import type pg from 'pg'
 import type { Database } from './database'
 import { PostgresDatabase } from './postgres-database'
 import { SqliteDatabase } from './sqlite-database'
+import { AppError } from '../errors/app-error'
 
 function isDatabase(value: unknown): value is BetterSqlite3.Database {
   return (
@@ -47,7 +48,10 @@ export function databaseOf(dataSource: DataSource): Database {
 
 function sqlitePort(dataSource: DataSource): SqliteDatabase {
   const port = databaseOf(dataSource)
-  if (!(port instanceof SqliteDatabase)) throw new Error('This bulk write still needs the SQLite driver.')
+  if (!(port instanceof SqliteDatabase)) {
+    // Imports, reverts and hand edits of links still write through the SQLite connection: say so instead of failing obscurely.
+    throw new AppError(501, 'needs_sqlite', 'This change still needs the embedded SQLite database; on PostgreSQL it is not available yet.')
+  }
   return port
 }
 

@@ -1,69 +1,39 @@
 import type { DataSource } from 'typeorm'
 import type { Identity, IdentityCreate, Link, LinkCreate, LinkList, LinkUpdate } from '../../shared/schemas/link'
 import type { ReviewStatus } from '../../shared/schemas/fitment'
-import { inTransaction } from '../db/sqlite-connection'
+import { databaseOf, inTransaction } from '../db/sqlite-connection'
+import { LinkListRepository } from './link-list.repository'
 import { AppError } from '../errors/app-error'
 import type { FitGraphIndex } from './fit-graph'
 import { handEdit, type Editor } from '../audit/hand-edit'
 import { insertIdentityRow, insertLinkRow, orderedPair, pairHolder } from './link-rows'
 import type { PartService } from '../catalogue/part.service'
 
-type LinkRow = Omit<Link, 'modifications' | 'createdAt' | 'updatedAt'> & {
-  createdAt: string
-  updatedAt: string
-  modifications: string | null
-}
-
-const LINK_SELECT = `SELECT l.id, a.partNumber AS "from", b.partNumber AS "to", l.relation, l.note, l.source, l.status, l.createdAt, l.updatedAt,
-  (SELECT group_concat(m.name, ';') FROM link_modification lm JOIN modification m ON m.id = lm.modificationId WHERE lm.linkId = l.id) AS modifications,
-  (SELECT COUNT(*) FROM field_report_link e WHERE e.linkId = l.id AND e.agrees = 0) AS contradictedBy
-  FROM link l JOIN part a ON a.id = l.partAId JOIN part b ON b.id = l.partBId`
-
-function toLink(row: LinkRow): Link {
-  return {
-    ...row,
-    modifications: row.modifications ? row.modifications.split(';').sort() : [],
-    contradictedBy: Number(row.contradictedBy ?? 0),
-    createdAt: new Date(`${row.createdAt}Z`).toISOString(),
-    updatedAt: new Date(`${row.updatedAt}Z`).toISOString(),
-  }
-}
-
 /** An editor's own changes to the fitment graph: links, their review, identities. */
 export class LinkService {
+  private readonly rows: LinkListRepository
+
   constructor(
     private readonly dataSource: DataSource,
     private readonly parts: PartService,
     private readonly graphIndex: FitGraphIndex,
-  ) {}
+  ) {
+    this.rows = new LinkListRepository(databaseOf(dataSource))
+  }
 
   async list(query: { status?: ReviewStatus; part?: string; contradicted?: boolean; page: number; pageSize: number }): Promise<LinkList> {
-    const where: string[] = []
-    const params: unknown[] = []
-    if (query.contradicted) where.push('l.id IN (SELECT e.linkId FROM field_report_link e WHERE e.agrees = 0)')
-    if (query.status) {
-      where.push('l.status = ?')
-      params.push(query.status)
-    }
-    if (query.part) {
-      const part = await this.parts.requireId(query.part, 'part')
-      where.push('(l.partAId = ? OR l.partBId = ?)')
-      params.push(part, part)
-    }
-    const whereSql = where.length ? ` WHERE ${where.join(' AND ')}` : ''
-    const [{ total }] = (await this.dataSource.query(`SELECT COUNT(*) AS total FROM link l${whereSql}`, params)) as [{ total: number }]
-    const rows = (await this.dataSource.query(`${LINK_SELECT}${whereSql} ORDER BY l.updatedAt DESC, l.id DESC LIMIT ? OFFSET ?`, [
-      ...params,
-      query.pageSize,
+    const partId = query.part ? await this.parts.requireId(query.part, 'part') : undefined
+    return this.rows.page(
+      { status: query.status, partId, contradicted: query.contradicted },
       (query.page - 1) * query.pageSize,
-    ])) as LinkRow[]
-    return { items: rows.map(toLink), total }
+      query.pageSize,
+    )
   }
 
   async get(id: number): Promise<Link> {
-    const [row] = (await this.dataSource.query(`${LINK_SELECT} WHERE l.id = ?`, [id])) as LinkRow[]
-    if (!row) throw AppError.notFound(`No link ${id}.`)
-    return toLink(row)
+    const link = await this.rows.byId(id)
+    if (!link) throw AppError.notFound(`No link ${id}.`)
+    return link
   }
 
   private async pair(a: string, b: string, paths: [string, string]): Promise<[number, number]> {
