@@ -1,3 +1,4 @@
+import { createPinia } from 'pinia'
 import { mount } from '@vue/test-utils'
 import PrimeVue from 'primevue/config'
 import { describe, expect, it } from 'vitest'
@@ -24,7 +25,7 @@ describe('FitWhyDialog', () => {
     }
     const wrapper = mount(FitWhyDialog, {
       props: { result, from: 'TM-BL-2000' },
-      global: { plugins: [PrimeVue], stubs: { Dialog: { template: '<div><slot /></div>' } } },
+      global: { plugins: [PrimeVue, createPinia()], stubs: { Dialog: { template: '<div><slot /></div>' } } },
     })
     expect(wrapper.get('.decided').text()).toBe('What decided: Gasket bore 84.5 mm is smaller than the 86 mm cylinder bore.')
   })
