@@ -72,4 +72,30 @@ describe('stock in the planner', () => {
     const lines = await partsList({ block: 'TM-BL-2000' })
     expect(lines.find((line) => line.partNumber === 'TM-BL-2000')!.shelf).toEqual({ take: [], toOrder: 1 })
   })
+
+  it('follows the shelf: once the counter sells the only block, the suggestions and the parts list say so', async () => {
+    // A fresh app: this test writes to the shelf.
+    const own = await createTestApp()
+    try {
+      const ownTech = await own.signIn('tech')
+      const blockStock = async () => {
+        const complete = await ownTech.post('/api/builds/complete').send({ slots: { head: 'TM-HD-1810' }, only: ['block'], limit: 50 })
+        const blocks = (complete.body as { slots: Record<string, { candidates: Candidate[] }> }).slots['block']!.candidates
+        return blocks.find((candidate) => candidate.part.partNumber === 'TM-BL-1800')!.stock.available
+      }
+      expect(await blockStock()).toBe(1)
+      const counter = await own.signIn('counter')
+      const units = await counter.get('/api/stock').query({ part: 'TM-BL-1800', status: 'available' })
+      const unit = (units.body as { items: { id: number }[] }).items[0]!
+      const sold = await counter.patch(`/api/stock/${unit.id}`).send({ status: 'sold' })
+      expect(sold.status, JSON.stringify(sold.body)).toBe(200)
+
+      expect(await blockStock()).toBe(0)
+      const evaluated = await ownTech.post('/api/builds/evaluate').send({ slots: { block: 'TM-BL-1800' } })
+      const block = (evaluated.body as { partsList: Line[] }).partsList.find((line) => line.partNumber === 'TM-BL-1800')!
+      expect(block.shelf).toEqual({ take: [], toOrder: 1 })
+    } finally {
+      await own.close()
+    }
+  })
 })
