@@ -23,6 +23,7 @@ import { PhotoStorage } from './field-reports/photo-storage'
 import { FieldReportNotices } from './field-reports/field-report-notices'
 import { Mailer } from './mail/mailer'
 import { StockIndex } from './stock/stock-index'
+import { PartsListShelf } from './stock/parts-list-shelf'
 import { StockRepository } from './stock/stock.repository'
 import { StockService } from './stock/stock.service'
 import { VehicleRepository } from './vehicles/vehicle.repository'
@@ -50,16 +51,24 @@ export function createServices(dataSource: DataSource, config: AppConfig, rules:
   const graphIndex = new FitGraphIndex(dataSource)
   const modifications = new ModificationService(dataSource)
   const evidence = new FieldReportEvidence(databaseOf(dataSource))
-  const evaluation = new BuildEvaluationService(dataSource, parts, graphIndex, rules, modifications, evidence)
-  const photos = new PhotoStorage(config.uploadDir)
   const stockRows = new StockRepository(databaseOf(dataSource))
+  const evaluation = new BuildEvaluationService(
+    dataSource,
+    parts,
+    graphIndex,
+    rules,
+    modifications,
+    evidence,
+    new PartsListShelf(stockRows),
+  )
+  const photos = new PhotoStorage(config.uploadDir)
   const stockIndex = new StockIndex(stockRows)
   const users = new UserService(dataSource)
   const outboxRows = new OutboxRepository(databaseOf(dataSource))
   const outbox = new OutboxService(outboxRows, new Mailer({ smtpUrl: config.smtpUrl, mailDir: config.mailDir, from: config.mailFrom }))
   const fieldReports = new FieldReportService(new FieldReportRepository(databaseOf(dataSource)), parts, photos)
   const fieldReportNotices = new FieldReportNotices(outbox, outboxRows, users, fieldReports, config.publicUrl)
-  const completion = new BuildCompletionService(parts, graphIndex, evaluation, modifications)
+  const completion = new BuildCompletionService(parts, graphIndex, evaluation, modifications, stockIndex)
   const shopSettings = new ShopSettingsService(databaseOf(dataSource))
   const sheets = new BuildSheetService(dataSource, parts, evaluation)
   const securityEvents = new SecurityEventService(dataSource)

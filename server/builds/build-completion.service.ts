@@ -9,6 +9,7 @@ import type { ModificationService } from '../catalogue/modification.service'
 import type { PartService } from '../catalogue/part.service'
 import { candidatePreference, type Preference } from './candidate-preference'
 import type { Caution } from '../../shared/schemas/build'
+import type { StockIndex } from '../stock/stock-index'
 
 /** A candidate as the fit graph holds it: its id, number and rule class (attributes and last year). */
 type Row = { id: number; partNumber: string; ruleClass: number }
@@ -38,6 +39,7 @@ export class BuildCompletionService {
     private readonly graphIndex: FitGraphIndex,
     private readonly evaluation: BuildEvaluationService,
     private readonly modifications: ModificationService,
+    private readonly stock: Pick<StockIndex, 'of'>,
   ) {}
 
   /**
@@ -153,6 +155,7 @@ export class BuildCompletionService {
       score: a.score,
       reasons: a.reasons,
       setBackFor: a.preference.notes,
+      stock: this.stock.of(a.row.id),
     }))
     return { candidates, total: scored.length }
   }

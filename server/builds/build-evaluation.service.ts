@@ -21,6 +21,7 @@ import { toPart } from '../catalogue/part.repository'
 import type { FitGraph, FitGraphIndex } from '../fitment/fit-graph'
 import type { ModificationService } from '../catalogue/modification.service'
 import type { PartService } from '../catalogue/part.service'
+import type { PartsListShelf } from '../stock/parts-list-shelf'
 
 /** A build with its slots resolved to parts, ready to judge. */
 export type ResolvedBuild = {
@@ -49,6 +50,7 @@ export class BuildEvaluationService {
     private readonly rules: RuleBook,
     private readonly modifications: ModificationService,
     private readonly evidence: FieldReportEvidence,
+    private readonly shelf?: PartsListShelf,
   ) {}
 
   async resolve(request: EvaluateRequest): Promise<ResolvedBuild> {
@@ -117,7 +119,7 @@ export class BuildEvaluationService {
       ],
       consumables: this.rules.loaded.consumables,
       findParts: (spec) => this.findParts(spec),
-    })
+    }).then((lines) => this.shelf?.withUnits(lines) ?? lines)
 
     const cautions = dedupeCautions([
       ...build.contextCautions,

@@ -1,17 +1,10 @@
 import { BUILD_SLOTS } from '../../shared/build-template'
 import type { Evaluation } from '../../shared/schemas/build'
 import type { QuoteLine, ShopSettings } from '../../shared/schemas/quotes'
-import { STOCK_CONDITIONS } from '../../shared/schemas/stock'
 import type { UnitRow } from '../stock/stock.repository'
+import { unitsToTake } from '../stock/units-to-take'
 
 const GROUP_OF = new Map<string, string>(BUILD_SLOTS.map((slot) => [slot.id, slot.group]))
-const RANK = new Map<string, number>(STOCK_CONDITIONS.map((condition, index) => [condition, index]))
-
-/** Best condition first, then the cheaper unit: what a counter would pull off the shelf. */
-export function unitOrder(a: UnitRow, b: UnitRow): number {
-  return (RANK.get(a.condition) ?? 9) - (RANK.get(b.condition) ?? 9) || a.priceCents - b.priceCents || a.id - b.id
-}
-
 /** What the shop has and charges: the units on its shelves, its sites' names, and the list price of a part to order. */
 export type Shelf = {
   unitsOf: (partNumber: string) => UnitRow[]
@@ -28,20 +21,14 @@ export type Shelf = {
 export function quoteLines(evaluation: Evaluation, slots: Record<string, unknown>, shop: ShopSettings, shelf: Shelf): QuoteLine[] {
   const { unitsOf, siteName, listPriceOf } = shelf
   const lines: QuoteLine[] = []
-  const taken = new Set<number>()
-  for (const item of evaluation.partsList) {
+  const picks = unitsToTake(evaluation.partsList, unitsOf)
+  evaluation.partsList.forEach((item, index) => {
     if (!item.partNumber) {
       lines.push({ kind: 'consumable', description: item.description, quantity: item.quantity, unitPriceCents: 0, toOrder: true })
-      continue
+      return
     }
-    const units = unitsOf(item.partNumber)
-      .filter((unit) => !taken.has(unit.id))
-      .sort(unitOrder)
-    const wholeUnits = Number.isInteger(item.quantity) ? item.quantity : 0
-    let left = item.quantity
-    for (const unit of units.slice(0, wholeUnits)) {
-      taken.add(unit.id)
-      left -= 1
+    const { units, toOrder: left } = picks[index]!
+    for (const unit of units) {
       lines.push({
         kind: 'part',
         partNumber: item.partNumber,
@@ -75,7 +62,7 @@ export function quoteLines(evaluation: Evaluation, slots: Record<string, unknown
         toOrder: true,
       })
     }
-  }
+  })
   const groups = new Set(
     Object.keys(slots)
       .map((slot) => GROUP_OF.get(slot))

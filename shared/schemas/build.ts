@@ -1,6 +1,7 @@
 import { z } from 'zod'
 import { partSchema } from './part'
 import { slotRecord } from './slot-record'
+import { availabilitySchema, NO_STOCK, stockConditionSchema } from './stock'
 import { explanationStepSchema, extraPartSchema, modificationSchema, relationSchema, verdictSchema } from './fitment'
 
 /** Slot -> part number. A list is accepted only to answer "two parts in one slot" clearly. */
@@ -63,6 +64,16 @@ export const pairJudgementSchema = z.object({
 })
 export type PairJudgement = z.infer<typeof pairJudgementSchema>
 
+/** One unit on the shelf that a parts-list line takes. */
+export const shelfUnitSchema = z.object({
+  stockItemId: z.number().int(),
+  site: z.string(),
+  location: z.string(),
+  condition: stockConditionSchema,
+  priceCents: z.number().int(),
+})
+export type ShelfUnit = z.infer<typeof shelfUnitSchema>
+
 export const partsListLineSchema = z.object({
   partNumber: z.string().optional(),
   description: z.string(),
@@ -70,6 +81,8 @@ export const partsListLineSchema = z.object({
   unit: z.string(),
   reason: z.string(),
   category: z.enum(['chosen', 'modification', 'consumable']),
+  /** For a line with a part number: the units to take off the shelf, and how many are left to order. */
+  shelf: z.object({ take: z.array(shelfUnitSchema), toOrder: z.number() }).optional(),
 })
 export type PartsListLine = z.infer<typeof partsListLineSchema>
 
@@ -134,6 +147,8 @@ export const candidateSchema = z.object({
   reasons: z.array(z.string()),
   /** Why it is ranked below parts with more modifications: legal blockers and new danger cautions it brings. */
   setBackFor: z.array(z.string()),
+  /** What is on the shelf of the candidate, as on a what-fits line. */
+  stock: availabilitySchema.default(NO_STOCK),
 })
 export type Candidate = z.infer<typeof candidateSchema>
 

@@ -1,6 +1,7 @@
 import Papa from 'papaparse'
 import { neutraliseCell } from '@shared/csv-cells'
 import type { PartsListLine } from '@shared/schemas/build'
+import { shelfCsvText } from './parts-list-shelf'
 
 const CATEGORY_LABELS: Record<PartsListLine['category'], string> = {
   chosen: 'Chosen part',
@@ -8,7 +9,7 @@ const CATEGORY_LABELS: Record<PartsListLine['category'], string> = {
   consumable: 'Consumable',
 }
 
-export const PARTS_LIST_COLUMNS = ['Part number', 'Description', 'Quantity', 'Unit', 'Category', 'Reason'] as const
+export const PARTS_LIST_COLUMNS = ['Part number', 'Description', 'Quantity', 'Unit', 'From the shelf', 'Category', 'Reason'] as const
 
 /** The build's full parts list as CSV text, every text cell neutralised. */
 export function partsListCsv(lines: readonly PartsListLine[]): string {
@@ -17,6 +18,7 @@ export function partsListCsv(lines: readonly PartsListLine[]): string {
     neutraliseCell(line.description),
     line.quantity,
     neutraliseCell(line.unit),
+    neutraliseCell(shelfCsvText(line)),
     CATEGORY_LABELS[line.category],
     neutraliseCell(line.reason),
   ])

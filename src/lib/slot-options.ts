@@ -3,6 +3,7 @@ import type { Candidate } from '@shared/schemas/build'
 import { normalisePartCode, type Part } from '@shared/schemas/part'
 import { PART_KIND_LABELS } from '@shared/schemas/part-kinds'
 import type { Relation } from '@shared/schemas/fitment'
+import type { Availability } from '@shared/schemas/stock'
 
 export type SlotOption = {
   part: Part
@@ -10,6 +11,8 @@ export type SlotOption = {
   relation?: Relation
   modifications: string[]
   reasons: string[]
+  /** What is on the shelf; only suggestions carry it (a searched part is not checked against the shelf here). */
+  stock?: Availability
   /** Said beside a part that was searched for but is not among the suggestions. */
   note?: string
 }
@@ -34,7 +37,14 @@ function matches(part: Part, query: string): boolean {
 export function slotOptionGroups(slot: SlotId, query: string, candidates: readonly Candidate[], found: readonly Part[]): SlotOptionGroup[] {
   const suggested = candidates
     .filter((candidate) => matches(candidate.part, query))
-    .map((c): SlotOption => ({ part: c.part, suggested: true, relation: c.relation, modifications: c.modifications, reasons: c.reasons }))
+    .map((c): SlotOption => ({
+      part: c.part,
+      suggested: true,
+      relation: c.relation,
+      modifications: c.modifications,
+      reasons: c.reasons,
+      stock: c.stock,
+    }))
   const taken = new Set(candidates.map((candidate) => candidate.part.partNumber))
   const others = found
     .filter((part) => !taken.has(part.partNumber))

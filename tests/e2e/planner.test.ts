@@ -141,8 +141,13 @@ describe.skipIf(!run)('technician: plan a build, get the verdict and the parts l
     ])
     expect(download.suggestedFilename()).toBe('build-parts-list.csv')
     const text = readFileSync((await download.path())!, 'utf8')
-    expect(text.replace(/^\uFEFF/, '').split('\r\n')[0]).toBe('"Part number","Description","Quantity","Unit","Category","Reason"')
-    expect(text).toContain('"TM-HD-2000","TK20V cylinder head","1","piece","Chosen part"')
+    expect(text.replace(/^\uFEFF/, '').split('\r\n')[0]).toBe(
+      '"Part number","Description","Quantity","Unit","From the shelf","Category","Reason"',
+    )
+    // The demo's new head on the counter's shelf (data/demo/stock.json).
+    expect(text).toContain(
+      '"TM-HD-2000","TK20V cylinder head","1","piece","Northgate counter · Aisle 3, shelf 2 · new · 489.00","Chosen part"',
+    )
   })
 
   it('saves the build as a sheet under a name', async () => {

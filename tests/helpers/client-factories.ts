@@ -35,7 +35,7 @@ export function makeFit(part: Part, relation: FitResult['relation'], review: Fit
 }
 
 export function makeCandidate(part: Part, relation: Candidate['relation'] = 'fits'): Candidate {
-  return { part, relation, modifications: [], score: 0, reasons: [], setBackFor: [] }
+  return { part, relation, modifications: [], score: 0, reasons: [], setBackFor: [], stock: { ...NO_STOCK } }
 }
 
 export function makePair(

@@ -28,15 +28,27 @@ describe('parts list CSV', () => {
     ])
     const rows = parse(csv)
     expect(rows[0]).toEqual([...PARTS_LIST_COLUMNS])
-    expect(rows[1]).toEqual(['ZX-IN-2000', 'Injector', '4', 'piece', 'Chosen part', 'Chosen injectors.'])
-    expect(rows[2]).toEqual(['', `'=HYPERLINK("http://example.invalid")`, '1', 'set', 'Consumable', "'@once"])
+    expect(rows[1]).toEqual(['ZX-IN-2000', 'Injector', '4', 'piece', '', 'Chosen part', 'Chosen injectors.'])
+    expect(rows[2]).toEqual(['', `'=HYPERLINK("http://example.invalid")`, '1', 'set', '', 'Consumable', "'@once"])
     expect(csv).toContain('\r\n')
   })
 
   it('keeps commas, quotes and line breaks inside a cell', () => {
     const rows = parse(partsListCsv([line({ description: 'Washer, hardened "M11"\nten', reason: 'a, b' })]))
     expect(rows[1]?.[1]).toBe('Washer, hardened "M11"\nten')
-    expect(rows[1]?.[5]).toBe('a, b')
+    expect(rows[1]?.[6]).toBe('a, b')
+  })
+
+  it('writes the units to take and what to order in the shelf column, prices in plain decimals', () => {
+    const unit = { stockItemId: 1, site: 'Yard B', location: 'Rack H4', condition: 'used' as const, priceCents: 123456 }
+    const rows = parse(
+      partsListCsv([
+        line({ partNumber: 'ZX-VL-1', quantity: 4, shelf: { take: [unit, { ...unit, stockItemId: 2, location: '' }], toOrder: 2 } }),
+        line({ partNumber: 'ZX-GK-1', shelf: { take: [], toOrder: 1 } }),
+      ]),
+    )
+    expect(rows[1]?.[4]).toBe('Yard B · Rack H4 · used · 1234.56; Yard B · no shelf given · used · 1234.56; order 2 more')
+    expect(rows[2]?.[4]).toBe('order')
   })
 
   it('names the file after the build in letters, digits and dashes', () => {

@@ -13,14 +13,14 @@ const typed = makePart('TM-HD-1800', 'head')
  * The network edge, held: each request waits until the test lets it answer, so the
  * answer to the search made at focus can arrive after the scanner's text.
  */
-function heldServer() {
+function heldServer(candidate = makeCandidate(fitting)) {
   const waiting: (() => void)[] = []
   vi.stubGlobal('fetch', (url: string) => {
     const path = new URL(url, 'http://fitwright.test')
     const q = path.searchParams.get('q') ?? ''
     const body =
       path.pathname === '/api/builds/complete'
-        ? { slots: { head: { matesWith: ['block'], candidates: [makeCandidate(fitting)] } } }
+        ? { slots: { head: { matesWith: ['block'], candidates: [candidate] } } }
         : { items: [fitting, typed].filter((part) => part.partNumber.includes(q.toUpperCase())), total: 2 }
     return new Promise<Response>((resolve) =>
       waiting.push(() => resolve(new Response(JSON.stringify(body), { status: 200, headers: { 'Content-Type': 'application/json' } }))),
@@ -81,5 +81,22 @@ describe('PlannerSlotPicker', () => {
     await input.trigger('keydown', { key: 'Enter', code: 'Enter' })
 
     expect(wrapper.emitted('set')).toEqual([['TM-HD-2000']])
+  })
+
+  it('shows on a suggestion what is on the shelf, and nothing of the kind on a part only found by search', async () => {
+    const stock = { available: 2, bestCondition: 'used' as const, minPriceCents: 2500, maxPriceCents: 17500, sites: ['Yard B'] }
+    const server = heldServer({ ...makeCandidate(fitting), stock })
+    const wrapper = mount(PlannerSlotPicker, {
+      props: { buildSlot: headSlot, build: () => ({ slots: { block: 'TM-BL-1810' }, context: {} }) },
+      global: { plugins: [PrimeVue] },
+      attachTo: document.body,
+    })
+    // Another build than the tests above: the picker keeps answers by build.
+    await wrapper.get('input[role="combobox"]').trigger('focus')
+    await server.answerAll()
+
+    const options = [...document.body.querySelectorAll('[role="option"]')].map((option) => option.textContent ?? '')
+    expect(options.find((text) => text.includes('TM-HD-2000'))).toMatch(/2 in stock · best used · 25\.00–175\.00\s*Yard B/)
+    expect(options.find((text) => text.includes('TM-HD-1800'))).not.toContain('stock')
   })
 })

@@ -1,0 +1,33 @@
+import type { PartsListLine } from '../../shared/schemas/build'
+import { STOCK_CONDITIONS } from '../../shared/schemas/stock'
+import type { UnitRow } from './stock.repository'
+
+const RANK = new Map<string, number>(STOCK_CONDITIONS.map((condition, index) => [condition, index]))
+
+/** Best condition first, then the cheaper unit: what a counter would pull off the shelf. */
+export function unitOrder(a: UnitRow, b: UnitRow): number {
+  return (RANK.get(a.condition) ?? 9) - (RANK.get(b.condition) ?? 9) || a.priceCents - b.priceCents || a.id - b.id
+}
+
+/** For one line of a parts list: the units to take off the shelf and how many are left to order. */
+export type LineUnits = { units: UnitRow[]; toOrder: number }
+
+/**
+ * The units to take for each line of a parts list, line by line: one unit
+ * per whole piece, the best first, a unit never taken twice; what the shelf
+ * cannot cover (or a quantity that is not whole pieces) is to order. Lines
+ * without a part number take nothing and order nothing here.
+ */
+export function unitsToTake(lines: readonly PartsListLine[], unitsOf: (partNumber: string) => UnitRow[]): LineUnits[] {
+  const taken = new Set<number>()
+  return lines.map((line) => {
+    if (!line.partNumber) return { units: [], toOrder: 0 }
+    const wholeUnits = Number.isInteger(line.quantity) ? line.quantity : 0
+    const units = unitsOf(line.partNumber)
+      .filter((unit) => !taken.has(unit.id))
+      .sort(unitOrder)
+      .slice(0, Math.max(0, wholeUnits))
+    for (const unit of units) taken.add(unit.id)
+    return { units, toOrder: line.quantity - units.length }
+  })
+}
