@@ -15,7 +15,8 @@ export type LineUnits = { units: UnitRow[]; toOrder: number }
 /**
  * The units to take for each line of a parts list, line by line: one unit
  * per whole piece, the best first, a unit never taken twice; what the shelf
- * cannot cover (or a quantity that is not whole pieces) is to order. Lines
+ * cannot cover (or a quantity that is not whole pieces) is to order; cores
+ * are never taken. Lines
  * without a part number take nothing and order nothing here.
  */
 export function unitsToTake(lines: readonly PartsListLine[], unitsOf: (partNumber: string) => UnitRow[]): LineUnits[] {
@@ -23,8 +24,9 @@ export function unitsToTake(lines: readonly PartsListLine[], unitsOf: (partNumbe
   return lines.map((line) => {
     if (!line.partNumber) return { units: [], toOrder: 0 }
     const wholeUnits = Number.isInteger(line.quantity) ? line.quantity : 0
+    // A core is a worn unit kept for exchange or rebuilding, never a part to fit.
     const units = unitsOf(line.partNumber)
-      .filter((unit) => !taken.has(unit.id))
+      .filter((unit) => unit.condition !== 'core' && !taken.has(unit.id))
       .sort(unitOrder)
       .slice(0, Math.max(0, wholeUnits))
     for (const unit of units) taken.add(unit.id)

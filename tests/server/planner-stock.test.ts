@@ -94,6 +94,14 @@ describe('stock in the planner', () => {
       const evaluated = await ownTech.post('/api/builds/evaluate').send({ slots: { block: 'TM-BL-1800' } })
       const block = (evaluated.body as { partsList: Line[] }).partsList.find((line) => line.partNumber === 'TM-BL-1800')!
       expect(block.shelf).toEqual({ take: [], toOrder: 1 })
+
+      // With the used head sold, only its core is left: a core is for exchange, so the head is to order.
+      const heads = await counter.get('/api/stock').query({ part: 'TM-HD-1810', status: 'available' })
+      const used = (heads.body as { items: { id: number; condition: string }[] }).items.find((item) => item.condition === 'used')!
+      expect((await counter.patch(`/api/stock/${used.id}`).send({ status: 'sold' })).status).toBe(200)
+      const withCore = await ownTech.post('/api/builds/evaluate').send({ slots: { head: 'TM-HD-1810' } })
+      const head = (withCore.body as { partsList: Line[] }).partsList.find((line) => line.partNumber === 'TM-HD-1810')!
+      expect(head.shelf).toEqual({ take: [], toOrder: 1 })
     } finally {
       await own.close()
     }
