@@ -95,6 +95,33 @@ describe.skipIf(!run)('a build sheet shared by mail, opened read-only from the m
     expect(errors).toEqual([])
   })
 
+  it('an editor shares a quote; the mailed link shows it as it prints, without the counter buttons', async () => {
+    const editor = await newPage(1366, 900)
+    await signInAs(editor, server.url, 'editor')
+    await editor.goto(`${server.url}/builds`)
+    await editor.getByRole('button', { name: `Make a quote for ${SHEET}`, exact: true }).click()
+    await editor.getByLabel('Customer (optional)').fill('Walk-in, blue hatchback')
+    await editor.getByRole('button', { name: 'Make the quote' }).click()
+    await editor.waitForURL(/\/quotes\/\d+$/)
+    await editor.getByRole('button', { name: 'Share by mail' }).click()
+    const dialog = editor.getByRole('dialog', { name: 'Share this quote by mail' })
+    await dialog.getByLabel("Recipient's e-mail").fill('walk-in@example.test')
+    await dialog.getByRole('button', { name: 'Send link' }).click()
+    await dialog.waitFor({ state: 'hidden' })
+
+    const mail = await mailTo('walk-in@example.test')
+    expect(mail.subject).toContain('Walk-in, blue hatchback')
+    expect(mail.text).toContain('for 7 days')
+    const reader = await newPage(768, 1024)
+    await reader.goto(`${server.url}${sharedLink(mail).pathAndHash}`)
+    await reader.getByRole('region', { name: 'Totals' }).waitFor()
+    await reader.getByRole('heading', { name: 'Cautions' }).waitFor()
+    expect(await reader.getByText('Walk-in, blue hatchback').first().isVisible()).toBe(true)
+    expect(await reader.getByRole('button', { name: /Accept|Share/ }).count()).toBe(0)
+    await picture(reader, 'shared-quote-tablet')
+    expect(errors).toEqual([])
+  })
+
   it('an unknown link says so instead of showing anything', async () => {
     const reader = await newPage(768, 1024)
     await reader.goto(`${server.url}/shared#token=not-a-real-token`)
