@@ -26,6 +26,7 @@ import { mailRoutes } from './mail/mail.routes'
 import { stockRoutes } from './stock/stock.routes'
 import { vehicleRoutes } from './vehicles/vehicles.routes'
 import { quoteRoutes } from './quotes/quotes.routes'
+import { sharedLinkRoutes } from './shared-links/shared-links.routes'
 import type { Services } from './services'
 
 /** The largest JSON body any route takes. */
@@ -86,6 +87,7 @@ export async function createApp({ config, dataSource, services, version, clientD
   api.use(stockRoutes(services.stock))
   api.use(vehicleRoutes(services.vehicles))
   api.use(quoteRoutes(services))
+  api.use(sharedLinkRoutes(services.sharedLinks))
   api.use(requireSignIn, notFoundApi)
   app.use('/api', api)
 

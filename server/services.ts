@@ -29,6 +29,8 @@ import { StockService } from './stock/stock.service'
 import { VehicleRepository } from './vehicles/vehicle.repository'
 import { VehicleService } from './vehicles/vehicle.service'
 import { QuoteService } from './quotes/quote.service'
+import { SharedLinkService } from './shared-links/shared-link.service'
+import { SharedLinkRepository } from './shared-links/shared-link.repository'
 import { PartRepository } from './catalogue/part.repository'
 import { ShopSettingsService } from './settings/shop-settings.service'
 import { OutboxRepository } from './mail/outbox.repository'
@@ -82,6 +84,15 @@ export function createServices(dataSource: DataSource, config: AppConfig, rules:
     resetThrottle: new ResetThrottle(new SignInThrottleRepository(databaseOf(dataSource)), config.resetLimits),
     publicUrl: config.publicUrl,
   })
+  const quotes = new QuoteService(
+    databaseOf(dataSource),
+    evaluation,
+    sheets,
+    shopSettings,
+    stockRows,
+    stockIndex,
+    new PartRepository(databaseOf(dataSource)),
+  )
   const ownPassword = new OwnPasswordService(accountRows, {
     sessions,
     events: securityEvents,
@@ -107,15 +118,13 @@ export function createServices(dataSource: DataSource, config: AppConfig, rules:
     fill: new BuildFillService(graphIndex, evaluation, completion),
     sheets,
     shopSettings,
-    quotes: new QuoteService(
-      databaseOf(dataSource),
-      evaluation,
+    quotes,
+    sharedLinks: new SharedLinkService(databaseOf(dataSource), new SharedLinkRepository(databaseOf(dataSource)), {
       sheets,
-      shopSettings,
-      stockRows,
-      stockIndex,
-      new PartRepository(databaseOf(dataSource)),
-    ),
+      quotes,
+      outbox,
+      publicUrl: config.publicUrl,
+    }),
     links: new LinkService(dataSource, parts, graphIndex),
     imports: new ImportService(dataSource, { maxRows: config.importMaxRows }, graphIndex, stockIndex),
     exports: new ExportService(dataSource),

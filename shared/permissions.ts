@@ -15,6 +15,7 @@ export const PERMISSIONS = {
   'field-reports.file': ['admin', 'editor', 'tech'],
   'field-reports.review': ['admin', 'editor'],
   'stock.manage': ['admin', 'editor', 'counter'],
+  'quotes.share': ['admin', 'editor', 'counter'],
 } as const satisfies Record<string, readonly Role[]>
 
 export type Permission = keyof typeof PERMISSIONS

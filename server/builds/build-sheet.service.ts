@@ -1,6 +1,6 @@
 import type { DataSource, Repository } from 'typeorm'
 import { isSlotId } from '../../shared/build-template'
-import type { BuildSheet, BuildSheetInput, BuildSheetUpdate } from '../../shared/schemas/build'
+import type { BuildSheet, BuildSheetInput, BuildSheetUpdate, Evaluation } from '../../shared/schemas/build'
 import type { User } from '../../shared/schemas/auth'
 import { can } from '../../shared/permissions'
 import { BuildSheetEntity } from './build-sheet.entity'
@@ -119,17 +119,8 @@ export class BuildSheetService {
    * without evaluating every sheet on every request. A later catalogue change shows on opening the sheet.
    */
   private async judge(entity: BuildSheetEntity) {
-    const context = {
-      ...(entity.targetPowerKw !== null && { targetPowerKw: entity.targetPowerKw }),
-      ...(entity.fuelOctane !== null && { fuelOctane: entity.fuelOctane }),
-      ...(entity.chassisModelYear !== null && { chassisModelYear: entity.chassisModelYear }),
-      ...(entity.vin !== null && { vin: entity.vin }),
-    }
-    const evaluation = await this.evaluation.evaluate({ slots: entity.slots, ...context }).catch((error: unknown) => {
-      // A build the planner cannot judge is still saved; the list shows no verdict for it.
-      if (error instanceof AppError) return null
-      throw error
-    })
+    // A build the planner cannot judge is still saved; the list shows no verdict for it.
+    const evaluation = await this.evaluateSheet(entity)
     if (!evaluation) {
       entity.savedVerdict = null
       entity.labourMinutes = null
@@ -137,6 +128,27 @@ export class BuildSheetService {
     }
     entity.savedVerdict = evaluation.verdict
     entity.labourMinutes = evaluation.modifications.reduce((sum, modification) => sum + (modification.timeMinutes ?? 0), 0)
+  }
+
+  /** Judges the sheet as it stands; null when it cannot be judged (a part left the catalogue). */
+  private evaluateSheet(entity: BuildSheetEntity): Promise<Evaluation | null> {
+    const context = {
+      ...(entity.targetPowerKw !== null && { targetPowerKw: entity.targetPowerKw }),
+      ...(entity.fuelOctane !== null && { fuelOctane: entity.fuelOctane }),
+      ...(entity.chassisModelYear !== null && { chassisModelYear: entity.chassisModelYear }),
+      ...(entity.vin !== null && { vin: entity.vin }),
+    }
+    return this.evaluation.evaluate({ slots: entity.slots, ...context }).catch((error: unknown) => {
+      if (error instanceof AppError) return null
+      throw error
+    })
+  }
+
+  /** A sheet opened through a shared link: no owner check (the link is the permission), judged afresh. */
+  async forSharedLink(id: number): Promise<{ sheet: BuildSheet; evaluation: Evaluation | null } | null> {
+    const entity = await this.sheets.findOne({ where: { id }, relations: { owner: true } })
+    if (!entity) return null
+    return { sheet: toBuildSheet(entity), evaluation: await this.evaluateSheet(entity) }
   }
 
   async remove(id: number, user: User): Promise<void> {

@@ -1,3 +1,4 @@
+import { SharedLinkEntity } from '../shared-links/shared-link.entity'
 import { AppSettingEntity } from '../settings/app-setting.entity'
 import { BuildSheetEntity } from '../builds/build-sheet.entity'
 import { IdentityEntity } from '../fitment/identity.entity'
@@ -48,4 +49,5 @@ export const entities = [
   VehicleOriginalEntity,
   QuoteEntity,
   AccountTokenEntity,
+  SharedLinkEntity,
 ]

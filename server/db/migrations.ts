@@ -2,6 +2,8 @@ import { AccountTokens1796223315452 } from '../migrations/1796223315452-AccountT
 import { AccountTokens1796223318439 as PostgresAccountTokens1796223318439 } from '../migrations/postgres/1796223318439-AccountTokens'
 import { Quotes1796215187917 } from '../migrations/1796215187917-Quotes'
 import { PartListPrice1796226633835 } from '../migrations/1796226633835-PartListPrice'
+import { SharedLinks1796227511872 } from '../migrations/1796227511872-SharedLinks'
+import { SharedLinks1796227515397 as PostgresSharedLinks1796227515397 } from '../migrations/postgres/1796227515397-SharedLinks'
 import { PartListPrice1796226637373 as PostgresPartListPrice1796226637373 } from '../migrations/postgres/1796226637373-PartListPrice'
 import { Quotes1796215189078 as PostgresQuotes1796215189078 } from '../migrations/postgres/1796215189078-Quotes'
 import { ImportVehiclesStock1796223370557 } from '../migrations/1796223370557-ImportVehiclesStock'
@@ -47,6 +49,7 @@ export const migrations = [
   AccountTokens1796223315452,
   ImportVehiclesStock1796223370557,
   PartListPrice1796226633835,
+  SharedLinks1796227511872,
 ]
 
 /** PostgreSQL's, generated from the same entities (`npx tsx server/db/generate-migration.ts Name --postgres`). */
@@ -65,4 +68,5 @@ export const postgresMigrations = [
   PostgresAccountTokens1796223318439,
   PostgresImportVehiclesStock1796223379484,
   PostgresPartListPrice1796226637373,
+  PostgresSharedLinks1796227515397,
 ]

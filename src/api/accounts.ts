@@ -7,12 +7,7 @@ import {
   type SetPasswordInput,
   type UserInviteInput,
 } from '@shared/schemas/accounts'
-import { csrfHeader, refreshCsrfToken, request, requestVoid } from './http'
-
-/** Pages open without a session need a CSRF token too: ask for one first when there is none. */
-async function withToken() {
-  if (Object.keys(csrfHeader()).length === 0) await refreshCsrfToken()
-}
+import { ensureCsrfToken as withToken, request, requestVoid } from './http'
 
 export const accountsApi = {
   invite: (input: UserInviteInput) => request('POST', '/users/invite', userSchema, { body: input }),

@@ -63,6 +63,11 @@ export function csrfHeader(): Record<string, string> {
   return match ? { 'x-csrf-token': decodeURIComponent(match[1]!) } : {}
 }
 
+/** Pages open without a session need a CSRF token too: asks for one first when there is none. */
+export async function ensureCsrfToken(): Promise<void> {
+  if (Object.keys(csrfHeader()).length === 0) await refreshCsrfToken()
+}
+
 /** Asks the server for a token (before the first sign-in, or after the session changed). */
 export async function refreshCsrfToken(): Promise<void> {
   await fetch(apiUrl('/auth/csrf'), { credentials: 'same-origin' }).catch(() => undefined)

@@ -29,6 +29,12 @@ const router = createRouter({
       meta: { public: true, title: 'Choose a password' },
     },
     {
+      path: '/shared',
+      name: 'shared',
+      component: () => import('@/views/SharedView.vue'),
+      meta: { public: true, title: 'Shared with you' },
+    },
+    {
       path: '/',
       component: () => import('@/layouts/AppLayout.vue'),
       children: [

@@ -54,3 +54,10 @@ export function passwordLink(mail: ReceivedMail): { url: string; pathAndHash: st
   if (!match) throw new Error(`No set-password link in "${mail.subject}":\n${mail.text}`)
   return { url: match[1]! + match[2]!, pathAndHash: match[2]!, token: match[3]! }
 }
+
+/** The read-only shared link in a message's text: its path and #token, to open on whichever port the test server has. */
+export function sharedLink(mail: ReceivedMail): { url: string; pathAndHash: string; token: string } {
+  const match = /(https?:\/\/[^\s/]+)(\/shared#token=([\w-]+))/.exec(mail.text)
+  if (!match) throw new Error(`No shared link in "${mail.subject}":\n${mail.text}`)
+  return { url: match[1]! + match[2]!, pathAndHash: match[2]!, token: match[3]! }
+}
