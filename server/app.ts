@@ -84,7 +84,12 @@ export async function createApp({ config, dataSource, services, version, clientD
     }),
   )
   api.use(mailRoutes(services.outbox))
-  api.use(stockRoutes(services.stock))
+  api.use(
+    stockRoutes(services.stock, services.stockPhotos, {
+      photoMaxBytes: config.photoMaxBytes,
+      uploadTempDir: path.join(path.dirname(config.uploadTempDir), 'stock-photos-in-progress'),
+    }),
+  )
   api.use(vehicleRoutes(services.vehicles))
   api.use(quoteRoutes(services))
   api.use(sharedLinkRoutes(services.sharedLinks))

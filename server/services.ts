@@ -25,6 +25,8 @@ import { Mailer } from './mail/mailer'
 import { StockIndex } from './stock/stock-index'
 import { PartsListShelf } from './stock/parts-list-shelf'
 import { StockRepository } from './stock/stock.repository'
+import { StockPhotoRepository } from './stock/stock-photo.repository'
+import { StockPhotoService } from './stock/stock-photo.service'
 import { StockService } from './stock/stock.service'
 import { VehicleRepository } from './vehicles/vehicle.repository'
 import { VehicleService } from './vehicles/vehicle.service'
@@ -65,6 +67,7 @@ export function createServices(dataSource: DataSource, config: AppConfig, rules:
   )
   const photos = new PhotoStorage(config.uploadDir)
   const stockIndex = new StockIndex(stockRows)
+  const stock = new StockService(stockRows, parts, stockIndex)
   const users = new UserService(dataSource)
   const outboxRows = new OutboxRepository(databaseOf(dataSource))
   const outbox = new OutboxService(outboxRows, new Mailer({ smtpUrl: config.smtpUrl, mailDir: config.mailDir, from: config.mailFrom }))
@@ -130,7 +133,8 @@ export function createServices(dataSource: DataSource, config: AppConfig, rules:
     exports: new ExportService(dataSource),
     photos,
     stockIndex,
-    stock: new StockService(stockRows, parts, stockIndex),
+    stock,
+    stockPhotos: new StockPhotoService(new StockPhotoRepository(databaseOf(dataSource)), photos, stock),
     vehicles: new VehicleService(new VehicleRepository(databaseOf(dataSource)), parts),
     fieldReports,
     fieldReportReview: new FieldReportReviewService(dataSource, fieldReports, graphIndex, fieldReportNotices),

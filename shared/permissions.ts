@@ -1,4 +1,5 @@
 import type { Role } from './schemas/auth'
+import { IMPORT_TYPES, type ImportType } from './schemas/imports'
 
 /**
  * What each role may do, read by the server's route guards and by the client's
@@ -11,6 +12,8 @@ export const PERMISSIONS = {
   'builds.see-all': ['admin', 'editor'],
   'catalogue.edit': ['admin', 'editor'],
   'imports.manage': ['admin', 'editor'],
+  /** The imports screen: editors for every file, the counter for its stock book. */
+  'imports.open': ['admin', 'editor', 'counter'],
   'users.manage': ['admin'],
   'field-reports.file': ['admin', 'editor', 'tech'],
   'field-reports.review': ['admin', 'editor'],
@@ -22,6 +25,12 @@ export type Permission = keyof typeof PERMISSIONS
 
 export function can(role: Role | undefined | null, permission: Permission): boolean {
   return !!role && (PERMISSIONS[permission] as readonly Role[]).includes(role)
+}
+
+/** The kinds of file a role may import, export and revert: every kind for editors, the stock book for the counter. */
+export function importTypesFor(role: Role | undefined | null): ImportType[] {
+  if (can(role, 'imports.manage')) return [...IMPORT_TYPES]
+  return can(role, 'stock.manage') ? ['stock'] : []
 }
 
 export function rolesFor(permission: Permission): Role[] {

@@ -20,6 +20,7 @@ import { FieldReportLinkEntity } from '../field-reports/field-report-link.entity
 import { MailOutboxEntity } from '../mail/mail-outbox.entity'
 import { SiteEntity } from '../stock/site.entity'
 import { StockItemEntity } from '../stock/stock-item.entity'
+import { StockPhotoEntity } from '../stock/stock-photo.entity'
 import { VehicleApplicationEntity } from '../vehicles/vehicle-application.entity'
 import { VehicleOriginalEntity } from '../vehicles/vehicle-original.entity'
 import { QuoteEntity } from '../quotes/quote.entity'
@@ -45,6 +46,7 @@ export const entities = [
   MailOutboxEntity,
   SiteEntity,
   StockItemEntity,
+  StockPhotoEntity,
   VehicleApplicationEntity,
   VehicleOriginalEntity,
   QuoteEntity,

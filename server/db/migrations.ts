@@ -1,3 +1,5 @@
+import { StockPhotos1796229010828 } from '../migrations/1796229010828-StockPhotos'
+import { StockPhotos1796229013832 as PostgresStockPhotos1796229013832 } from '../migrations/postgres/1796229013832-StockPhotos'
 import { AccountTokens1796223315452 } from '../migrations/1796223315452-AccountTokens'
 import { AccountTokens1796223318439 as PostgresAccountTokens1796223318439 } from '../migrations/postgres/1796223318439-AccountTokens'
 import { Quotes1796215187917 } from '../migrations/1796215187917-Quotes'
@@ -50,6 +52,7 @@ export const migrations = [
   ImportVehiclesStock1796223370557,
   PartListPrice1796226633835,
   SharedLinks1796227511872,
+  StockPhotos1796229010828,
 ]
 
 /** PostgreSQL's, generated from the same entities (`npx tsx server/db/generate-migration.ts Name --postgres`). */
@@ -69,4 +72,5 @@ export const postgresMigrations = [
   PostgresImportVehiclesStock1796223379484,
   PostgresPartListPrice1796226637373,
   PostgresSharedLinks1796227515397,
+  PostgresStockPhotos1796229013832,
 ]

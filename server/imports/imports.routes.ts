@@ -2,7 +2,8 @@ import { rm } from 'node:fs/promises'
 import path from 'node:path'
 import { Router } from 'express'
 import { z } from 'zod'
-import { rolesFor } from '../../shared/permissions'
+import { can, importTypesFor, rolesFor } from '../../shared/permissions'
+import type { Role } from '../../shared/schemas/auth'
 import { EXPORT_FILES, importFieldsSchema } from '../../shared/schemas/imports'
 import { requireRole } from '../auth/require-role'
 import type { AppConfig } from '../config/env'
@@ -26,18 +27,30 @@ function cleanFileName(name: string): string {
   return (base || 'upload.csv').slice(0, 200)
 }
 
+/** Refuses a kind of file the role may not bring in (a counter imports only the stock book). */
+function requireImportType(role: Role, type: string) {
+  const allowed: string[] = importTypesFor(role)
+  if (!allowed.includes(type)) {
+    throw new AppError(403, 'forbidden', `Your role may import ${allowed.join(', ')} files only; ${type} files are an editor's.`)
+  }
+}
+
 export function importRoutes(services: { imports: ImportService; exports: ExportService }, config: AppConfig): Router {
   const router = Router()
-  const editors = requireRole(...rolesFor('imports.manage'))
+  const importers = requireRole(...rolesFor('imports.open'))
 
-  router.get('/imports', editors, async (_req, res) => {
-    res.json(await services.imports.list())
+  router.get('/imports', importers, async (req, res) => {
+    const batches = await services.imports.list()
+    // Editors see every batch (hand edits and field reports too); the counter its stock imports.
+    const allowed: string[] = importTypesFor(req.user!.role)
+    res.json(can(req.user!.role, 'imports.manage') ? batches : batches.filter((batch) => allowed.includes(batch.type)))
   })
 
-  router.post('/imports', editors, csvUpload(config.importMaxBytes, config.uploadTempDir), async (req, res) => {
+  router.post('/imports', importers, csvUpload(config.importMaxBytes, config.uploadTempDir), async (req, res) => {
     const file = req.file
     try {
       const fields = parseBody(importFieldsSchema, req)
+      requireImportType(req.user!.role, fields.type)
       if (!file) throw AppError.badRequest('Attach the CSV file in the form field "file".')
       const user = req.user!
       const input = {
@@ -58,14 +71,17 @@ export function importRoutes(services: { imports: ImportService; exports: Export
     }
   })
 
-  router.post('/imports/:id/revert', editors, async (req, res) => {
+  router.post('/imports/:id/revert', importers, async (req, res) => {
     const { id } = parseParams(batchParamsSchema, req)
+    const batch = (await services.imports.list()).find((item) => item.id === id)
+    if (batch) requireImportType(req.user!.role, batch.type)
     res.json(await services.imports.revert(id, { id: req.user!.id, name: req.user!.name, email: req.user!.email, address: req.ip }))
   })
 
   // Editors' tool for the spreadsheet round trip; the catalogue as one file is not a counter task.
-  router.get('/export/:file', editors, (req, res) => {
+  router.get('/export/:file', importers, (req, res) => {
     const { file } = parseParams(exportParamsSchema, req)
+    requireImportType(req.user!.role, file.replace('.csv', ''))
     const stamp = new Date().toISOString().slice(0, 10)
     res.attachment(`fitwright-${file.replace('.csv', '')}-${stamp}.csv`)
     res.type('text/csv; charset=utf-8')

@@ -94,6 +94,11 @@ export const stockItemSchema = z.object({
 })
 export type StockItem = z.infer<typeof stockItemSchema>
 
+/** A photo of a unit (its display size; `?size=thumb` gives the thumbnail). */
+export const stockPhotoSchema = z.object({ id: z.number().int(), width: z.number().int(), height: z.number().int() })
+export type StockPhoto = z.infer<typeof stockPhotoSchema>
+export const stockPhotoListSchema = z.array(stockPhotoSchema)
+
 export const stockListQuerySchema = z.object({
   part: z.string().trim().max(100).optional(),
   site: z.string().trim().max(100).optional(),

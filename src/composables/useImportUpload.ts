@@ -9,9 +9,9 @@ import { fileKindHint, headerCells } from '@/lib/import-file-kind'
  * file. A new file or type drops the preview, so a commit never goes out
  * against a preview of something else.
  */
-export function useImportUpload() {
+export function useImportUpload(allowed: readonly ImportType[] = ['parts']) {
   const file = shallowRef<File | null>(null)
-  const type = ref<ImportType>('parts')
+  const type = ref<ImportType>(allowed[0] ?? 'parts')
   const result = shallowRef<ImportResult | null>(null)
   const error = ref<ApiError | null>(null)
   const progress = ref<UploadProgress | null>(null)

@@ -17,7 +17,7 @@ export const NAVIGATION: NavigationLink[] = [
   { name: 'stock', label: 'Stock', icon: 'pi-box', permission: 'stock.manage', area: ['stock-new', 'stock-unit'] },
   { name: 'parts', label: 'Catalogue', icon: 'pi-list', permission: 'catalogue.read' },
   { name: 'review', label: 'Review', icon: 'pi-check-square', permission: 'catalogue.edit' },
-  { name: 'imports', label: 'Imports', icon: 'pi-file-import', permission: 'imports.manage' },
+  { name: 'imports', label: 'Imports', icon: 'pi-file-import', permission: 'imports.open' },
   { name: 'graph-home', label: 'Fit graph', icon: 'pi-sitemap', permission: 'catalogue.read', area: ['graph', 'graph-path'] },
   { name: 'planner', label: 'Build planner', icon: 'pi-wrench', permission: 'builds.evaluate', area: ['planner-sheet'] },
   { name: 'builds', label: 'Build sheets', icon: 'pi-folder-open', permission: 'builds.save' },

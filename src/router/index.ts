@@ -169,7 +169,7 @@ const router = createRouter({
           path: 'imports',
           name: 'imports',
           component: () => import('@/views/ImportsView.vue'),
-          meta: { permission: 'imports.manage', title: 'Imports and exports' },
+          meta: { permission: 'imports.open', title: 'Imports and exports' },
         },
         {
           path: 'users',

@@ -68,6 +68,26 @@ describe.skipIf(!run)('a stock file in the browser', () => {
     await expect.poll(() => first.textContent(), within).toContain('reverted by Tobias Ferrand')
   })
 
+  it('gives the counter the imports screen for stock files only, at desktop and tablet width', async () => {
+    await page.getByRole('button', { name: 'Sign out' }).click()
+    await signInAs(page, server.url, 'counter')
+    await page.getByRole('navigation', { name: 'Main' }).getByRole('link', { name: 'Imports' }).click()
+    await page.waitForURL(/\/imports/)
+    const kinds = page.getByRole('group').filter({ has: page.getByRole('button', { name: 'Stock', exact: true }) })
+    await expect.poll(() => kinds.getByRole('button').allTextContents(), within).toEqual(['Stock'])
+    const exports = page.getByRole('region', { name: 'Export' }).getByRole('link')
+    expect(await exports.allTextContents()).toEqual([expect.stringContaining('Stock CSV')])
+    // The editor's stock batch is listed; the demo's catalogue batches are not.
+    const rows = page.getByRole('table', { name: 'Import batches' }).locator('tbody tr')
+    await expect.poll(() => rows.count(), within).toBeGreaterThan(0)
+    for (const text of await rows.allTextContents()) expect(text).toContain('stock')
+    await saveScreenshot(page, 'imports-counter')
+    await page.setViewportSize({ width: 768, height: 1024 })
+    await saveScreenshot(page, 'imports-counter-tablet')
+    expect(await page.evaluate(() => document.documentElement.scrollWidth)).toBeLessThanOrEqual(768)
+    await page.setViewportSize({ width: 1366, height: 900 })
+  })
+
   it('logged no console errors (the 401 of the session check before sign-in aside)', () => {
     expect(consoleErrors.filter((text) => !text.includes('401'))).toEqual([])
   })

@@ -1,3 +1,4 @@
+import sharp from 'sharp'
 import type { Page } from 'playwright-core'
 import { afterAll, beforeAll, describe, expect, it } from 'vitest'
 import { browserAvailable, openBrowserSession, saveScreenshot, signInAs, type BrowserSession, type RunningServer } from '../helpers/browser'
@@ -75,6 +76,21 @@ describe.skipIf(!run)('counter: units on the shelf by label, added and moved', (
     await page.waitForURL(/\/stock\/\d+$/)
     await expect.poll(() => page.getByRole('heading', { name: 'TM-HD-2000 at Northgate counter' }).isVisible(), within).toBe(true)
     expect(await page.getByLabel('The unit').textContent()).toContain('NG-000900')
+  })
+
+  it('adds a photo of the new unit, shows its thumbnail full size on request, and removes it', async () => {
+    const photo = await sharp({ create: { width: 800, height: 600, channels: 3, background: '#5b6b45' } })
+      .jpeg()
+      .toBuffer()
+    await page.locator('.stock-unit-photos input[type=file]').setInputFiles({ name: 'boss.jpg', mimeType: 'image/jpeg', buffer: photo })
+    const list = page.getByRole('list', { name: 'Photos of this unit' })
+    await expect.poll(() => list.getByRole('img', { name: 'Photo 1 of this unit' }).count(), within).toBe(1)
+    await page.setViewportSize({ width: 768, height: 1024 })
+    await saveScreenshot(page, 'stock-unit-photo-tablet')
+    await page.setViewportSize({ width: 1366, height: 900 })
+    await saveScreenshot(page, 'stock-unit-photo')
+    await page.getByRole('button', { name: 'Remove photo 1' }).click()
+    await expect.poll(() => page.getByText('No photos of this unit yet.').isVisible(), within).toBe(true)
   })
 
   it('logged no console errors (the 404 of the unknown label looked up on purpose aside)', () => {
