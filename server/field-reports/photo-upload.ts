@@ -5,13 +5,21 @@ import multer from 'multer'
 import { FIELD_REPORT_MAX_PHOTOS } from '../../shared/schemas/field-reports'
 import { AppError } from '../errors/app-error'
 
-function uploadError(error: unknown, maxBytes: number): unknown {
+/** What the photos go with, for the messages: a field report (with its `report` field) or a stock unit. */
+export type PhotoUploadFor = 'report' | 'unit'
+
+function uploadError(error: unknown, maxBytes: number, target: PhotoUploadFor): unknown {
   if (!(error instanceof multer.MulterError)) return error
   const mb = Math.round((maxBytes / 1024 / 1024) * 10) / 10
   const messages: Partial<Record<multer.ErrorCode, [number, string]>> = {
     LIMIT_FILE_SIZE: [413, `A photo is larger than ${mb} MB, the most one photo may be.`],
-    LIMIT_FILE_COUNT: [400, `Send at most ${FIELD_REPORT_MAX_PHOTOS} photos with one report.`],
-    LIMIT_UNEXPECTED_FILE: [400, 'Send photos in the form field "photos" and the report as the field "report".'],
+    LIMIT_FILE_COUNT: [400, `Send at most ${FIELD_REPORT_MAX_PHOTOS} photos with one ${target}.`],
+    LIMIT_UNEXPECTED_FILE: [
+      400,
+      target === 'report'
+        ? 'Send photos in the form field "photos" and the report as the field "report".'
+        : 'Send photos in the form field "photos".',
+    ],
     LIMIT_FIELD_VALUE: [413, 'The report field is too long.'],
   }
   const [status, message] = messages[error.code] ?? [400, `The upload was not understood: ${error.message}.`]
@@ -19,10 +27,10 @@ function uploadError(error: unknown, maxBytes: number): unknown {
 }
 
 /**
- * A report as multipart: the `report` JSON field and up to eight `photos`,
+ * Photos as multipart (for a report, beside its `report` JSON field): up to eight `photos`,
  * each streamed to a temporary file; the files go when the answer has been sent.
  */
-export function photoUpload(maxBytes: number, dir: string): RequestHandler {
+export function photoUpload(maxBytes: number, dir: string, target: PhotoUploadFor = 'report'): RequestHandler {
   // The folder is this server's own: what a crash left in it is cleared at start-up.
   rmSync(dir, { recursive: true, force: true })
   mkdirSync(dir, { recursive: true })
@@ -37,6 +45,6 @@ export function photoUpload(maxBytes: number, dir: string): RequestHandler {
       void Promise.all(files.map((file) => rm(file.path, { force: true })))
     }
     res.on('close', cleanUp)
-    fields(req, res, (error?: unknown) => next(error ? uploadError(error, maxBytes) : undefined))
+    fields(req, res, (error?: unknown) => next(error ? uploadError(error, maxBytes, target) : undefined))
   }
 }

@@ -164,6 +164,12 @@ export class ImportService {
     return batches.map(toImportBatch)
   }
 
+  /** One batch, or undefined when there is none with that id. */
+  async batch(batchId: number): Promise<ImportBatch | undefined> {
+    const entity = await this.dataSource.getRepository(ImportBatchEntity).findOneBy({ id: batchId })
+    return entity ? toImportBatch(entity) : undefined
+  }
+
   /** Restores the catalogue as it was before the batch, or says which later write stands in the way. */
   async revert(batchId: number, user: ImportUser): Promise<ImportBatch> {
     const touched = await inTransaction(this.dataSource, (db) => revertBatch(db, batchId, user.name))

@@ -73,7 +73,7 @@ export function importRoutes(services: { imports: ImportService; exports: Export
 
   router.post('/imports/:id/revert', importers, async (req, res) => {
     const { id } = parseParams(batchParamsSchema, req)
-    const batch = (await services.imports.list()).find((item) => item.id === id)
+    const batch = await services.imports.batch(id)
     if (batch) requireImportType(req.user!.role, batch.type)
     res.json(await services.imports.revert(id, { id: req.user!.id, name: req.user!.name, email: req.user!.email, address: req.ip }))
   })

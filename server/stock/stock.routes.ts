@@ -47,7 +47,7 @@ export function stockRoutes(
   router.get('/stock/:id/photos', readers, async (req, res) => {
     res.json(await photos.list(parseParams(idParams, req).id))
   })
-  router.post('/stock/:id/photos', keepers, photoUpload(limits.photoMaxBytes, limits.uploadTempDir), async (req, res) => {
+  router.post('/stock/:id/photos', keepers, photoUpload(limits.photoMaxBytes, limits.uploadTempDir, 'unit'), async (req, res) => {
     const files = (req.files as Express.Multer.File[] | undefined) ?? []
     res.status(201).json(await photos.add(parseParams(idParams, req).id, files))
   })
