@@ -25,10 +25,11 @@ export class ShopSettingsService {
   }
 
   async set(settings: ShopSettings): Promise<ShopSettings> {
-    await this.db.transaction(async (tx) => {
-      await tx.run('DELETE FROM app_setting WHERE "key" = ?', [KEY])
-      await tx.run('INSERT INTO app_setting ("key", "value") VALUES (?, ?)', [KEY, JSON.stringify(settings)])
-    })
+    // One statement on both drivers, so two admins saving at once never leave the row missing.
+    await this.db.run(
+      'INSERT INTO app_setting ("key", "value") VALUES (?, ?) ON CONFLICT ("key") DO UPDATE SET "value" = excluded."value"',
+      [KEY, JSON.stringify(settings)],
+    )
     return settings
   }
 }

@@ -1,57 +1,23 @@
-import { mkdtempSync, rmSync } from 'node:fs'
 import { tmpdir } from 'node:os'
 import path from 'node:path'
 import 'reflect-metadata'
-import type { DataSource } from 'typeorm'
 import { afterAll, beforeAll, describe, expect, it } from 'vitest'
 import { AccountService } from '../../server/auth/account.service'
 import { AccountTokenRepository } from '../../server/auth/account-token.repository'
 import { ResetThrottle } from '../../server/auth/reset-throttle'
 import { SessionRepository } from '../../server/auth/session.repository'
 import { SignInThrottleRepository } from '../../server/auth/sign-in-throttle.repository'
-import { openDatabase } from '../../server/db/data-source'
 import { databaseOf } from '../../server/db/sqlite-connection'
 import { Mailer } from '../../server/mail/mailer'
 import { OutboxRepository } from '../../server/mail/outbox.repository'
 import { OutboxService } from '../../server/mail/outbox.service'
 import { SecurityEventService } from '../../server/security/security-events.service'
 import { UserService } from '../../server/users/user.service'
-import { createPostgresDatabase, postgresServerUrl } from '../helpers/postgres'
+import { databaseDrivers, type DatabaseDriver } from '../helpers/database-drivers'
 
-type Driver = { name: string; open: () => Promise<{ dataSource: DataSource; close: () => Promise<void> }> }
+type Driver = DatabaseDriver
 
-const drivers: Driver[] = [
-  {
-    name: 'sqlite',
-    async open() {
-      const dir = mkdtempSync(path.join(tmpdir(), 'fitwright-tokens-'))
-      const dataSource = await openDatabase({ type: 'sqlite', path: path.join(dir, 'tokens.sqlite') })
-      return {
-        dataSource,
-        close: async () => {
-          await dataSource.destroy()
-          rmSync(dir, { recursive: true, force: true })
-        },
-      }
-    },
-  },
-]
-if (postgresServerUrl) {
-  drivers.push({
-    name: 'postgres',
-    async open() {
-      const database = await createPostgresDatabase()
-      const dataSource = await openDatabase({ type: 'postgres', url: database.url })
-      return {
-        dataSource,
-        close: async () => {
-          await dataSource.destroy()
-          await database.drop()
-        },
-      }
-    },
-  })
-}
+const drivers = databaseDrivers('tokens')
 
 const PASSWORD = 'torque-in-three-stages-7'
 const ADMIN = { userId: 1, email: 'boss@shop.test', name: 'Shop Boss', address: '127.0.0.1' }

@@ -1,15 +1,10 @@
-import { mkdtempSync, rmSync } from 'node:fs'
-import { tmpdir } from 'node:os'
-import path from 'node:path'
 import 'reflect-metadata'
-import type { DataSource } from 'typeorm'
 import { afterAll, beforeAll, describe, expect, it } from 'vitest'
 import { PartRepository } from '../../server/catalogue/part.repository'
 import type { Database } from '../../server/db/database'
-import { openDatabase } from '../../server/db/data-source'
 import { numberPlaceholders } from '../../server/db/postgres-database'
 import { databaseOf } from '../../server/db/sqlite-connection'
-import { createPostgresDatabase, postgresServerUrl } from '../helpers/postgres'
+import { databaseDrivers, type DatabaseDriver } from '../helpers/database-drivers'
 
 describe('numbering placeholders for PostgreSQL', () => {
   it.each([
@@ -21,40 +16,9 @@ describe('numbering placeholders for PostgreSQL', () => {
   })
 })
 
-type Driver = { name: string; open: () => Promise<{ dataSource: DataSource; close: () => Promise<void> }> }
+type Driver = DatabaseDriver
 
-const drivers: Driver[] = [
-  {
-    name: 'sqlite',
-    async open() {
-      const dir = mkdtempSync(path.join(tmpdir(), 'fitwright-port-'))
-      const dataSource = await openDatabase({ type: 'sqlite', path: path.join(dir, 'port.sqlite') })
-      return {
-        dataSource,
-        close: async () => {
-          await dataSource.destroy()
-          rmSync(dir, { recursive: true, force: true })
-        },
-      }
-    },
-  },
-]
-if (postgresServerUrl) {
-  drivers.push({
-    name: 'postgres',
-    async open() {
-      const database = await createPostgresDatabase()
-      const dataSource = await openDatabase({ type: 'postgres', url: database.url })
-      return {
-        dataSource,
-        close: async () => {
-          await dataSource.destroy()
-          await database.drop()
-        },
-      }
-    },
-  })
-}
+const drivers = databaseDrivers('port')
 
 const insertPart = `INSERT INTO part ("partNumber", "partKey", "kind", "name", "family", "yearFrom", "yearTo", "notes", "attributes", "createdAt", "updatedAt")
   VALUES (?, ?, ?, ?, '', ?, NULL, '', ?, ?, ?) RETURNING "id"`

@@ -137,4 +137,15 @@ describe('quotes for the whole job', () => {
     expect(quote.shop).toMatchObject({ name: 'Harl Street Engines', taxRateBasisPoints: 825 })
     expect(quote.lines.find((l: Line) => l.kind === 'labour' && l.minutes === 60)).toBeDefined()
   })
+
+  it('replaces the shop settings when an admin saves them again', async () => {
+    const admin = await t.signIn('admin')
+    const first = (await admin.get('/api/settings/shop')).body
+    expect((await admin.put('/api/settings/shop').send({ ...first, name: 'First Lot Engines' })).status).toBe(200)
+    expect((await admin.put('/api/settings/shop').send({ ...first, name: 'Second Lot Engines' })).status).toBe(200)
+    expect((await admin.get('/api/settings/shop')).body).toMatchObject({
+      name: 'Second Lot Engines',
+      labourRateCents: first.labourRateCents,
+    })
+  })
 })

@@ -33,4 +33,16 @@ describe('the fit graph’s rule classes (parts by what the pair rules read)', (
     expect(graph.partsOfKind('block')).toEqual([])
     expect(graph.ruleClasses.classOf(3)).toBe(-1)
   })
+
+  it('keeps a kind’s order as it was when only a part’s attributes change, and re-sorts after a renumbering', () => {
+    const graph = new FitGraph(noDetails)
+    graph.setPart(1, 'ZX-HG-2', 'head-gasket', '{"boreMm":86}')
+    graph.setPart(2, 'ZX-HG-1', 'head-gasket', '{"boreMm":86}')
+    const before = graph.partsOfKind('head-gasket')
+    graph.setPart(1, 'ZX-HG-2', 'head-gasket', '{"boreMm":86.5}')
+    expect(graph.partsOfKind('head-gasket')).toBe(before)
+    expect(graph.ruleClasses.input(graph.ruleClasses.classOf(1)).attributes).toEqual({ boreMm: 86.5 })
+    graph.setPart(1, 'ZX-HG-0', 'head-gasket', '{"boreMm":86.5}')
+    expect(numbers(graph, graph.partsOfKind('head-gasket'))).toEqual(['ZX-HG-0', 'ZX-HG-1'])
+  })
 })

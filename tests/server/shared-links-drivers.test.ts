@@ -1,50 +1,14 @@
-import { mkdtempSync, rmSync } from 'node:fs'
-import { tmpdir } from 'node:os'
-import path from 'node:path'
 import 'reflect-metadata'
-import type { DataSource } from 'typeorm'
 import { afterAll, beforeAll, describe, expect, it } from 'vitest'
 import { AccountTokenRepository } from '../../server/auth/account-token.repository'
-import { openDatabase } from '../../server/db/data-source'
 import { toIsoTime } from '../../server/db/database'
 import { databaseOf } from '../../server/db/sqlite-connection'
 import { SharedLinkRepository } from '../../server/shared-links/shared-link.repository'
-import { createPostgresDatabase, postgresServerUrl } from '../helpers/postgres'
+import { databaseDrivers, type DatabaseDriver } from '../helpers/database-drivers'
 
-type Driver = { name: string; open: () => Promise<{ dataSource: DataSource; close: () => Promise<void> }> }
+type Driver = DatabaseDriver
 
-const drivers: Driver[] = [
-  {
-    name: 'sqlite',
-    async open() {
-      const dir = mkdtempSync(path.join(tmpdir(), 'fitwright-shared-'))
-      const dataSource = await openDatabase({ type: 'sqlite', path: path.join(dir, 'shared.sqlite') })
-      return {
-        dataSource,
-        close: async () => {
-          await dataSource.destroy()
-          rmSync(dir, { recursive: true, force: true })
-        },
-      }
-    },
-  },
-]
-if (postgresServerUrl) {
-  drivers.push({
-    name: 'postgres',
-    async open() {
-      const database = await createPostgresDatabase()
-      const dataSource = await openDatabase({ type: 'postgres', url: database.url })
-      return {
-        dataSource,
-        close: async () => {
-          await dataSource.destroy()
-          await database.drop()
-        },
-      }
-    },
-  })
-}
+const drivers = databaseDrivers('shared')
 
 /** The shared_link table through its migration and the data port, on each driver. */
 describe.each(drivers)('shared links on $name', { timeout: 30_000 }, (driver) => {

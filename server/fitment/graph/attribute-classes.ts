@@ -20,8 +20,11 @@ export class AttributeClasses {
   private classOfPart = new Int32Array(16).fill(NONE)
   private readonly byKind = new Map<number, { ids: number[]; sorted: boolean }>()
 
-  /** Records a part's kind (as the graph's code) and rule input; `attributes` is the stored JSON text. */
-  set(id: number, kindCode: number, previousKind: number | undefined, attributes: string, yearTo: number | null) {
+  /**
+   * Records a part's kind (as the graph's code) and rule input; `attributes` is the stored JSON text.
+   * `renumbered` says the part number changed, which is all that can unsettle the kind's order.
+   */
+  set(id: number, kindCode: number, previousKind: number | undefined, attributes: string, yearTo: number | null, renumbered = true) {
     const key = `${yearTo ?? ''}|${attributes}`
     let classId = this.classByKey.get(key)
     if (classId === undefined) {
@@ -33,8 +36,7 @@ export class AttributeClasses {
     const known = this.classOfPart[id] !== NONE
     this.classOfPart[id] = classId
     if (known && previousKind === kindCode) {
-      // The order is by part number, which may have changed.
-      this.listOf(kindCode).sorted = false
+      if (renumbered) this.listOf(kindCode).sorted = false
       return
     }
     if (known && previousKind !== undefined) this.listOf(previousKind).sorted = false

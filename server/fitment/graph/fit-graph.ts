@@ -84,7 +84,7 @@ export class FitGraph {
     const kindCode = KIND_CODE.get(kind) ?? KIND_CODE.get('other')!
     this.kinds[id] = kindCode
     this.byNumber.set(partNumber, id)
-    this.ruleClasses.set(id, kindCode, previousKind, attributes, yearTo)
+    this.ruleClasses.set(id, kindCode, previousKind, attributes, yearTo, previous !== partNumber)
   }
 
   /** The parts of a kind in part-number order, with their rule classes in `ruleClasses`. */
