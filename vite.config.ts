@@ -32,6 +32,8 @@ export default defineConfig({
           include: ['tests/server/**/*.test.ts'],
           environment: 'node',
           setupFiles: ['tests/helpers/server-setup.ts'],
+          // Password hashing at the production cost takes seconds when every core is busy.
+          testTimeout: 20_000,
         },
       },
       {

@@ -12,6 +12,14 @@ export type SessionLifetimes = {
 
 type Done = (error?: unknown, value?: session.SessionData | null) => void
 
+/**
+ * A session's idle end moves on at most once a minute: every request of a signed-in
+ * user would otherwise be a database write, and writes queue behind one another.
+ */
+const TOUCH_GRANULARITY_MS = 60_000
+/** Sessions whose stored end this process remembers; past it the map starts afresh. */
+const KNOWN_ENDS_HELD = 10_000
+
 function userIdOf(data: session.SessionData): number | null {
   const user = (data as { passport?: { user?: unknown } }).passport?.user
   return typeof user === 'number' ? user : null
@@ -21,6 +29,8 @@ function userIdOf(data: session.SessionData): number | null {
 export class DatabaseSessionStore extends session.Store {
   private readonly now: () => number
   private writes = 0
+  /** The idle end last read or written per session id (ends only ever move later, so a stale one is safe). */
+  private readonly knownEnds = new Map<string, number>()
 
   constructor(
     private readonly sessions: SessionRepository,
@@ -28,6 +38,11 @@ export class DatabaseSessionStore extends session.Store {
   ) {
     super()
     this.now = lifetimes.now ?? Date.now
+  }
+
+  private remember(sid: string, expiresAt: number) {
+    if (this.knownEnds.size >= KNOWN_ENDS_HELD) this.knownEnds.clear()
+    this.knownEnds.set(sid, expiresAt)
   }
 
   private settle(work: Promise<session.SessionData | null | void>, done?: Done) {
@@ -48,8 +63,10 @@ export class DatabaseSessionStore extends session.Store {
         if (!row) return null
         if (row.expiresAt <= now || row.startedAt + this.lifetimes.maxAgeMs <= now) {
           await this.sessions.remove(sid)
+          this.knownEnds.delete(sid)
           return null
         }
+        this.remember(sid, row.expiresAt)
         return JSON.parse(row.data) as session.SessionData
       })(),
       done,
@@ -58,6 +75,7 @@ export class DatabaseSessionStore extends session.Store {
 
   override set(sid: string, data: session.SessionData, done?: (error?: unknown) => void): void {
     const now = this.now()
+    this.remember(sid, now + this.lifetimes.idleMs)
     this.settle(
       (async () => {
         await this.sessions.save({
@@ -74,10 +92,18 @@ export class DatabaseSessionStore extends session.Store {
   }
 
   override touch(sid: string, _data: session.SessionData, done?: (error?: unknown) => void): void {
-    this.settle(this.sessions.touch(sid, this.now() + this.lifetimes.idleMs), done)
+    const expiresAt = this.now() + this.lifetimes.idleMs
+    const known = this.knownEnds.get(sid)
+    if (known !== undefined && expiresAt - known < TOUCH_GRANULARITY_MS) {
+      done?.()
+      return
+    }
+    this.remember(sid, expiresAt)
+    this.settle(this.sessions.touch(sid, expiresAt), done)
   }
 
   override destroy(sid: string, done?: (error?: unknown) => void): void {
+    this.knownEnds.delete(sid)
     this.settle(this.sessions.remove(sid), done)
   }
 }
