@@ -56,15 +56,7 @@ export function createServices(dataSource: DataSource, config: AppConfig, rules:
   const modifications = new ModificationService(dataSource)
   const evidence = new FieldReportEvidence(databaseOf(dataSource))
   const stockRows = new StockRepository(databaseOf(dataSource))
-  const evaluation = new BuildEvaluationService(
-    dataSource,
-    parts,
-    graphIndex,
-    rules,
-    modifications,
-    evidence,
-    new PartsListShelf(stockRows),
-  )
+  const evaluation = new BuildEvaluationService(parts, graphIndex, rules, modifications, evidence, new PartsListShelf(stockRows))
   const photos = new PhotoStorage(config.uploadDir)
   const stockIndex = new StockIndex(stockRows)
   const stock = new StockService(stockRows, parts, stockIndex)

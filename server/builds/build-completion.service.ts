@@ -126,10 +126,11 @@ export class BuildCompletionService {
     const baseline = await this.evaluation.buildCautions(this.evaluation.prepare(build).facts)
     const accepted: ({ row: Row } & NonNullable<Judgement>)[] = []
     const neighbourIds = matingSlots(slot).flatMap((other) => (build.ids[other] === undefined ? [] : [build.ids[other]!]))
+    const linkedToNeighbours = graph.linkedWith(neighbourIds)
     // Without a reviewed link the rules decide, and parts with the same attributes get the same answer.
     const byAttributes = new Map<number, Judgement>()
     for (const row of rows) {
-      const linked = neighbourIds.some((id) => graph.linkBetween(row.id, id))
+      const linked = linkedToNeighbours.has(row.id)
       let judgement = linked ? undefined : byAttributes.get(row.ruleClass)
       if (judgement === undefined) {
         judgement = await this.judge(slot, row, build, graph, baseline)

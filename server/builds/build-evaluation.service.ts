@@ -1,4 +1,3 @@
-import type { DataSource } from 'typeorm'
 import { BUILD_SLOTS, MATING_PAIRS, type SlotId } from '../../shared/build-template'
 import { DEFERENCE } from '../../shared/advisory'
 import { validateVin, vinModelYear } from '../../shared/engineering/vin'
@@ -6,7 +5,7 @@ import type { AppliedModification, BuildContext, Caution, EvaluateRequest, Evalu
 import type { FieldReportEvidence } from '../field-reports/field-report-evidence'
 import { worstVerdict } from '../../shared/schemas/fitment'
 import type { Part } from '../../shared/schemas/part'
-import type { PartAttributes } from '../../shared/schemas/part-attributes'
+import { partKindSchema } from '../../shared/schemas/part-kinds'
 import { buildFacts } from '../reasoning/facts'
 import { computeFigures, cylinders } from '../reasoning/figures'
 import { summariseFigures } from '../reasoning/figures-summary'
@@ -44,7 +43,6 @@ export function normaliseContext(context: BuildContext): { context: BuildContext
 
 export class BuildEvaluationService {
   constructor(
-    private readonly dataSource: DataSource,
     private readonly parts: PartService,
     private readonly graphIndex: FitGraphIndex,
     private readonly rules: RuleBook,
@@ -118,7 +116,7 @@ export class BuildEvaluationService {
         ...buildRules.extraParts,
       ],
       consumables: this.rules.loaded.consumables,
-      findParts: (spec) => this.findParts(spec),
+      findParts: async (spec) => this.findParts(graph, spec),
     }).then((lines) => this.shelf?.withUnits(lines) ?? lines)
 
     const cautions = dedupeCautions([
@@ -171,17 +169,18 @@ export class BuildEvaluationService {
     })
   }
 
-  /** Catalogue parts of a kind whose attributes equal the ones asked for. */
-  async findParts(spec: { kind: string; attributes?: Record<string, string> }): Promise<string[]> {
-    const rows = (await this.dataSource.query('SELECT partNumber, attributes FROM part WHERE kind = ? ORDER BY partNumber', [
-      spec.kind,
-    ])) as { partNumber: string; attributes: string }[]
-    return rows
-      .filter((row) => {
-        const attributes = JSON.parse(row.attributes) as PartAttributes
-        return Object.entries(spec.attributes ?? {}).every(([name, value]) => String(attributes[name]) === value)
+  /** Catalogue parts of a kind whose attributes equal the ones asked for, in part-number order, from the fit graph. */
+  findParts(graph: FitGraph, spec: { kind: string; attributes?: Record<string, string> }): string[] {
+    const kind = partKindSchema.safeParse(spec.kind)
+    if (!kind.success) return []
+    const wanted = Object.entries(spec.attributes ?? {})
+    return graph
+      .partsOfKind(kind.data)
+      .filter((id) => {
+        const { attributes } = graph.ruleClasses.input(graph.ruleClasses.classOf(id))
+        return wanted.every(([name, value]) => String(attributes[name]) === value)
       })
-      .map((row) => row.partNumber)
+      .map((id) => graph.partNumberOf(id))
   }
 }
 

@@ -20,8 +20,12 @@ const JUDGED_LIMIT = 200_000
 
 /** Fits the rules infer from attributes, among the parts of the kinds a part mates with. */
 export class InferredFits {
-  /** The rules are fixed while the server runs and a class id is never reused, so a judgement stays true. */
-  private readonly judged = new Map<string, RuleSummary>()
+  /**
+   * Judgements by the part's side (its kind, class and the other kind), then the other part's class.
+   * The rules are fixed while the server runs and a class id is never reused, so a judgement stays true.
+   */
+  private readonly judged = new Map<string, Map<number, RuleSummary>>()
+  private judgedCount = 0
 
   constructor(private readonly rules: RuleBook) {}
 
@@ -40,9 +44,12 @@ export class InferredFits {
     const groups: InferredAnswer['groups'] = []
     for (const otherKind of kinds) {
       const counts = new Map<Relation, number>()
+      const side = this.sideOf(kind, selfClass, otherKind)
       for (const candidate of graph.partsOfKind(otherKind)) {
         if (exclude.has(candidate) || (query.only && !query.only(candidate))) continue
-        const summary = await this.judge(classes, kind, selfClass, otherKind, classes.classOf(candidate))
+        const otherClass = classes.classOf(candidate)
+        // Most candidates share a class judged before: no promise for those.
+        const summary = side.get(otherClass) ?? (await this.judge(classes, kind, selfClass, otherKind, otherClass))
         if (!summary.relation || (query.relation && summary.relation !== query.relation)) continue
         const count = (counts.get(summary.relation) ?? 0) + 1
         counts.set(summary.relation, count)
@@ -54,15 +61,25 @@ export class InferredFits {
     return { found, groups }
   }
 
-  private async judge(classes: AttributeClasses, kind: SlotId, selfClass: number, otherKind: SlotId, otherClass: number) {
-    const key = `${kind}:${selfClass}|${otherKind}:${otherClass}`
-    let summary = this.judged.get(key)
-    if (!summary) {
-      const slotParts = { [kind]: classes.input(selfClass), [otherKind]: classes.input(otherClass) }
-      summary = summariseOutcomes(await this.rules.evaluatePair(kind, otherKind, buildFacts(slotParts, computeFigures(slotParts), {})))
-      if (this.judged.size >= JUDGED_LIMIT) this.judged.clear()
-      this.judged.set(key, summary)
+  private sideOf(kind: SlotId, selfClass: number, otherKind: SlotId): Map<number, RuleSummary> {
+    const key = `${kind}:${selfClass}|${otherKind}`
+    let side = this.judged.get(key)
+    if (!side) {
+      side = new Map()
+      this.judged.set(key, side)
     }
+    return side
+  }
+
+  private async judge(classes: AttributeClasses, kind: SlotId, selfClass: number, otherKind: SlotId, otherClass: number) {
+    const slotParts = { [kind]: classes.input(selfClass), [otherKind]: classes.input(otherClass) }
+    const summary = summariseOutcomes(await this.rules.evaluatePair(kind, otherKind, buildFacts(slotParts, computeFigures(slotParts), {})))
+    if (this.judgedCount >= JUDGED_LIMIT) {
+      this.judged.clear()
+      this.judgedCount = 0
+    }
+    this.sideOf(kind, selfClass, otherKind).set(otherClass, summary)
+    this.judgedCount += 1
     return summary
   }
 }

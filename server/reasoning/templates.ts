@@ -1,9 +1,21 @@
+/** Paths come from the rule files, a few hundred in all, and are read for every judgement. */
+const stepsByPath = new Map<string, string[]>()
+
+function stepsOf(path: string): string[] {
+  let steps = stepsByPath.get(path)
+  if (!steps) {
+    steps = path
+      .replace(/^\$\.?/, '')
+      .split('.')
+      .filter(Boolean)
+    if (stepsByPath.size < 10_000) stepsByPath.set(path, steps)
+  }
+  return steps
+}
+
 /** Reads `$.a.b` (or `a.b`) from an object; undefined when any step is missing. */
 export function resolvePath(value: unknown, path: string): unknown {
-  const steps = path
-    .replace(/^\$\.?/, '')
-    .split('.')
-    .filter(Boolean)
+  const steps = stepsOf(path)
   let current: unknown = value
   for (const step of steps) {
     if (current === null || typeof current !== 'object') return undefined

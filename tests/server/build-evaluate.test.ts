@@ -99,6 +99,14 @@ describe('POST /api/builds/evaluate on the demo builds', () => {
     expect(pair.explanation[0]!.text).toMatch(/no evidence/i)
   })
 
+  it('names the catalogue part a modification needs, and the other parts of that kind that would do', async () => {
+    const body = (await evaluate({ slots: { head: 'TM-HD-2000', block: 'TM-BL-1800' } })).body
+    const restrictor = body.partsList.find((l: { description: string }) => l.description.startsWith('Oil feed restrictor for the block'))
+    // The demo catalogue's two restrictors, first in part-number order; the other offered as an alternative.
+    expect(restrictor).toMatchObject({ partNumber: 'TM-OR-1800', category: 'modification' })
+    expect(restrictor.description).toMatch(/alternatives: TM-OR-2000$/)
+  })
+
   it('lets a reviewed link outrank the rules and says which decided', async () => {
     const response = await evaluate({ slots: { head: 'TM-HD-2000', block: 'TM-BL-1800', 'oil-restrictor': 'TM-OR-1800' } })
     const headOnBlock = pairOf(response.body.pairs, 'head', 'block')

@@ -105,21 +105,27 @@ describe('shortestFitPath against cytoscape dijkstra (cytoscape.js headless as r
   })
 })
 
+/** Each part's identity class, as the library's connected components over the identities alone. */
+function identityComponents(g: RandomGraph): Map<number, Set<number>> {
+  const identityGraph = cy(
+    g,
+    g.identities.map((i) => ({ id: `i${i.id}`, source: i.a, target: i.b, weight: 0 })),
+  )
+  const componentOf = new Map<number, Set<number>>()
+  for (const component of identityGraph.elements().components()) {
+    const ids = new Set(component.nodes().map((n) => Number(n.id())))
+    for (const id of ids) componentOf.set(id, ids)
+  }
+  return componentOf
+}
+
 describe('reviewedFits against cytoscape connected components (identity classes)', () => {
   it('reaches exactly the parts identical to the other end of a non-rejected link of the part or of a part identical to it', () => {
     fc.assert(
       fc.property(graphArb, fc.integer({ min: 1, max: 18 }), (g, raw) => {
         const part = ((raw - 1) % g.size) + 1
         const graph = freshGraph(parts(g.size), g.links, g.identities)
-        const identityGraph = cy(
-          g,
-          g.identities.map((i) => ({ id: `i${i.id}`, source: i.a, target: i.b, weight: 0 })),
-        )
-        const componentOf = new Map<number, Set<number>>()
-        for (const component of identityGraph.elements().components()) {
-          const ids = new Set(component.nodes().map((n) => Number(n.id())))
-          for (const id of ids) componentOf.set(id, ids)
-        }
+        const componentOf = identityComponents(g)
         const own = componentOf.get(part)!
         const expected = new Set<number>()
         for (const link of g.links) {
@@ -140,6 +146,29 @@ describe('reviewedFits against cytoscape connected components (identity classes)
           const link = graph.linkAt(fit.slot)
           expect([link.a, link.b].sort()).toEqual([fit.member, fit.other].sort())
         }
+      }),
+      { numRuns: 300 },
+    )
+  })
+
+  it('finds, for a set of parts, exactly the parts with an approved link to one of them or to a part identical to one', () => {
+    fc.assert(
+      fc.property(graphArb, fc.uniqueArray(fc.integer({ min: 1, max: 18 }), { maxLength: 3 }), (g, raw) => {
+        const chosen = [...new Set(raw.map((r) => ((r - 1) % g.size) + 1))]
+        const graph = freshGraph(parts(g.size), g.links, g.identities)
+        const componentOf = identityComponents(g)
+        const expected = new Set<number>()
+        for (const link of g.links) {
+          if (link.status !== 'approved') continue
+          for (const [x, y] of [
+            [link.a, link.b],
+            [link.b, link.a],
+          ] as const) {
+            if (chosen.some((id) => componentOf.get(id)!.has(x))) for (const id of componentOf.get(y)!) expected.add(id)
+          }
+        }
+        const sorted = (ids: Iterable<number>) => [...ids].sort((a, b) => a - b)
+        expect(sorted(graph.linkedWith(chosen))).toEqual(sorted(expected))
       }),
       { numRuns: 300 },
     )

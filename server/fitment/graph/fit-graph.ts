@@ -220,6 +220,29 @@ export class FitGraph {
   }
 
   /**
+   * Every part with an approved link to one of `ids`, looking through identical parts on
+   * both ends as linkBetween does: one walk of the given parts' links instead of a lookup per candidate.
+   */
+  linkedWith(ids: readonly number[]): Set<number> {
+    const approved = STATUS_CODE.get('approved')!
+    const { links } = this
+    const found = new Set<number>()
+    for (const id of ids) {
+      for (const member of this.classOf(id)) {
+        const slots = links.slotsAt(member)
+        for (let i = 0; i < links.degreeOf(member); i++) {
+          const slot = slots[i]!
+          if (links.status[slot] !== approved) continue
+          const other = links.other(slot, member)
+          if (found.has(other)) continue
+          for (const identical of this.classOf(other)) found.add(identical)
+        }
+      }
+    }
+    return found
+  }
+
+  /**
    * The reviewed link that decides a pair, looking through identical parts:
    * a direct link first, then any link between members of the two classes.
    */
