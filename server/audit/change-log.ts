@@ -1,4 +1,5 @@
 import type Database from 'better-sqlite3'
+import type { Database as Port } from '../db/database'
 import type { ImportCounts, ImportType } from '../../shared/schemas/imports'
 import type { ImportRecordType } from './import-change.entity'
 
@@ -14,25 +15,27 @@ export type BatchRecord = {
   validRowsOnly: boolean
 }
 
+const BATCH_COLUMNS = `"type", "fileName", "fileHash", "userId", "userName", "created", "updated", "unchanged", "rejected", "validRowsOnly", "status", "createdAt"`
+
+function batchValues(batch: BatchRecord) {
+  const { created, updated, unchanged, rejected } = batch.counts
+  return [batch.type, batch.fileName, batch.fileHash, batch.user.id, batch.user.name, created, updated, unchanged, rejected] as const
+}
+
 export function insertBatch(db: Database.Database, batch: BatchRecord): number {
   const result = db
-    .prepare(
-      `INSERT INTO import_batch (type, fileName, fileHash, userId, userName, created, updated, unchanged, rejected, validRowsOnly, status, createdAt)
-       VALUES (?, ?, ?, ?, ?, ?, ?, ?, ?, ?, 'committed', ${SQL_NOW})`,
-    )
-    .run(
-      batch.type,
-      batch.fileName,
-      batch.fileHash,
-      batch.user.id,
-      batch.user.name,
-      batch.counts.created,
-      batch.counts.updated,
-      batch.counts.unchanged,
-      batch.counts.rejected,
-      batch.validRowsOnly ? 1 : 0,
-    )
+    .prepare(`INSERT INTO import_batch (${BATCH_COLUMNS}) VALUES (?, ?, ?, ?, ?, ?, ?, ?, ?, ?, 'committed', ${SQL_NOW})`)
+    .run(...batchValues(batch), batch.validRowsOnly ? 1 : 0)
   return Number(result.lastInsertRowid)
+}
+
+/** The same record through the data port, on either database (hand edits and reviews). */
+export function recordBatch(db: Port, batch: BatchRecord): Promise<number> {
+  return db.insert(`INSERT INTO import_batch (${BATCH_COLUMNS}) VALUES (?, ?, ?, ?, ?, ?, ?, ?, ?, ?, 'committed', ?) RETURNING "id"`, [
+    ...batchValues(batch),
+    batch.validRowsOnly,
+    new Date(),
+  ])
 }
 
 /**
@@ -41,17 +44,30 @@ export function insertBatch(db: Database.Database, batch: BatchRecord): number {
  */
 export type PreviousRows = Record<string, Record<string, unknown>[]>
 
+const INSERT_CHANGE = `INSERT INTO import_change ("batchId", "recordType", "recordId", "action", "previousBatchId", "previousValues") VALUES (?, ?, ?, ?, ?, ?)`
+
+/** One record a batch changed: its type, id, what the batch did, and the rows it had before. */
+type ChangeArgs = [
+  recordType: ImportRecordType,
+  recordId: number,
+  action: 'updated' | 'deleted',
+  previousBatchId: number | null,
+  previous: PreviousRows,
+]
+
+const changeValues = (batchId: number, [recordType, recordId, action, previousBatchId, previous]: ChangeArgs) =>
+  [batchId, recordType, recordId, action, previousBatchId, JSON.stringify(previous)] as const
+
 export function changeRecorder(db: Database.Database, batchId: number) {
-  const insert = db.prepare(
-    'INSERT INTO import_change (batchId, recordType, recordId, action, previousBatchId, previousValues) VALUES (?, ?, ?, ?, ?, ?)',
-  )
-  return (
-    recordType: ImportRecordType,
-    recordId: number,
-    action: 'updated' | 'deleted',
-    previousBatchId: number | null,
-    previous: PreviousRows,
-  ) => {
-    insert.run(batchId, recordType, recordId, action, previousBatchId, JSON.stringify(previous))
+  const insert = db.prepare(INSERT_CHANGE)
+  return (...change: ChangeArgs) => {
+    insert.run(...changeValues(batchId, change))
+  }
+}
+
+/** changeRecorder through the data port. */
+export function portChangeRecorder(db: Port, batchId: number) {
+  return async (...change: ChangeArgs) => {
+    await db.run(INSERT_CHANGE, changeValues(batchId, change))
   }
 }

@@ -2,7 +2,7 @@ import { siteInputSchema, stockInputSchema } from '../../shared/schemas/stock'
 import { vehicleInputSchema } from '../../shared/schemas/vehicles'
 import { readdirSync, readFileSync, statSync } from 'node:fs'
 import path from 'node:path'
-import type Database from 'better-sqlite3'
+import type { Database as Port } from '../db/database'
 import type { DataSource } from 'typeorm'
 import { z } from 'zod'
 import type { Role, User } from '../../shared/schemas/auth'
@@ -12,7 +12,7 @@ import type { ImportType } from '../../shared/schemas/imports'
 import { splitList } from '../imports/csv/part-row'
 import { readCsvText } from '../imports/csv/read-csv'
 import { AppSettingEntity } from '../settings/app-setting.entity'
-import { inTransaction } from '../db/sqlite-connection'
+import { databaseOf } from '../db/sqlite-connection'
 import { PartEntity } from '../catalogue/part.entity'
 import { UserEntity } from '../users/user.entity'
 import { AppError } from '../errors/app-error'
@@ -53,14 +53,16 @@ async function importDemoFile(imports: ImportService, demoDir: string, file: str
 }
 
 /** Links still awaiting review, which an import cannot make (it approves what it writes). */
-function seedProposedLinks(db: Database.Database, file: string) {
-  const ids = new Map((db.prepare('SELECT partNumber, id FROM part').raw().all() as [string, number][]).map(([number, id]) => [number, id]))
-  readCsvText(readFileSync(file, 'utf8')).rows.forEach((row, index) => {
-    const a = ids.get(row.from_part ?? '')
-    const b = ids.get(row.to_part ?? '')
+async function seedProposedLinks(db: Port, file: string) {
+  const rows = readCsvText(readFileSync(file, 'utf8')).rows
+  for (const [index, row] of rows.entries()) {
+    const idOf = async (number: string | undefined) =>
+      (await db.get<{ id: number }>('SELECT "id" FROM part WHERE "partNumber" = ?', [number ?? '']))?.id
+    const a = await idOf(row.from_part)
+    const b = await idOf(row.to_part)
     if (a === undefined || b === undefined) throw new Error(`Demo data ${path.basename(file)} row ${index + 2}: unknown part`)
-    insertLinkRow(db, {
-      partIds: [a, b],
+    await insertLinkRow(db, {
+      partIds: [Number(a), Number(b)],
       relation: relationSchema.parse(row.relation),
       modifications: splitList(row.modifications),
       note: row.note ?? '',
@@ -68,7 +70,7 @@ function seedProposedLinks(db: Database.Database, file: string) {
       status: 'proposed',
       batchId: null,
     })
-  })
+  }
 }
 
 const demoBuildsSchema = z.array(buildSheetInputSchema)
@@ -135,7 +137,7 @@ export async function seedDemo(
   for (const vehicle of JSON.parse(readFileSync(path.join(demoDir, 'vehicles.json'), 'utf8')) as unknown[]) {
     await services.vehicles.create(vehicleInputSchema.parse(vehicle))
   }
-  await inTransaction(dataSource, (db) => seedProposedLinks(db, path.join(demoDir, 'proposed-links.csv')))
+  await databaseOf(dataSource).transaction((db) => seedProposedLinks(db, path.join(demoDir, 'proposed-links.csv')))
   services.graphIndex.invalidate()
   await seedBuilds(services.sheets, path.join(demoDir, 'builds.json'), tech)
   // Written last: a start cut short before here is reported at the next start.

@@ -1,9 +1,8 @@
-import type Database from 'better-sqlite3'
 import type { DataSource } from 'typeorm'
-import { SQL_NOW } from '../audit/change-log'
+import type { Database } from '../db/database'
 import type { FieldReport } from '../../shared/schemas/field-reports'
 import type { User } from '../../shared/schemas/auth'
-import { inTransaction } from '../db/sqlite-connection'
+import { databaseOf } from '../db/sqlite-connection'
 import { AppError } from '../errors/app-error'
 import type { FitGraphIndex } from '../fitment/fit-graph'
 import { approvePairs, type ApprovalOutcome } from './field-report-review'
@@ -27,9 +26,9 @@ export class FieldReportReviewService {
     editor: User,
   ): Promise<{ report: FieldReport; links: Omit<ApprovalOutcome, 'batchId'>; batchId: number }> {
     const report = await this.open(id, editor)
-    const outcome = await inTransaction(this.dataSource, (db) => {
-      const written = approvePairs(db, id, report.pairs, editor)
-      this.decide(db, id, 'approved', note, editor, written.batchId)
+    const outcome = await databaseOf(this.dataSource).transaction(async (db) => {
+      const written = await approvePairs(db, id, report.pairs, editor)
+      await this.decide(db, id, 'approved', note, editor, written.batchId)
       return written
     })
     await this.graphIndex.applyChanges({ links: [...outcome.created, ...outcome.confirmed] })
@@ -39,13 +38,13 @@ export class FieldReportReviewService {
 
   async reject(id: number, reason: string, editor: User): Promise<FieldReport> {
     await this.open(id, editor)
-    await inTransaction(this.dataSource, (db) => this.decide(db, id, 'rejected', reason, editor, null))
+    await this.decide(databaseOf(this.dataSource), id, 'rejected', reason, editor, null)
     return this.told(id, 'rejected', reason, editor)
   }
 
   async ask(id: number, question: string, editor: User): Promise<FieldReport> {
     await this.open(id, editor)
-    await inTransaction(this.dataSource, (db) => this.decide(db, id, 'needs-more', question, editor, null))
+    await this.decide(databaseOf(this.dataSource), id, 'needs-more', question, editor, null)
     return this.told(id, 'needs-more', question, editor)
   }
 
@@ -66,21 +65,20 @@ export class FieldReportReviewService {
     return report
   }
 
-  private decide(
-    db: Database.Database,
+  private async decide(
+    db: Database,
     id: number,
     status: 'approved' | 'rejected' | 'needs-more',
     note: string,
     editor: User,
     batchId: number | null,
   ) {
-    // Checked again inside the transaction: two editors deciding at once must not both win.
-    const changed = db
-      .prepare(
-        `UPDATE field_report SET "status" = ?, "decisionNote" = ?, "decidedByName" = ?, "decidedAt" = ${SQL_NOW}, "batchId" = ?
-           WHERE "id" = ? AND "status" IN ('submitted', 'needs-more')`,
-      )
-      .run(status, note, editor.name, batchId, id)
+    // Checked again in the same statement: two editors deciding at once must not both win.
+    const changed = await db.run(
+      `UPDATE field_report SET "status" = ?, "decisionNote" = ?, "decidedByName" = ?, "decidedAt" = ?, "batchId" = ?
+         WHERE "id" = ? AND "status" IN ('submitted', 'needs-more')`,
+      [status, note, editor.name, new Date(), batchId, id],
+    )
     if (changed.changes === 0) throw new AppError(409, 'already_decided', `Field report ${id} was decided meanwhile.`)
   }
 }

@@ -1,8 +1,8 @@
-import type Database from 'better-sqlite3'
+import type { Database } from '../db/database'
 import type { ReportedPair } from '../../shared/schemas/field-reports'
 import { handEdit, type Editor } from '../audit/hand-edit'
 import { AppError } from '../errors/app-error'
-import { insertLinkRow, modificationIds, orderedPair, setLinkModifications } from '../fitment/link-rows'
+import { insertLinkRow, orderedPair } from '../fitment/link-rows'
 
 export type ApprovalOutcome = {
   batchId: number
@@ -21,26 +21,32 @@ type StoredLink = { id: number; relation: string; status: string }
  * proposed); a link that says otherwise is never changed silently — the report
  * is counted against it and it shows as contradicted.
  */
-export function approvePairs(db: Database.Database, reportId: number, pairs: ReportedPair[], editor: Editor): ApprovalOutcome {
-  const partId = db.prepare('SELECT id FROM part WHERE "partNumber" = ?')
-  const findLink = db.prepare('SELECT id, relation, status FROM link WHERE "partAId" = ? AND "partBId" = ?')
-  const insertEvidence = db.prepare(
-    'INSERT OR IGNORE INTO field_report_link ("reportId", "linkId", "agrees", "batchId") VALUES (?, ?, ?, ?)',
-  )
-  const resolved = pairs.map((pair, index) => {
-    const ids = [pair.from, pair.to].map((number) => (partId.get(number) as { id: number } | undefined)?.id)
+export async function approvePairs(db: Database, reportId: number, pairs: ReportedPair[], editor: Editor): Promise<ApprovalOutcome> {
+  const insertEvidence = (linkId: number, agrees: boolean, batchId: number) =>
+    db.run('INSERT INTO field_report_link ("reportId", "linkId", "agrees", "batchId") VALUES (?, ?, ?, ?) ON CONFLICT DO NOTHING', [
+      reportId,
+      linkId,
+      agrees ? 1 : 0,
+      batchId,
+    ])
+  const resolved = []
+  for (const [index, pair] of pairs.entries()) {
+    const ids: (number | undefined)[] = []
+    for (const number of [pair.from, pair.to])
+      ids.push((await db.get<{ id: number }>('SELECT "id" FROM part WHERE "partNumber" = ?', [number]))?.id)
     if (ids[0] === undefined || ids[1] === undefined) {
       throw AppError.conflict(`Pair ${index + 1} names a part removed since the report was filed; ask the reporter again or reject it.`)
     }
-    const partIds = orderedPair([ids[0], ids[1]])
-    return { pair, partIds, stored: findLink.get(...partIds) as StoredLink | undefined }
-  })
+    const partIds = orderedPair([Number(ids[0]), Number(ids[1])])
+    const stored = await db.get<StoredLink>('SELECT "id", "relation", "status" FROM link WHERE "partAId" = ? AND "partBId" = ?', partIds)
+    resolved.push({ pair, partIds, stored })
+  }
   const creates = resolved.filter((entry) => !entry.stored).length
-  const edit = handEdit(db, editor, { created: creates, updated: resolved.length - creates }, `field report #${reportId}`)
+  const edit = await handEdit(db, editor, { created: creates, updated: resolved.length - creates }, `field report #${reportId}`)
   const outcome: ApprovalOutcome = { batchId: edit.batchId, created: [], confirmed: [], contradicted: [] }
   for (const { pair, partIds, stored } of resolved) {
     if (!stored) {
-      const id = insertLinkRow(db, {
+      const id = await insertLinkRow(db, {
         partIds,
         relation: pair.relation,
         modifications: pair.modifications,
@@ -49,18 +55,22 @@ export function approvePairs(db: Database.Database, reportId: number, pairs: Rep
         status: 'approved',
         batchId: edit.batchId,
       })
-      insertEvidence.run(reportId, id, 1, edit.batchId)
+      await insertEvidence(id, true, edit.batchId)
       outcome.created.push(id)
     } else if (stored.relation === pair.relation) {
       if (stored.status !== 'approved') {
-        edit.rememberLink(stored.id, 'updated')
-        db.prepare(`UPDATE link SET status = 'approved', batchId = ?, updatedAt = ${edit.now} WHERE id = ?`).run(edit.batchId, stored.id)
-        if (pair.modifications.length) setLinkModifications(db, stored.id, modificationIds(db, pair.modifications, edit.batchId, 'editor'))
+        await edit.rememberLink(stored.id, 'updated')
+        await db.run(`UPDATE link SET "status" = 'approved', "batchId" = ?, "updatedAt" = ? WHERE "id" = ?`, [
+          edit.batchId,
+          new Date(),
+          stored.id,
+        ])
+        if (pair.modifications.length) await edit.setModifications(stored.id, pair.modifications)
       }
-      insertEvidence.run(reportId, stored.id, 1, edit.batchId)
+      await insertEvidence(stored.id, true, edit.batchId)
       outcome.confirmed.push(stored.id)
     } else {
-      insertEvidence.run(reportId, stored.id, 0, edit.batchId)
+      await insertEvidence(stored.id, false, edit.batchId)
       outcome.contradicted.push(stored.id)
     }
   }

@@ -1,11 +1,13 @@
-import type Database from 'better-sqlite3'
+import type BetterSqlite3 from 'better-sqlite3'
 import type { LinkSource, Relation, ReviewStatus } from '../../shared/schemas/fitment'
 import { unknownModification } from '../catalogue/modification.service'
+import type { Database } from '../db/database'
 
 /*
- * Raw, synchronous writes of links, identities and the modifications they
- * name, for use inside one `inTransaction` (hand edits, the demo seed, the
- * import's writer shares the proposed-modification insert).
+ * Writes of links, identities and the modifications they name through the
+ * data port, inside the caller's transaction (hand edits, reviews of field
+ * reports, the demo seed), on SQLite or PostgreSQL. The import's writer, which
+ * runs synchronously on the SQLite connection, shares the proposed-modification insert.
  */
 
 /** Fit is mutual: a pair is stored once, lower id first. */
@@ -13,28 +15,41 @@ export function orderedPair([a, b]: [number, number]): [number, number] {
   return a < b ? [a, b] : [b, a]
 }
 
-/** A modification an import or an editor named before anyone described it: proposed, for an editor to complete. */
-export function proposedModificationInserter(db: Database.Database, source: 'import' | 'editor') {
+const INSERT_PROPOSED_MODIFICATION = `INSERT INTO modification ("name", "title", "summary", "steps", "extraParts", "consumables", "skillLevel", "timeMinutes", "cautions", "status", "source", "batchId")
+  VALUES (?, ?, ?, '[]', '[]', '[]', ?, NULL, '[]', 'proposed', ?, ?)`
+
+function proposedValues(name: string, source: 'import' | 'editor', batchId: number | null) {
   const stub = unknownModification('')
-  const insert = db.prepare(
-    `INSERT INTO modification (name, title, summary, steps, extraParts, consumables, skillLevel, timeMinutes, cautions, status, source, batchId)
-     VALUES (@name, @name, @summary, '[]', '[]', '[]', @skillLevel, NULL, '[]', 'proposed', @source, @batchId)`,
-  )
-  return (name: string, batchId: number | null) =>
-    Number(insert.run({ name, summary: stub.summary, skillLevel: stub.skillLevel, source, batchId }).lastInsertRowid)
+  return [name, name, stub.summary, stub.skillLevel, source, batchId] as const
+}
+
+/** A modification an import or an editor named before anyone described it: proposed, for an editor to complete. */
+export function proposedModificationInserter(db: BetterSqlite3.Database, source: 'import' | 'editor') {
+  const insert = db.prepare(INSERT_PROPOSED_MODIFICATION)
+  return (name: string, batchId: number | null) => Number(insert.run(...proposedValues(name, source, batchId)).lastInsertRowid)
 }
 
 /** Modification ids by name, creating a proposed entry for a name the catalogue does not know. */
-export function modificationIds(db: Database.Database, names: string[], batchId: number | null, source: 'import' | 'editor'): number[] {
-  const find = db.prepare('SELECT id FROM modification WHERE name = ?')
-  const create = proposedModificationInserter(db, source)
-  return names.map((name) => (find.get(name) as { id: number } | undefined)?.id ?? create(name, batchId))
+export async function modificationIds(
+  db: Database,
+  names: string[],
+  batchId: number | null,
+  source: 'import' | 'editor',
+): Promise<number[]> {
+  const ids: number[] = []
+  for (const name of names) {
+    const found = await db.get<{ id: number }>('SELECT "id" FROM modification WHERE "name" = ?', [name])
+    ids.push(
+      found ? Number(found.id) : await db.insert(`${INSERT_PROPOSED_MODIFICATION} RETURNING "id"`, proposedValues(name, source, batchId)),
+    )
+  }
+  return ids
 }
 
-export function setLinkModifications(db: Database.Database, linkId: number, modificationIdList: number[]) {
-  db.prepare('DELETE FROM link_modification WHERE linkId = ?').run(linkId)
-  const insert = db.prepare('INSERT INTO link_modification (linkId, modificationId) VALUES (?, ?)')
-  for (const id of modificationIdList) insert.run(linkId, id)
+export async function setLinkModifications(db: Database, linkId: number, modificationIdList: number[]) {
+  await db.run('DELETE FROM link_modification WHERE "linkId" = ?', [linkId])
+  for (const id of modificationIdList)
+    await db.run('INSERT INTO link_modification ("linkId", "modificationId") VALUES (?, ?)', [linkId, id])
 }
 
 export type LinkRowInput = {
@@ -47,26 +62,27 @@ export type LinkRowInput = {
   batchId: number | null
 }
 
-export function insertLinkRow(db: Database.Database, input: LinkRowInput): number {
+export async function insertLinkRow(db: Database, input: LinkRowInput): Promise<number> {
   const [a, b] = orderedPair(input.partIds)
-  const id = Number(
-    db
-      .prepare('INSERT INTO link (partAId, partBId, relation, note, source, status, batchId) VALUES (?, ?, ?, ?, ?, ?, ?)')
-      .run(a, b, input.relation, input.note, input.source, input.status, input.batchId).lastInsertRowid,
+  const now = new Date()
+  const id = await db.insert(
+    `INSERT INTO link ("partAId", "partBId", "relation", "note", "source", "status", "batchId", "createdAt", "updatedAt")
+     VALUES (?, ?, ?, ?, ?, ?, ?, ?, ?) RETURNING "id"`,
+    [a, b, input.relation, input.note, input.source, input.status, input.batchId, now, now],
   )
-  setLinkModifications(db, id, modificationIds(db, input.modifications, input.batchId, input.source === 'import' ? 'import' : 'editor'))
+  const source = input.source === 'import' ? 'import' : 'editor'
+  await setLinkModifications(db, id, await modificationIds(db, input.modifications, input.batchId, source))
   return id
 }
 
 export function insertIdentityRow(
-  db: Database.Database,
+  db: Database,
   input: { partIds: [number, number]; note: string; source: LinkSource; batchId: number | null },
-): number {
+): Promise<number> {
   const [a, b] = orderedPair(input.partIds)
-  return Number(
-    db
-      .prepare('INSERT INTO part_identity (partAId, partBId, note, source, batchId) VALUES (?, ?, ?, ?, ?)')
-      .run(a, b, input.note, input.source, input.batchId).lastInsertRowid,
+  return db.insert(
+    'INSERT INTO part_identity ("partAId", "partBId", "note", "source", "batchId", "createdAt") VALUES (?, ?, ?, ?, ?, ?) RETURNING "id"',
+    [a, b, input.note, input.source, input.batchId, new Date()],
   )
 }
 
@@ -74,9 +90,9 @@ export function insertIdentityRow(
  * What already joins two parts: a pair holds one relation, either a fit link
  * or an identity (imports enforce the same).
  */
-export function pairHolder(db: Database.Database, [a, b]: [number, number]): 'link' | 'identity' | null {
-  const [low, high] = orderedPair([a, b])
-  if (db.prepare('SELECT 1 FROM link WHERE partAId = ? AND partBId = ?').get(low, high)) return 'link'
-  if (db.prepare('SELECT 1 FROM part_identity WHERE partAId = ? AND partBId = ?').get(low, high)) return 'identity'
+export async function pairHolder(db: Database, [a, b]: [number, number]): Promise<'link' | 'identity' | null> {
+  const pair = orderedPair([a, b])
+  if (await db.get('SELECT 1 AS "found" FROM link WHERE "partAId" = ? AND "partBId" = ?', pair)) return 'link'
+  if (await db.get('SELECT 1 AS "found" FROM part_identity WHERE "partAId" = ? AND "partBId" = ?', pair)) return 'identity'
   return null
 }

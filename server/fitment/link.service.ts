@@ -1,7 +1,8 @@
 import type { DataSource } from 'typeorm'
 import type { Identity, IdentityCreate, Link, LinkCreate, LinkList, LinkUpdate } from '../../shared/schemas/link'
 import type { ReviewStatus } from '../../shared/schemas/fitment'
-import { databaseOf, inTransaction } from '../db/sqlite-connection'
+import type { Database } from '../db/database'
+import { databaseOf } from '../db/sqlite-connection'
 import { LinkListRepository } from './link-list.repository'
 import { AppError } from '../errors/app-error'
 import type { FitGraphIndex } from './fit-graph'
@@ -12,13 +13,15 @@ import type { PartService } from '../catalogue/part.service'
 /** An editor's own changes to the fitment graph: links, their review, identities. */
 export class LinkService {
   private readonly rows: LinkListRepository
+  private readonly db: Database
 
   constructor(
-    private readonly dataSource: DataSource,
+    dataSource: DataSource,
     private readonly parts: PartService,
     private readonly graphIndex: FitGraphIndex,
   ) {
-    this.rows = new LinkListRepository(databaseOf(dataSource))
+    this.db = databaseOf(dataSource)
+    this.rows = new LinkListRepository(this.db)
   }
 
   async list(query: { status?: ReviewStatus; part?: string; contradicted?: boolean; page: number; pageSize: number }): Promise<LinkList> {
@@ -47,9 +50,9 @@ export class LinkService {
   /** A link an editor writes is reviewed by that act: approved, from the editor. */
   async create(input: LinkCreate, editor: Editor): Promise<Link> {
     const partIds = await this.pair(input.fromPart, input.toPart, ['fromPart', 'toPart'])
-    const id = await inTransaction(this.dataSource, (db) => {
-      refuseTakenPair(db, partIds, 'toPart')
-      const edit = handEdit(db, editor, { created: 1, updated: 0 })
+    const id = await this.db.transaction(async (db) => {
+      await refuseTakenPair(db, partIds, 'toPart')
+      const edit = await handEdit(db, editor, { created: 1, updated: 0 })
       const { relation, modifications, note } = input
       return insertLinkRow(db, { partIds, relation, modifications, note, source: 'editor', status: 'approved', batchId: edit.batchId })
     })
@@ -63,17 +66,18 @@ export class LinkService {
     const relation = change.relation ?? current.relation
     const modifications = change.modifications ?? (relation === 'fits-with-modification' ? current.modifications : [])
     checkModifications(relation, modifications)
-    await inTransaction(this.dataSource, (db) => {
-      const edit = handEdit(db, editor, { created: 0, updated: 1 })
-      edit.rememberLink(id, 'updated')
-      db.prepare(`UPDATE link SET relation = ?, note = ?, status = ?, batchId = ?, updatedAt = ${edit.now} WHERE id = ?`).run(
+    await this.db.transaction(async (db) => {
+      const edit = await handEdit(db, editor, { created: 0, updated: 1 })
+      await edit.rememberLink(id, 'updated')
+      await db.run('UPDATE link SET "relation" = ?, "note" = ?, "status" = ?, "batchId" = ?, "updatedAt" = ? WHERE "id" = ?', [
         relation,
         change.note ?? current.note,
         change.status ?? current.status,
         edit.batchId,
+        new Date(),
         id,
-      )
-      edit.setModifications(id, modifications)
+      ])
+      await edit.setModifications(id, modifications)
     })
     await this.graphIndex.applyChanges({ links: [id] })
     return this.get(id)
@@ -81,19 +85,19 @@ export class LinkService {
 
   async remove(id: number, editor: Editor): Promise<void> {
     await this.get(id)
-    await inTransaction(this.dataSource, (db) => {
-      const edit = handEdit(db, editor, { created: 0, updated: 1 })
-      edit.rememberLink(id, 'deleted')
-      db.prepare('DELETE FROM link WHERE id = ?').run(id)
+    await this.db.transaction(async (db) => {
+      const edit = await handEdit(db, editor, { created: 0, updated: 1 })
+      await edit.rememberLink(id, 'deleted')
+      await db.run('DELETE FROM link WHERE "id" = ?', [id])
     })
     await this.graphIndex.applyChanges({ links: [id] })
   }
 
   async createIdentity(input: IdentityCreate, editor: Editor): Promise<Identity> {
     const partIds = await this.pair(input.partA, input.partB, ['partA', 'partB'])
-    const id = await inTransaction(this.dataSource, (db) => {
-      refuseTakenPair(db, partIds, 'partB')
-      const edit = handEdit(db, editor, { created: 1, updated: 0 })
+    const id = await this.db.transaction(async (db) => {
+      await refuseTakenPair(db, partIds, 'partB')
+      const edit = await handEdit(db, editor, { created: 1, updated: 0 })
       return insertIdentityRow(db, { partIds, note: input.note, source: 'editor', batchId: edit.batchId })
     })
     await this.graphIndex.applyChanges({ identities: [id] })
@@ -102,11 +106,11 @@ export class LinkService {
   }
 
   async removeIdentity(id: number, editor: Editor): Promise<void> {
-    const removed = await inTransaction(this.dataSource, (db) => {
-      if (!db.prepare('SELECT 1 FROM part_identity WHERE id = ?').get(id)) return false
-      const edit = handEdit(db, editor, { created: 0, updated: 1 })
-      edit.rememberIdentity(id)
-      db.prepare('DELETE FROM part_identity WHERE id = ?').run(id)
+    const removed = await this.db.transaction(async (db) => {
+      if (!(await db.get('SELECT 1 AS "found" FROM part_identity WHERE "id" = ?', [id]))) return false
+      const edit = await handEdit(db, editor, { created: 0, updated: 1 })
+      await edit.rememberIdentity(id)
+      await db.run('DELETE FROM part_identity WHERE "id" = ?', [id])
       return true
     })
     if (!removed) throw AppError.notFound(`No identity ${id}.`)
@@ -129,8 +133,8 @@ function checkModifications(relation: string, modifications: string[]) {
 }
 
 /** A pair holds one relation: a fit link or an identity, as imports have it too. */
-function refuseTakenPair(db: Parameters<typeof pairHolder>[0], partIds: [number, number], path: string) {
-  const holder = pairHolder(db, partIds)
+async function refuseTakenPair(db: Database, partIds: [number, number], path: string) {
+  const holder = await pairHolder(db, partIds)
   if (holder === 'link')
     throw AppError.conflict('These two parts are linked already; change that link instead.', [
       { path, message: 'Already linked to the first part.' },

@@ -1,6 +1,6 @@
 import { afterAll, beforeAll, describe, expect, it } from 'vitest'
 import { MAX_NEIGHBOURHOOD_EDGES, MAX_NEIGHBOURHOOD_NODES } from '../../shared/schemas/graph'
-import { inTransaction } from '../../server/db/sqlite-connection'
+import { databaseOf, inTransaction } from '../../server/db/sqlite-connection'
 import { insertLinkRow } from '../../server/fitment/link-rows'
 import { insertPartRows } from '../../server/catalogue/part-writer'
 import { expectBadRequest } from '../helpers/expect-error'
@@ -87,21 +87,28 @@ describe('GET /api/graph/neighbourhood/:partNumber', () => {
         marks: [],
         listPriceCents: null,
       }))
-      const ids = insertPartRows(db, [{ ...spokes[0]!, partNumber: hubNumber }, ...spokes])
-      const hub = ids.get(hubNumber)!
-      const links = spokes.map((spoke) =>
-        insertLinkRow(db, {
-          partIds: [hub, ids.get(spoke.partNumber)!],
-          relation: 'fits',
-          modifications: [],
-          note: '',
-          source: 'editor',
-          status: 'approved',
-          batchId: null,
-        }),
-      )
-      return { parts: [...ids.values()], links }
-    })
+      return { spokes, ids: insertPartRows(db, [{ ...spokes[0]!, partNumber: hubNumber }, ...spokes]) }
+    }).then(({ spokes, ids }) =>
+      databaseOf(own.dataSource).transaction(async (db) => {
+        const hub = ids.get(hubNumber)!
+        const links: number[] = []
+        for (const spoke of spokes) {
+          const partIds: [number, number] = [hub, ids.get(spoke.partNumber)!]
+          links.push(
+            await insertLinkRow(db, {
+              partIds,
+              relation: 'fits',
+              modifications: [],
+              note: '',
+              source: 'editor',
+              status: 'approved',
+              batchId: null,
+            }),
+          )
+        }
+        return { parts: [...ids.values()], links }
+      }),
+    )
     await own.services.graphIndex.applyChanges(written)
     const counter = await own.signIn('counter')
     const response = await counter.get(`/api/graph/neighbourhood/${hubNumber}?depth=2`)

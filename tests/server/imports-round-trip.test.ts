@@ -15,7 +15,7 @@ import { openDatabase } from '../../server/db/data-source'
 import { ExportService } from '../../server/imports/export.service'
 import { FitGraphIndex } from '../../server/fitment/fit-graph'
 import { ImportService } from '../../server/imports/import.service'
-import { inTransaction } from '../../server/db/sqlite-connection'
+import { databaseOf, inTransaction } from '../../server/db/sqlite-connection'
 import { insertIdentityRow, insertLinkRow } from '../../server/fitment/link-rows'
 import { insertPartRows } from '../../server/catalogue/part-writer'
 
@@ -97,14 +97,14 @@ const catalogueArb = fc
 type Catalogue = typeof catalogueArb extends fc.Arbitrary<infer T> ? T : never
 
 async function writeCatalogue(dataSource: DataSource, { parts, links }: Catalogue) {
-  await inTransaction(dataSource, (db) => {
-    const ids = insertPartRows(db, parts)
+  const ids = await inTransaction(dataSource, (db) => insertPartRows(db, parts))
+  await databaseOf(dataSource).transaction(async (db) => {
     for (const link of links) {
       const partIds: [number, number] = [ids.get(parts[link.a]!.partNumber)!, ids.get(parts[link.b]!.partNumber)!]
-      if (link.relation === 'identical') insertIdentityRow(db, { partIds, note: link.note, source: link.source, batchId: null })
+      if (link.relation === 'identical') await insertIdentityRow(db, { partIds, note: link.note, source: link.source, batchId: null })
       else {
         const modifications = link.relation === 'fits-with-modification' ? link.mods : []
-        insertLinkRow(db, {
+        await insertLinkRow(db, {
           partIds,
           relation: link.relation,
           modifications,
