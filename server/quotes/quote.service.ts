@@ -58,7 +58,7 @@ export class QuoteService {
 
   async create(request: QuoteRequest, user: User): Promise<Quote> {
     const { build, buildSheetId, buildName } = await this.buildOf(request, user)
-    const evaluation = await this.evaluation.evaluate(build)
+    const evaluation = await this.evaluation.evaluate(build, user)
     const shop = await this.shop.get()
     const units = await this.stock.unitsOf(evaluation.partsList.flatMap((line) => (line.partNumber ? [line.partNumber] : [])))
     const sites = new Map((await this.stock.sites()).map((site) => [site.id, site.name]))
@@ -67,6 +67,7 @@ export class QuoteService {
       unitsOf: (partNumber) => units.filter((unit) => unit.partNumber === partNumber),
       siteName: (siteId) => sites.get(siteId) ?? `site ${siteId}`,
       listPriceOf: (partNumber) => listPrices.get(partNumber) ?? null,
+      homeSiteId: user.homeSiteId,
     })
     const body: Body = {
       buildName,
