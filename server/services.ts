@@ -31,6 +31,7 @@ import { StockService } from './stock/stock.service'
 import { VehicleRepository } from './vehicles/vehicle.repository'
 import { VehicleService } from './vehicles/vehicle.service'
 import { QuoteService } from './quotes/quote.service'
+import { QuoteRepository } from './quotes/quote.repository'
 import { SharedLinkService } from './shared-links/shared-link.service'
 import { SharedLinkRepository } from './shared-links/shared-link.repository'
 import { PartRepository } from './catalogue/part.repository'
@@ -79,6 +80,7 @@ export function createServices(dataSource: DataSource, config: AppConfig, rules:
     resetThrottle: new ResetThrottle(new SignInThrottleRepository(databaseOf(dataSource)), config.resetLimits),
     publicUrl: config.publicUrl,
   })
+  const vehicles = new VehicleService(new VehicleRepository(databaseOf(dataSource)), parts)
   const quotes = new QuoteService(
     databaseOf(dataSource),
     evaluation,
@@ -87,6 +89,8 @@ export function createServices(dataSource: DataSource, config: AppConfig, rules:
     stockRows,
     stockIndex,
     new PartRepository(databaseOf(dataSource)),
+    new QuoteRepository(databaseOf(dataSource)),
+    vehicles,
   )
   const ownPassword = new OwnPasswordService(accountRows, {
     sessions,
@@ -127,7 +131,7 @@ export function createServices(dataSource: DataSource, config: AppConfig, rules:
     stockIndex,
     stock,
     stockPhotos: new StockPhotoService(new StockPhotoRepository(databaseOf(dataSource)), photos, stock),
-    vehicles: new VehicleService(new VehicleRepository(databaseOf(dataSource)), parts),
+    vehicles,
     fieldReports,
     fieldReportReview: new FieldReportReviewService(dataSource, fieldReports, graphIndex, fieldReportNotices),
   }

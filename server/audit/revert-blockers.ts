@@ -32,3 +32,22 @@ export function findBlockers(db: Database.Database, batchId: number): Blocker[] 
     .all({ batch: batchId }) as Blocker[]
   return rows.sort((a, b) => (b.batchId ?? 0) - (a.batchId ?? 0))
 }
+
+export type QuoteBlocker = { quoteId: number; status: string; customer: string; createdAt: string; partNumber: string }
+
+/**
+ * Draft and accepted quotes that name a unit the revert would remove or put
+ * back: the customer was quoted that unit, so it stays as it is. Read through
+ * quote_unit by the batch's units, never through the quotes' bodies.
+ */
+export function findQuoteBlockers(db: Database.Database, batchId: number): QuoteBlocker[] {
+  return db
+    .prepare(
+      `SELECT DISTINCT q."id" AS "quoteId", q."status", q."customer", q."createdAt", p."partNumber" FROM stock_item s
+         JOIN quote_unit u ON u."stockItemId" = s."id" JOIN quote q ON q."id" = u."quoteId" JOIN part p ON p."id" = s."partId"
+         WHERE q."status" IN ('draft', 'accepted') AND (s."batchId" = @batch OR s."id" IN
+           (SELECT "recordId" FROM import_change WHERE "batchId" = @batch AND "recordType" = 'stock'))
+         ORDER BY q."id" LIMIT 20`,
+    )
+    .all({ batch: batchId }) as QuoteBlocker[]
+}

@@ -5,7 +5,9 @@ import type { ImportRecordType } from './import-change.entity'
 import { SQL_NOW, type PreviousRows } from './change-log'
 import { rewritePartWords } from '../catalogue/part-word-writer'
 import type { Touched } from '../imports/import-jobs'
-import { findBlockers } from './revert-blockers'
+import { findBlockers, findQuoteBlockers } from './revert-blockers'
+import { jobNumber } from '../../shared/quote-job-number'
+import { toIsoTime } from '../db/database'
 
 type ChangeRow = { recordType: ImportRecordType; recordId: number; action: 'updated' | 'deleted'; previousValues: string }
 
@@ -78,6 +80,24 @@ export function revertBatch(db: Database.Database, batchId: number, userName: st
   const batch = db.prepare('SELECT status FROM import_batch WHERE id = ?').get(batchId) as { status: string } | undefined
   if (!batch) throw AppError.notFound(`No import batch ${batchId}.`)
   if (batch.status === 'reverted') throw new AppError(409, 'already_reverted', `Batch ${batchId} is already reverted.`)
+
+  const quoted = findQuoteBlockers(db, batchId)
+  if (quoted.length) {
+    const details: FieldError[] = quoted.map((quote) => {
+      const job = jobNumber({ id: quote.quoteId, createdAt: toIsoTime(quote.createdAt) })
+      const whom = quote.customer ? ` for ${quote.customer}` : ''
+      return {
+        path: `quote ${job}`,
+        message: `The ${quote.status} quote ${job}${whom} names a unit of ${quote.partNumber} this batch wrote.`,
+      }
+    })
+    throw new AppError(
+      409,
+      'revert_blocked',
+      `${details[0]!.message} The customer was quoted that unit, so the batch cannot be reverted while the quote stands.`,
+      details,
+    )
+  }
 
   const blockers = findBlockers(db, batchId)
   if (blockers.length) {

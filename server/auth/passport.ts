@@ -13,6 +13,7 @@ declare global {
       role: Role
       disabled: boolean
       invitePending: boolean
+      homeSiteId: number | null
     }
   }
 }

@@ -46,7 +46,12 @@ export class BuildCompletionService {
    * For each empty slot: parts that fit every filled slot they mate with
    * (directly or with modification), fewest and easiest modifications first.
    */
-  async complete(request: Parameters<BuildEvaluationService['resolve']>[0], limit: number, only?: string[]): Promise<Completion> {
+  async complete(
+    request: Parameters<BuildEvaluationService['resolve']>[0],
+    limit: number,
+    only?: string[],
+    homeSiteId: number | null = null,
+  ): Promise<Completion> {
     const unknown = (only ?? []).filter((slot) => !isSlotId(slot))
     if (unknown.length) {
       throw AppError.badRequest(
@@ -55,7 +60,7 @@ export class BuildCompletionService {
       )
     }
     const build = await this.evaluation.resolve(request)
-    return this.completeBuild(build, await this.graphIndex.snapshot(), limit, { only: only?.filter(isSlotId) })
+    return this.completeBuild(build, await this.graphIndex.snapshot(), limit, { only: only?.filter(isSlotId), homeSiteId })
   }
 
   /** A fresh set of shared reads, for one request. */
@@ -68,7 +73,7 @@ export class BuildCompletionService {
     build: ResolvedBuild,
     graph: FitGraph,
     limit: number,
-    { only, reads = this.reads() }: { only?: SlotId[]; reads?: CompletionReads } = {},
+    { only, reads = this.reads(), homeSiteId = null }: { only?: SlotId[]; reads?: CompletionReads; homeSiteId?: number | null } = {},
   ): Promise<Completion> {
     const result: Completion = { slots: {} }
     for (const slot of BUILD_SLOTS) {
@@ -82,7 +87,7 @@ export class BuildCompletionService {
         }
         continue
       }
-      const { candidates, total } = await this.candidatesFor(slot.id, build, graph, reads, limit)
+      const { candidates, total } = await this.candidatesFor(slot.id, build, graph, reads, limit, homeSiteId)
       result.slots[slot.id] = {
         matesWith,
         candidates,
@@ -116,7 +121,14 @@ export class BuildCompletionService {
   }
 
   /** The best `limit` candidates for a slot, fewest and easiest modifications first, and how many fit in all. */
-  private async candidatesFor(slot: SlotId, build: ResolvedBuild, graph: FitGraph, reads: CompletionReads, limit: number) {
+  private async candidatesFor(
+    slot: SlotId,
+    build: ResolvedBuild,
+    graph: FitGraph,
+    reads: CompletionReads,
+    limit: number,
+    homeSiteId: number | null,
+  ) {
     // Every part of the slot's kind, in part-number order, from the graph rather than the part table.
     const rows: Row[] = graph
       .partsOfKind(slot)
@@ -156,7 +168,7 @@ export class BuildCompletionService {
       score: a.score,
       reasons: a.reasons,
       setBackFor: a.preference.notes,
-      stock: this.stock.of(a.row.id),
+      stock: this.stock.of(a.row.id, homeSiteId),
     }))
     return { candidates, total: scored.length }
   }

@@ -98,7 +98,8 @@ export class BuildEvaluationService {
     }))
   }
 
-  async evaluate(request: EvaluateRequest): Promise<Evaluation> {
+  /** `asker.homeSiteId`: the user's own site, preferred for the units the parts list takes. */
+  async evaluate(request: EvaluateRequest, asker: { homeSiteId?: number | null } = {}): Promise<Evaluation> {
     const build = await this.resolve(request)
     const graph = await this.graphIndex.snapshot()
     const { figures, facts } = this.prepare(build)
@@ -117,7 +118,7 @@ export class BuildEvaluationService {
       ],
       consumables: this.rules.loaded.consumables,
       findParts: async (spec) => this.findParts(graph, spec),
-    }).then((lines) => this.shelf?.withUnits(lines) ?? lines)
+    }).then((lines) => this.shelf?.withUnits(lines, asker.homeSiteId ?? null) ?? lines)
 
     const cautions = dedupeCautions([
       ...build.contextCautions,

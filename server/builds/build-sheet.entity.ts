@@ -35,6 +35,10 @@ export class BuildSheetEntity {
   @Column({ type: 'text', nullable: true })
   vin!: string | null
 
+  /** The vehicle application the build was planned from, if any (its make and model go on a quote). */
+  @Column({ type: 'integer', nullable: true })
+  vehicleId!: number | null
+
   @Column({ type: 'text', default: '' })
   notes!: string
 

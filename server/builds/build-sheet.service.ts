@@ -19,6 +19,7 @@ function toBuildSheet(entity: BuildSheetEntity): BuildSheet {
     fuelOctane: entity.fuelOctane,
     chassisModelYear: entity.chassisModelYear,
     vin: entity.vin,
+    vehicleId: entity.vehicleId ?? null,
     notes: entity.notes,
     checklist: entity.checklist ?? {},
     verdict: verdictSchema.safeParse(entity.savedVerdict).data ?? null,
@@ -91,6 +92,7 @@ export class BuildSheetService {
       fuelOctane: input.fuelOctane ?? null,
       chassisModelYear: input.chassisModelYear ?? null,
       vin: input.vin ?? null,
+      vehicleId: input.vehicleId ?? null,
       notes: input.notes,
       checklist: sortedTicks(input.checklist),
     })
@@ -107,6 +109,7 @@ export class BuildSheetService {
     if ('fuelOctane' in change) entity.fuelOctane = change.fuelOctane ?? null
     if ('chassisModelYear' in change) entity.chassisModelYear = change.chassisModelYear ?? null
     if ('vin' in change) entity.vin = change.vin ?? null
+    if ('vehicleId' in change) entity.vehicleId = change.vehicleId ?? null
     if (change.notes !== undefined) entity.notes = change.notes
     if (change.checklist !== undefined) entity.checklist = sortedTicks(change.checklist)
     await this.judge(entity)

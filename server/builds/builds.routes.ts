@@ -22,11 +22,11 @@ export function buildRoutes(services: {
   const savers = requireRole(...rolesFor('builds.save'))
 
   router.post('/builds/evaluate', evaluators, async (req, res) => {
-    res.json(await services.evaluation.evaluate(parseBody(evaluateRequestSchema, req)))
+    res.json(await services.evaluation.evaluate(parseBody(evaluateRequestSchema, req), req.user!))
   })
   router.post('/builds/complete', evaluators, async (req, res) => {
     const { limit, only, ...request } = parseBody(completeRequestSchema, req)
-    res.json(await services.completion.complete(request, limit, only))
+    res.json(await services.completion.complete(request, limit, only, req.user!.homeSiteId))
   })
   router.post('/builds/fill', evaluators, async (req, res) => {
     res.json(await services.fill.fill(parseBody(evaluateRequestSchema, req)))

@@ -24,6 +24,7 @@ import { StockPhotoEntity } from '../stock/stock-photo.entity'
 import { VehicleApplicationEntity } from '../vehicles/vehicle-application.entity'
 import { VehicleOriginalEntity } from '../vehicles/vehicle-original.entity'
 import { QuoteEntity } from '../quotes/quote.entity'
+import { QuoteUnitEntity } from '../quotes/quote-unit.entity'
 
 export const entities = [
   UserEntity,
@@ -50,6 +51,7 @@ export const entities = [
   VehicleApplicationEntity,
   VehicleOriginalEntity,
   QuoteEntity,
+  QuoteUnitEntity,
   AccountTokenEntity,
   SharedLinkEntity,
 ]

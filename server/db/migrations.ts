@@ -1,5 +1,7 @@
 import { StockPhotos1796229010828 } from '../migrations/1796229010828-StockPhotos'
+import { CounterFinish1796235249342 } from '../migrations/1796235249342-CounterFinish'
 import { StockPhotos1796229013832 as PostgresStockPhotos1796229013832 } from '../migrations/postgres/1796229013832-StockPhotos'
+import { CounterFinish1796235252157 as PostgresCounterFinish1796235252157 } from '../migrations/postgres/1796235252157-CounterFinish'
 import { AccountTokens1796223315452 } from '../migrations/1796223315452-AccountTokens'
 import { AccountTokens1796223318439 as PostgresAccountTokens1796223318439 } from '../migrations/postgres/1796223318439-AccountTokens'
 import { Quotes1796215187917 } from '../migrations/1796215187917-Quotes'
@@ -53,6 +55,7 @@ export const migrations = [
   PartListPrice1796226633835,
   SharedLinks1796227511872,
   StockPhotos1796229010828,
+  CounterFinish1796235249342,
 ]
 
 /** PostgreSQL's, generated from the same entities (`npx tsx server/db/generate-migration.ts Name --postgres`). */
@@ -73,4 +76,5 @@ export const postgresMigrations = [
   PostgresPartListPrice1796226637373,
   PostgresSharedLinks1796227515397,
   PostgresStockPhotos1796229013832,
+  PostgresCounterFinish1796235252157,
 ]

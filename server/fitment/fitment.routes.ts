@@ -21,7 +21,7 @@ export function fitmentRoutes(services: {
 
   router.get('/parts/:partNumber/fits', readers, async (req, res) => {
     const { partNumber } = parseParams(partNumberParamsSchema, req)
-    res.json(await services.fitment.fitsFor(partNumber, parseQuery(fitsQuerySchema, req)))
+    res.json(await services.fitment.fitsFor(partNumber, parseQuery(fitsQuerySchema, req), req.user!.homeSiteId))
   })
   router.get('/graph/path', readers, async (req, res) => {
     const { from, to } = parseQuery(pathQuerySchema, req)

@@ -35,7 +35,7 @@ export class FitmentService {
    * part with thousands of links answers as fast as one with ten; whole parts,
    * link details and modifications are read for the page only.
    */
-  async fitsFor(code: string, query: FitsQuery): Promise<FitsResponse> {
+  async fitsFor(code: string, query: FitsQuery, homeSiteId: number | null = null): Promise<FitsResponse> {
     const { entity, resolvedFrom } = await this.parts.requireResolved(code)
     const graph = await this.graphIndex.snapshot()
     const members = graph.classOf(entity.id)
@@ -100,7 +100,7 @@ export class FitmentService {
           explanation: found.explanation,
           fieldReports: evidence.get(chains.get(found)?.link.id ?? -1) ?? { confirmed: 0, contradicted: 0 },
           ...linkPartsOf(graph, chains.get(found)),
-          stock: this.stock.of(found.partId),
+          stock: this.stock.of(found.partId, homeSiteId),
         },
       ]
     }

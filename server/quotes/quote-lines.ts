@@ -10,6 +10,8 @@ export type Shelf = {
   unitsOf: (partNumber: string) => UnitRow[]
   siteName: (siteId: number) => string
   listPriceOf: (partNumber: string) => number | null
+  /** The quoting user's own site, whose unit is taken first among equal conditions. */
+  homeSiteId?: number | null
 }
 
 /**
@@ -21,7 +23,7 @@ export type Shelf = {
 export function quoteLines(evaluation: Evaluation, slots: Record<string, unknown>, shop: ShopSettings, shelf: Shelf): QuoteLine[] {
   const { unitsOf, siteName, listPriceOf } = shelf
   const lines: QuoteLine[] = []
-  const picks = unitsToTake(evaluation.partsList, unitsOf)
+  const picks = unitsToTake(evaluation.partsList, unitsOf, shelf.homeSiteId ?? null)
   evaluation.partsList.forEach((item, index) => {
     if (!item.partNumber) {
       lines.push({ kind: 'consumable', description: item.description, quantity: item.quantity, unitPriceCents: 0, toOrder: true })

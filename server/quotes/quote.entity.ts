@@ -21,6 +21,10 @@ export class QuoteEntity {
   @Column({ type: 'text' })
   createdByName!: string
 
+  /** Customer, VIN, make, model and engine family in lower case, for the list's search. */
+  @Column({ type: 'text', default: '' })
+  searchText!: string
+
   @Column({ type: Date, nullable: true })
   reservedUntil!: Date | null
 

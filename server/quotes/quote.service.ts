@@ -1,6 +1,6 @@
 import type { User } from '../../shared/schemas/auth'
 import type { EvaluateRequest } from '../../shared/schemas/build'
-import type { Quote, QuoteRequest, QuoteSummary } from '../../shared/schemas/quotes'
+import type { Quote, QuoteList, QuoteListQuery, QuoteRequest, QuoteVehicle } from '../../shared/schemas/quotes'
 import { quoteTotals } from '../../shared/quote-totals'
 import { toIsoTime, type Database } from '../db/database'
 import { AppError } from '../errors/app-error'
@@ -10,24 +10,16 @@ import type { PartRepository } from '../catalogue/part.repository'
 import type { ShopSettingsService } from '../settings/shop-settings.service'
 import type { StockIndex } from '../stock/stock-index'
 import type { StockRepository } from '../stock/stock.repository'
+import type { VehicleService } from '../vehicles/vehicle.service'
 import { quoteLines } from './quote-lines'
+import type { QuoteRepository, QuoteRow } from './quote.repository'
+import { quoteSearchText, quoteVehicle } from './quote-vehicle'
 
-type QuoteRow = {
-  id: number
-  status: 'draft' | 'accepted'
-  customer: string
-  buildSheetId: number | null
-  body: string
-  createdByName: string
-  reservedUntil: unknown
-  createdAt: unknown
+type Body = Pick<Quote, 'shop' | 'lines' | 'totals' | 'cautions'> & {
+  buildName?: string | null
+  /** Quotes made before make and model were kept have only the model year and VIN. */
+  vehicle: Partial<QuoteVehicle> & Pick<QuoteVehicle, 'modelYear' | 'vin'>
 }
-type Body = Pick<Quote, 'shop' | 'vehicle' | 'lines' | 'totals' | 'cautions'> & { buildName?: string | null }
-
-/** The newest quotes a list shows; older ones stay reachable by their number. */
-const LIST_LIMIT = 200
-
-const COLUMNS = 'SELECT "id", "status", "customer", "buildSheetId", "body", "createdByName", "reservedUntil", "createdAt" FROM quote'
 
 function toQuote(row: QuoteRow): Quote {
   const body = JSON.parse(row.body) as Body
@@ -37,6 +29,7 @@ function toQuote(row: QuoteRow): Quote {
     customer: row.customer,
     buildSheetId: row.buildSheetId,
     ...body,
+    vehicle: { make: null, model: null, engineFamily: null, ...body.vehicle },
     buildName: body.buildName ?? null,
     createdBy: row.createdByName,
     createdAt: toIsoTime(row.createdAt),
@@ -54,11 +47,13 @@ export class QuoteService {
     private readonly stock: StockRepository,
     private readonly stockIndex: StockIndex,
     private readonly parts: PartRepository,
+    private readonly quotes: QuoteRepository,
+    private readonly vehicles: Pick<VehicleService, 'get' | 'byVin'>,
   ) {}
 
   async create(request: QuoteRequest, user: User): Promise<Quote> {
     const { build, buildSheetId, buildName } = await this.buildOf(request, user)
-    const evaluation = await this.evaluation.evaluate(build)
+    const evaluation = await this.evaluation.evaluate(build, user)
     const shop = await this.shop.get()
     const units = await this.stock.unitsOf(evaluation.partsList.flatMap((line) => (line.partNumber ? [line.partNumber] : [])))
     const sites = new Map((await this.stock.sites()).map((site) => [site.id, site.name]))
@@ -67,31 +62,41 @@ export class QuoteService {
       unitsOf: (partNumber) => units.filter((unit) => unit.partNumber === partNumber),
       siteName: (siteId) => sites.get(siteId) ?? `site ${siteId}`,
       listPriceOf: (partNumber) => listPrices.get(partNumber) ?? null,
+      homeSiteId: user.homeSiteId,
     })
+    const vehicle = await quoteVehicle(build, this.vehicles)
     const body: Body = {
       buildName,
       shop,
-      vehicle: { modelYear: build.chassisModelYear ?? null, vin: build.vin ?? null },
+      vehicle,
       lines,
       totals: quoteTotals(lines, shop.taxRateBasisPoints),
       cautions: evaluation.cautions,
     }
-    const id = await this.db.insert(
-      'INSERT INTO quote ("status", "customer", "buildSheetId", "body", "createdByName", "createdAt") VALUES (\'draft\', ?, ?, ?, ?, ?) RETURNING "id"',
-      [request.customer, buildSheetId, JSON.stringify(body), user.name, new Date()],
+    const id = await this.quotes.insert(
+      {
+        customer: request.customer,
+        buildSheetId,
+        body: JSON.stringify(body),
+        searchText: quoteSearchText(request.customer, vehicle),
+        createdByName: user.name,
+      },
+      lines.flatMap((line) => (line.stockItemId ? [line.stockItemId] : [])),
     )
     return this.get(id)
   }
 
-  async list(): Promise<QuoteSummary[]> {
-    const rows = await this.db.all<QuoteRow>(`${COLUMNS} ORDER BY "id" DESC LIMIT ${LIST_LIMIT}`)
-    return rows.map((row) => {
+  /** A page of the quotes a search finds (customer, job number, VIN, make, model), newest first. */
+  async list(query: QuoteListQuery): Promise<QuoteList> {
+    const { rows, total } = await this.quotes.page(query)
+    const items = rows.map((row) => {
       const quote = toQuote(row)
       return {
         id: quote.id,
         status: quote.status,
         customer: quote.customer,
         buildName: quote.buildName,
+        vehicle: quote.vehicle,
         totalCents: quote.totals.totalCents,
         currency: quote.shop.currency,
         createdBy: quote.createdBy,
@@ -99,10 +104,11 @@ export class QuoteService {
         reservedUntil: quote.reservedUntil,
       }
     })
+    return { items, total, page: query.page, pageSize: query.pageSize }
   }
 
   async get(id: number): Promise<Quote> {
-    const row = await this.db.get<QuoteRow>(`${COLUMNS} WHERE "id" = ?`, [id])
+    const row = await this.quotes.byId(id)
     if (!row) throw AppError.notFound(`No quote ${id}.`)
     return toQuote(row)
   }
@@ -157,6 +163,7 @@ export class QuoteService {
           fuelOctane: sheet.fuelOctane ?? undefined,
           chassisModelYear: sheet.chassisModelYear ?? undefined,
           vin: sheet.vin ?? undefined,
+          vehicleId: sheet.vehicleId ?? undefined,
         },
       }
     }

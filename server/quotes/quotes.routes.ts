@@ -1,9 +1,9 @@
 import { Router } from 'express'
 import { z } from 'zod'
 import { rolesFor } from '../../shared/permissions'
-import { quoteRequestSchema, shopSettingsSchema } from '../../shared/schemas/quotes'
+import { quoteListQuerySchema, quoteRequestSchema, shopSettingsSchema } from '../../shared/schemas/quotes'
 import { requireRole } from '../auth/require-role'
-import { parseBody, parseParams } from '../middleware/validate'
+import { parseBody, parseParams, parseQuery } from '../middleware/validate'
 import type { ShopSettingsService } from '../settings/shop-settings.service'
 import type { QuoteService } from './quote.service'
 
@@ -15,8 +15,8 @@ export function quoteRoutes(services: { quotes: QuoteService; shopSettings: Shop
   router.post('/quotes', quoters, async (req, res) => {
     res.status(201).json(await services.quotes.create(parseBody(quoteRequestSchema, req), req.user!))
   })
-  router.get('/quotes', quoters, async (_req, res) => {
-    res.json(await services.quotes.list())
+  router.get('/quotes', quoters, async (req, res) => {
+    res.json(await services.quotes.list(parseQuery(quoteListQuerySchema, req)))
   })
   router.get('/quotes/:id', quoters, async (req, res) => {
     res.json(await services.quotes.get(parseParams(idParams, req).id))

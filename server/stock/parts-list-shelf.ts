@@ -10,12 +10,13 @@ import { unitsToTake } from './units-to-take'
 export class PartsListShelf {
   constructor(private readonly repository: Pick<StockRepository, 'unitsOf' | 'sites'>) {}
 
-  async withUnits(lines: PartsListLine[]): Promise<PartsListLine[]> {
+  /** `homeSiteId`: the asker's own site, whose unit is taken first among equal conditions. */
+  async withUnits(lines: PartsListLine[], homeSiteId: number | null = null): Promise<PartsListLine[]> {
     const numbers = lines.flatMap((line) => (line.partNumber ? [line.partNumber] : []))
     if (numbers.length === 0) return lines
     const units = await this.repository.unitsOf(numbers)
     const sites = new Map((await this.repository.sites()).map((site) => [site.id, site.name]))
-    const picks = unitsToTake(lines, (partNumber) => units.filter((unit) => unit.partNumber === partNumber))
+    const picks = unitsToTake(lines, (partNumber) => units.filter((unit) => unit.partNumber === partNumber), homeSiteId)
     return lines.map((line, index) => {
       if (!line.partNumber) return line
       const { units: taken, toOrder } = picks[index]!

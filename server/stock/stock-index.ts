@@ -2,7 +2,8 @@ import { setImmediate as nextTurn } from 'node:timers/promises'
 import { NO_STOCK, STOCK_CONDITIONS, type Availability, type StockCondition } from '../../shared/schemas/stock'
 import type { AvailableRow, StockRepository } from './stock.repository'
 
-type Summary = { available: number; best: number; min: number; max: number; sites: Set<number> }
+/** Available units of one part; `sites` counts them by site id. */
+type Summary = { available: number; best: number; min: number; max: number; sites: Map<number, number> }
 
 /** Lower is better: new, then remanufactured, used, and a core last. */
 const RANK = new Map<StockCondition, number>(STOCK_CONDITIONS.map((condition, index) => [condition, index]))
@@ -50,29 +51,53 @@ export class StockIndex {
     return this.byPart.has(partId)
   }
 
-  of(partId: number): Availability {
+  /**
+   * The shelf for one part as the asker sees it: their home site first when it
+   * holds a unit, else the site with the most. Ordered here, per answer, from
+   * the few sites a part sits at, so nothing is read per line.
+   */
+  of(partId: number, homeSiteId: number | null = null): Availability {
     const summary = this.byPart.get(partId)
     if (!summary) return NO_STOCK
+    const nearest = nearestOf(summary.sites, homeSiteId, (id) => this.siteName(id))
+    const others = [...summary.sites.keys()].filter((id) => id !== nearest).map((id) => this.siteName(id))
+    const nearestName = this.siteName(nearest)
     return {
       available: summary.available,
       bestCondition: STOCK_CONDITIONS[summary.best] ?? null,
       minPriceCents: summary.min,
       maxPriceCents: summary.max,
-      sites: [...summary.sites].map((id) => this.siteNames.get(id) ?? `site ${id}`).sort(),
+      sites: [nearestName, ...others.sort()],
+      nearestSite: nearestName,
     }
+  }
+
+  private siteName(id: number): string {
+    return this.siteNames.get(id) ?? `site ${id}`
   }
 
   private add(row: AvailableRow) {
     const rank = RANK.get(row.condition) ?? STOCK_CONDITIONS.length
     const summary = this.byPart.get(row.partId)
     if (!summary) {
-      this.byPart.set(row.partId, { available: 1, best: rank, min: row.priceCents, max: row.priceCents, sites: new Set([row.siteId]) })
+      this.byPart.set(row.partId, { available: 1, best: rank, min: row.priceCents, max: row.priceCents, sites: new Map([[row.siteId, 1]]) })
       return
     }
     summary.available++
     summary.best = Math.min(summary.best, rank)
     summary.min = Math.min(summary.min, row.priceCents)
     summary.max = Math.max(summary.max, row.priceCents)
-    summary.sites.add(row.siteId)
+    summary.sites.set(row.siteId, (summary.sites.get(row.siteId) ?? 0) + 1)
   }
+}
+
+/** The home site when it holds a unit; otherwise the site holding the most, ties going to the first name. */
+function nearestOf(counts: ReadonlyMap<number, number>, homeSiteId: number | null, nameOf: (id: number) => string): number {
+  if (homeSiteId !== null && (counts.get(homeSiteId) ?? 0) > 0) return homeSiteId
+  let best: number | null = null
+  for (const [id, count] of counts) {
+    const lead = best === null ? 0 : count - counts.get(best)!
+    if (best === null || lead > 0 || (lead === 0 && nameOf(id).localeCompare(nameOf(best)) < 0)) best = id
+  }
+  return best!
 }

@@ -22,6 +22,10 @@ export class UserEntity {
   @Column({ type: Date, nullable: true })
   disabledAt!: Date | null
 
+  /** The user's own site: stock answers name it first when it has the part. */
+  @Column({ type: 'integer', nullable: true })
+  homeSiteId!: number | null
+
   @CreateDateColumn()
   createdAt!: Date
 }

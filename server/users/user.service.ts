@@ -1,4 +1,5 @@
 import bcrypt from 'bcryptjs'
+import type BetterSqlite3 from 'better-sqlite3'
 import { In, type DataSource, type Repository } from 'typeorm'
 import { inTransaction } from '../db/sqlite-connection'
 import type { Role, User, UserUpdateInput } from '../../shared/schemas/auth'
@@ -26,7 +27,17 @@ export function toUser(entity: UserEntity): User {
     role: entity.role,
     disabled: entity.disabledAt !== null,
     invitePending: entity.passwordHash === INVITE_PENDING,
+    homeSiteId: entity.homeSiteId ?? null,
   }
+}
+
+/** A home site must be a site: a 400 on the field otherwise. */
+function requireSite(db: BetterSqlite3.Database, siteId: number | null) {
+  if (siteId !== null && !db.prepare('SELECT 1 FROM site WHERE id = ?').get(siteId)) throw noSite(siteId)
+}
+
+function noSite(siteId: number): AppError {
+  return AppError.badRequest(`No site ${siteId}.`, [{ path: 'homeSiteId', message: `No site ${siteId}; choose one of the sites.` }])
 }
 
 export class UserService {
@@ -105,6 +116,7 @@ export class UserService {
       const current = db.prepare('SELECT role, email, disabledAt FROM user WHERE id = ?').get(id) as
         { role: Role; email: string; disabledAt: string | null } | undefined
       if (!current) throw AppError.notFound(`No user with id ${id}.`)
+      if (change.homeSiteId !== undefined) requireSite(db, change.homeSiteId)
       const losesAdmin = current.role === 'admin' && ((change.role && change.role !== 'admin') || change.disabled === true)
       if (losesAdmin) {
         const { admins } = db.prepare("SELECT COUNT(*) AS admins FROM user WHERE role = 'admin' AND disabledAt IS NULL").get() as {
@@ -120,8 +132,15 @@ export class UserService {
       db.prepare(
         `UPDATE user SET name = COALESCE(?, name), role = COALESCE(?, role), passwordHash = COALESCE(?, passwordHash)${
           disabledAt === undefined ? '' : ', disabledAt = ?'
-        } WHERE id = ?`,
-      ).run(change.name ?? null, change.role ?? null, passwordHash, ...(disabledAt === undefined ? [] : [disabledAt]), id)
+        }${change.homeSiteId === undefined ? '' : ', homeSiteId = ?'} WHERE id = ?`,
+      ).run(
+        change.name ?? null,
+        change.role ?? null,
+        passwordHash,
+        ...(disabledAt === undefined ? [] : [disabledAt]),
+        ...(change.homeSiteId === undefined ? [] : [change.homeSiteId]),
+        id,
+      )
       // A password set here makes any invitation or reset link still out for the user worthless.
       if (passwordHash)
         db.prepare('UPDATE account_token SET usedAt = ? WHERE userId = ? AND usedAt IS NULL').run(sqliteTime(new Date()), id)
@@ -138,6 +157,16 @@ export class UserService {
     if (change.disabled === true && !before.disabledAt) happened.push({ kind: 'disable', detail: before.email })
     if (change.disabled === false && before.disabledAt) happened.push({ kind: 'enable', detail: before.email })
     for (const event of happened) await this.events.record({ ...event, ...who })
+    return toUser(await this.users.findOneByOrFail({ id }))
+  }
+
+  /** The user's own site, or none; a site that does not exist is refused. */
+  async setHomeSite(id: number, homeSiteId: number | null): Promise<User> {
+    // Through the port, so it runs on either database: one's own home site is the everyday change.
+    await databaseOf(this.dataSource).transaction(async (tx) => {
+      if (homeSiteId !== null && !(await tx.get('SELECT 1 AS "found" FROM site WHERE "id" = ?', [homeSiteId]))) throw noSite(homeSiteId)
+      await tx.run('UPDATE "user" SET "homeSiteId" = ? WHERE "id" = ?', [homeSiteId, id])
+    })
     return toUser(await this.users.findOneByOrFail({ id }))
   }
 

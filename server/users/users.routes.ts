@@ -1,8 +1,8 @@
 import { Router } from 'express'
 import { z } from 'zod'
-import { userCreateSchema, userUpdateSchema } from '../../shared/schemas/auth'
+import { homeSiteSchema, userCreateSchema, userUpdateSchema } from '../../shared/schemas/auth'
 import { rolesFor } from '../../shared/permissions'
-import { requireRole } from '../auth/require-role'
+import { requireRole, requireSignIn } from '../auth/require-role'
 import { parseBody, parseParams } from '../middleware/validate'
 import type { UserService } from './user.service'
 
@@ -27,6 +27,10 @@ export function userRoutes(users: UserService): Router {
         address: req.ip,
       }),
     )
+  })
+  // Anyone signed in chooses their own home site; an administrator sets anyone's through PATCH /users/:id.
+  router.put('/account/home-site', requireSignIn, async (req, res) => {
+    res.json(await users.setHomeSite(req.user!.id, parseBody(homeSiteSchema, req).homeSiteId))
   })
   return router
 }

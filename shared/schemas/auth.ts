@@ -19,6 +19,8 @@ export const userSchema = z.object({
   disabled: z.boolean(),
   /** Invited but has not set a password yet: the invitation link is the only way in. */
   invitePending: z.boolean().default(false),
+  /** The site the user works at: stock answers name it first when it has the part. */
+  homeSiteId: z.number().int().nullable().default(null),
 })
 export type User = z.infer<typeof userSchema>
 
@@ -49,14 +51,24 @@ export const userCreateSchema = z.object({
 })
 export type UserCreateInput = z.infer<typeof userCreateSchema>
 
+/** A site's id, or null for no home site. */
+export const homeSiteIdSchema = z
+  .number({ error: 'Give a site id, or null for none.' })
+  .int()
+  .positive('Give a site id, or null for none.')
+  .nullable()
+export const homeSiteSchema = z.strictObject({ homeSiteId: homeSiteIdSchema })
+export type HomeSiteInput = z.infer<typeof homeSiteSchema>
+
 export const userUpdateSchema = z
   .object({
     name: z.string().trim().min(1, 'Name is required.').max(120).optional(),
     role: roleSchema.optional(),
     password: newPasswordSchema.optional(),
     disabled: z.boolean().optional(),
+    homeSiteId: homeSiteIdSchema.optional(),
   })
-  .refine((value) => Object.keys(value).length > 0, 'Change at least one of name, role, password or disabled.')
+  .refine((value) => Object.keys(value).length > 0, 'Change at least one of name, role, password, disabled or home site.')
 export type UserUpdateInput = z.infer<typeof userUpdateSchema>
 
 export const userListSchema = z.array(userSchema)

@@ -27,6 +27,12 @@ export const buildContextSchema = z.object({
     .max(2100, 'Model year must be between 1900 and 2100.')
     .optional(),
   vin: z.string().trim().max(17, 'A VIN has 17 characters.').optional(),
+  /** The vehicle application the build was planned from ("Plan from this vehicle"): its make and model go on a quote. */
+  vehicleId: z
+    .number({ error: () => 'Give a vehicle application id.' })
+    .int()
+    .positive('Give a vehicle application id.')
+    .optional(),
   /** The job takes the engine out of the car (lifting cautions apply). */
   engineOut: z.boolean().optional(),
   /** The build removes or disables an emission control (catalyst, EGR, evaporative). */
@@ -196,6 +202,7 @@ export const buildSheetUpdateSchema = z
     fuelOctane: buildContextSchema.shape.fuelOctane.unwrap().nullable(),
     chassisModelYear: buildContextSchema.shape.chassisModelYear.unwrap().nullable(),
     vin: buildContextSchema.shape.vin.unwrap().nullable(),
+    vehicleId: buildContextSchema.shape.vehicleId.unwrap().nullable(),
     notes: z.string().max(4000),
     checklist: checklistTicksSchema,
   })
@@ -211,6 +218,8 @@ export const buildSheetSchema = z.object({
   fuelOctane: z.number().nullable(),
   chassisModelYear: z.number().nullable(),
   vin: z.string().nullable(),
+  /** The vehicle application it was planned from (null for one planned from parts alone, or saved before this was kept). */
+  vehicleId: z.number().int().nullable().default(null),
   notes: z.string(),
   checklist: z.record(z.string(), z.array(z.number().int())).default({}),
   /** The verdict and labour as of the last save (null for a sheet saved before they were kept). */

@@ -49,6 +49,16 @@ export const quoteLineSchema = z.object({
 })
 export type QuoteLine = z.infer<typeof quoteLineSchema>
 
+/** The customer's vehicle as quoted; make, model and engine family only when a vehicle application names them (older quotes have none). */
+export const quoteVehicleSchema = z.object({
+  modelYear: z.number().nullable(),
+  vin: z.string().nullable(),
+  make: z.string().nullable().default(null),
+  model: z.string().nullable().default(null),
+  engineFamily: z.string().nullable().default(null),
+})
+export type QuoteVehicle = z.infer<typeof quoteVehicleSchema>
+
 export const quoteSchema = z.object({
   id: z.number().int(),
   status: z.enum(['draft', 'accepted']),
@@ -57,7 +67,7 @@ export const quoteSchema = z.object({
   /** The build sheet's name when the quote was made from one (older quotes have none). */
   buildName: z.string().nullable().default(null),
   shop: shopSettingsSchema,
-  vehicle: z.object({ modelYear: z.number().nullable(), vin: z.string().nullable() }),
+  vehicle: quoteVehicleSchema,
   lines: z.array(quoteLineSchema),
   totals: z.object({
     partsCents: z.number(),
@@ -79,6 +89,7 @@ export const quoteSummarySchema = z.object({
   status: z.enum(['draft', 'accepted']),
   customer: z.string(),
   buildName: z.string().nullable(),
+  vehicle: quoteVehicleSchema,
   totalCents: z.number().int(),
   currency: z.string(),
   createdBy: z.string(),
@@ -86,3 +97,23 @@ export const quoteSummarySchema = z.object({
   reservedUntil: z.string().nullable(),
 })
 export type QuoteSummary = z.infer<typeof quoteSummarySchema>
+
+/** GET /api/quotes: a search over customer, job number, VIN, make, model and engine family, one page at a time. */
+export const quoteListQuerySchema = z.object({
+  q: z.string().trim().max(100, 'Keep the search under 100 characters.').default(''),
+  page: z.coerce.number({ error: 'Page is a number.' }).int('Page is a whole number.').min(1, 'Pages start at 1.').max(100_000).default(1),
+  pageSize: z.coerce
+    .number({ error: 'Page size is a number.' })
+    .int()
+    .min(1, 'Show at least one quote a page.')
+    .max(100, 'Show at most 100 quotes a page.')
+    .default(25),
+})
+export type QuoteListQuery = z.infer<typeof quoteListQuerySchema>
+export const quoteListSchema = z.object({
+  items: z.array(quoteSummarySchema),
+  total: z.number().int(),
+  page: z.number().int(),
+  pageSize: z.number().int(),
+})
+export type QuoteList = z.infer<typeof quoteListSchema>

@@ -115,7 +115,17 @@ export const availabilitySchema = z.object({
   bestCondition: stockConditionSchema.nullable(),
   minPriceCents: z.number().int().nullable(),
   maxPriceCents: z.number().int().nullable(),
+  /** The nearest site first (see nearestSite), then the others by name. */
   sites: z.array(z.string()),
+  /** The asker's home site when it has a unit, else the site with the most units (ties by name); null when none has one. */
+  nearestSite: z.string().nullable(),
 })
 export type Availability = z.infer<typeof availabilitySchema>
-export const NO_STOCK: Availability = { available: 0, bestCondition: null, minPriceCents: null, maxPriceCents: null, sites: [] }
+export const NO_STOCK: Availability = {
+  available: 0,
+  bestCondition: null,
+  minPriceCents: null,
+  maxPriceCents: null,
+  sites: [],
+  nearestSite: null,
+}

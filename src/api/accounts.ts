@@ -10,6 +10,8 @@ import {
 import { ensureCsrfToken as withToken, request, requestVoid } from './http'
 
 export const accountsApi = {
+  /** One's own home site (null for none): stock answers name it first. */
+  setHomeSite: (homeSiteId: number | null) => request('PUT', '/account/home-site', userSchema, { body: { homeSiteId } }),
   invite: (input: UserInviteInput) => request('POST', '/users/invite', userSchema, { body: input }),
   inviteAgain: (id: number) => request('POST', `/users/${id}/invite`, userSchema),
   async forgotPassword(email: string) {

@@ -7,8 +7,15 @@ export type PlannerSlots = Partial<Record<SlotId, string>>
 export type PlannerState = { slots: PlannerSlots; context: BuildContext }
 
 /** Context fields and the short names they have in the address. */
-const CONTEXT_KEYS = { targetPowerKw: 'power', fuelOctane: 'octane', chassisModelYear: 'year', vin: 'vin' } as const
-type NumberField = Exclude<keyof typeof CONTEXT_KEYS, 'vin'>
+const CONTEXT_KEYS = {
+  targetPowerKw: 'power',
+  fuelOctane: 'octane',
+  chassisModelYear: 'year',
+  vin: 'vin',
+  /** The vehicle application it was planned from (Plan from this vehicle), for the quote's make and model. */
+  vehicleId: 'vehicle',
+} as const
+type NumberField = Exclude<keyof typeof CONTEXT_KEYS, 'vin' | 'vehicleId'>
 
 /**
  * A build in progress lives in the address (`?block=TM-BL-1800&head=TM-HD-2000&power=110`),
@@ -25,6 +32,8 @@ export function plannerFromQuery(query: LocationQuery): PlannerState {
     const value = queryNumber(query[CONTEXT_KEYS[field]])
     if (value !== undefined) context[field] = value
   }
+  const vehicleId = queryNumber(query[CONTEXT_KEYS.vehicleId])
+  if (vehicleId !== undefined && Number.isInteger(vehicleId) && vehicleId > 0) context.vehicleId = vehicleId
   const vin = queryText(query[CONTEXT_KEYS.vin])
   if (vin) context.vin = vin
   return { slots, context }

@@ -1,6 +1,6 @@
 import { lineCents } from '@shared/quote-totals'
 import type { EvaluateRequest } from '@shared/schemas/build'
-import type { Quote, QuoteLine } from '@shared/schemas/quotes'
+import type { Quote, QuoteLine, QuoteVehicle } from '@shared/schemas/quotes'
 import { formatCount, formatDateTime, formatDuration, formatMoney, type FormatOptions } from './format'
 
 /** What a quote is made from: a saved build sheet, or the planner's build as it stands. */
@@ -10,9 +10,12 @@ export type QuoteSection = { title: string; lines: QuoteLine[] }
 
 const CONDITION: Record<string, string> = { new: 'new', remanufactured: 'remanufactured', used: 'used', core: 'core' }
 
-/** The job number printed on a quote: the year it was made and its number, so a customer can quote it back. */
-export function jobNumber(quote: Pick<Quote, 'id' | 'createdAt'>): string {
-  return `${new Date(quote.createdAt).getUTCFullYear()}-${String(quote.id).padStart(5, '0')}`
+export { jobNumber } from '@shared/quote-job-number'
+
+/** Make and model with the engine family, as a counter says the car ("Talmark Vell, TK20V engine"); empty when the quote has none. */
+export function vehicleName(vehicle: Pick<QuoteVehicle, 'make' | 'model' | 'engineFamily'>): string {
+  const name = [vehicle.make, vehicle.model].filter(Boolean).join(' ')
+  return name && vehicle.engineFamily ? `${name}, ${vehicle.engineFamily} engine` : name
 }
 
 /** What an accepted quote says about its units: held until a time, or that the hold ran out and they went back on the shelf. */

@@ -26,6 +26,7 @@ export function sheetState(saved: BuildSheet): PlannerState {
   if (saved.fuelOctane !== null) context.fuelOctane = saved.fuelOctane
   if (saved.chassisModelYear !== null) context.chassisModelYear = saved.chassisModelYear
   if (saved.vin) context.vin = saved.vin
+  if (saved.vehicleId !== null) context.vehicleId = saved.vehicleId
   return { slots, context }
 }
 
@@ -130,6 +131,7 @@ export const usePlannerStore = defineStore('planner', () => {
       fuelOctane: c.fuelOctane ?? null,
       chassisModelYear: c.chassisModelYear ?? null,
       vin: c.vin ?? null,
+      vehicleId: c.vehicleId ?? null,
       checklist: ticks.value,
     }
   }

@@ -39,6 +39,8 @@ describe.skipIf(!run)('counter: from the customer’s car to a head on the shelf
       .click()
     await page.waitForURL(/\/parts\/TM-BL-1800\?.*kind=head/)
     await expect.poll(() => page.locator('[data-part="TM-HD-1810"]').first().textContent(), within).toContain('in stock')
+    // Both demo units of this head are in the yard's lot B (data/demo/stock.json); the counter has no home site.
+    expect(await page.locator('[data-part="TM-HD-1810"]').first().textContent()).toContain('nearest: Hollin yard, lot B')
   })
 
   it('plans from the vehicle with its original parts and model year', async () => {
@@ -47,6 +49,17 @@ describe.skipIf(!run)('counter: from the customer’s car to a head on the shelf
     await page.waitForURL(/\/planner\?/)
     expect(page.url()).toContain('block=TM-BL-1800')
     expect(page.url()).toContain('year=1990')
+    expect(page.url()).toMatch(/vehicle=\d+/)
+  })
+
+  it('quotes the job planned from the vehicle with its make, model and engine family', async () => {
+    const make = page.getByRole('toolbar', { name: 'Build actions' }).getByRole('button', { name: 'Make a quote' })
+    await expect.poll(() => make.isEnabled(), within).toBe(true)
+    await make.click()
+    await page.getByRole('button', { name: 'Make the quote' }).click()
+    await page.waitForURL(/\/quotes\/\d+$/)
+    await expect.poll(() => page.locator('.quote-header .vehicle-name').textContent(), within).toBe('Talmark Tarn, TK18 engine')
+    await saveScreenshot(page, 'quote-vehicle')
   })
 
   it('decodes a VIN with a wrong check digit and says so', async () => {

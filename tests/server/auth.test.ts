@@ -26,7 +26,7 @@ describe('POST /api/auth/login', () => {
       .send({ email: `${role}@fitwright.test`, password: DEMO_PASSWORD })
     expect(response.status).toBe(200)
     expect(response.body).toMatchObject({ email: `${role}@fitwright.test`, role })
-    expect(Object.keys(response.body).sort()).toEqual(['disabled', 'email', 'id', 'invitePending', 'name', 'role'])
+    expect(Object.keys(response.body).sort()).toEqual(['disabled', 'email', 'homeSiteId', 'id', 'invitePending', 'name', 'role'])
     const sessionCookie = ([] as string[]).concat(response.headers['set-cookie'] ?? []).find((c) => c.startsWith('fitwright.sid='))
     expect(sessionCookie).toMatch(/HttpOnly/)
   })

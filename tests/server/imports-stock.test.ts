@@ -2,6 +2,7 @@ import Papa from 'papaparse'
 import { afterEach, beforeEach, describe, expect, it } from 'vitest'
 import { catalogueSnapshot, uploadCsv } from '../helpers/imports'
 import { createTestApp, type TestApp } from '../helpers/test-app'
+import { jobNumber } from '../../shared/quote-job-number'
 
 let t: TestApp
 let editor: Awaited<ReturnType<TestApp['signIn']>>
@@ -208,5 +209,81 @@ describe('POST /api/imports/:id/revert, stock', () => {
     expect(refused.body.error.details).toEqual([
       { path: `batch ${stock.batchId}`, message: expect.stringContaining('puts parts this batch added on the shelf') },
     ])
+  })
+})
+
+describe('POST /api/imports/:id/revert, stock a quote names', () => {
+  type Quote = { id: number; createdAt: string; lines: { partNumber?: string; stockItemId?: number }[] }
+  const HEAD_JOB = { slots: { block: 'TM-BL-1800', head: 'TM-HD-2000' } }
+  const stockOnly = async () => catalogueSnapshot(t.dataSource, ['stock_item'])
+
+  async function importHead(): Promise<{ batchId: number; unitId: number }> {
+    const csv = 'part_number,site,condition,price,label\nTM-HD-2000,Northgate counter,new,455,NG-000200\n'
+    const { batchId } = (await uploadCsv(editor, csv, { type: 'stock', mode: 'commit' })).body as { batchId: number }
+    const unit = (await editor.get('/api/stock/label/NG-000200')).body as { id: number }
+    return { batchId, unitId: unit.id }
+  }
+
+  async function quoteFor(customer: string): Promise<Quote> {
+    const tech = await t.signIn('tech')
+    const response = await tech.post('/api/quotes').send({ ...HEAD_JOB, customer })
+    expect(response.status, JSON.stringify(response.body)).toBe(201)
+    return response.body as Quote
+  }
+
+  const headUnitOf = (quote: Quote) => quote.lines.find((line) => line.partNumber === 'TM-HD-2000')?.stockItemId
+
+  it('is refused with a 409 naming a draft quote that takes a unit the batch added, and writes nothing', async () => {
+    const { batchId, unitId } = await importHead()
+    const quote = await quoteFor('Walk-in, red estate')
+    // The imported new head is the cheaper of the two new ones, so the quote takes it.
+    expect(headUnitOf(quote)).toBe(unitId)
+    const before = await stockOnly()
+
+    const refused = await editor.post(`/api/imports/${batchId}/revert`)
+
+    expect(refused.status).toBe(409)
+    expect(refused.body.error.message).toContain(`draft quote ${jobNumber(quote)} for Walk-in, red estate`)
+    expect(refused.body.error.details).toEqual([{ path: `quote ${jobNumber(quote)}`, message: expect.stringContaining('TM-HD-2000') }])
+    expect(await stockOnly()).toEqual(before)
+    expect((await editor.get('/api/imports')).body.find((batch: { id: number }) => batch.id === batchId)).toMatchObject({
+      status: 'committed',
+    })
+  })
+
+  it('names the quote, not the counter, when the quote was accepted and holds the unit', async () => {
+    const { batchId } = await importHead()
+    const quote = await quoteFor('')
+    const tech = await t.signIn('tech')
+    expect((await tech.post(`/api/quotes/${quote.id}/accept`)).status).toBe(200)
+
+    const refused = await editor.post(`/api/imports/${batchId}/revert`)
+
+    expect(refused.status).toBe(409)
+    expect(refused.body.error.message).toContain(`accepted quote ${jobNumber(quote)} names a unit of TM-HD-2000`)
+    expect((await editor.get('/api/stock/label/NG-000200')).body).toMatchObject({ status: 'reserved' })
+  })
+
+  it('is refused when the batch changed a unit a quote made before it names, and the change stays', async () => {
+    const quote = await quoteFor('Before the price change')
+    const demoUnit = headUnitOf(quote)!
+    const csv = 'part_number,site,condition,price,label\nTM-HD-2000,Northgate counter,new,499,NG-000112\n'
+    const { batchId } = (await uploadCsv(editor, csv, { type: 'stock', mode: 'commit' })).body as { batchId: number }
+    expect((await editor.get(`/api/stock/${demoUnit}`)).body).toMatchObject({ label: 'NG-000112', priceCents: 49900 })
+
+    const refused = await editor.post(`/api/imports/${batchId}/revert`)
+
+    expect(refused.status).toBe(409)
+    expect(refused.body.error.message).toContain(jobNumber(quote))
+    expect((await editor.get(`/api/stock/${demoUnit}`)).body).toMatchObject({ priceCents: 49900 })
+  })
+
+  it('goes ahead when the quotes name other units only', async () => {
+    const quote = await quoteFor('Took the demo head')
+    const { batchId } = await importHead()
+    expect(headUnitOf(quote)).not.toBeUndefined()
+    const reverted = await editor.post(`/api/imports/${batchId}/revert`)
+    expect(reverted.status, JSON.stringify(reverted.body)).toBe(200)
+    expect((await editor.get('/api/stock/label/NG-000200')).status).toBe(404)
   })
 })

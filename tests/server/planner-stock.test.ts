@@ -43,6 +43,7 @@ describe('stock in the planner', () => {
       minPriceCents: 2500,
       maxPriceCents: 17500,
       sites: ['Hollin yard, lot B'],
+      nearestSite: 'Hollin yard, lot B',
     })
     expect(byNumber.get('TM-HD-1800')).toMatchObject({ available: 1, bestCondition: 'used', minPriceCents: 12500, maxPriceCents: 12500 })
     const withoutStock = candidates.filter(

@@ -83,7 +83,7 @@ describe('quotes for the whole job', () => {
     const counter = await t.signIn('counter')
     const list = await counter.get('/api/quotes')
     expect(list.status).toBe(200)
-    const mine = (list.body as { id: number }[]).filter((q) => q.id === older.id || q.id === newer.id)
+    const mine = (list.body as { items: { id: number }[] }).items.filter((q) => q.id === older.id || q.id === newer.id)
     expect(mine).toEqual([
       expect.objectContaining({
         id: newer.id,

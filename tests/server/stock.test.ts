@@ -44,6 +44,7 @@ describe('stock on the shelf', () => {
       minPriceCents: 2500,
       maxPriceCents: 17500,
       sites: ['Hollin yard, lot B'],
+      nearestSite: 'Hollin yard, lot B',
     })
     expect(byNumber.get('TM-HD-2000')).toMatchObject({ available: 1, bestCondition: 'new', sites: ['Northgate counter'] })
     const blocks = await fits('TM-HD-2000', '&kind=block')

@@ -16,6 +16,7 @@ function sheet(id: number, name: string, slots: Record<string, string>, notes = 
     fuelOctane: null,
     chassisModelYear: null,
     vin: null,
+    vehicleId: null,
     owner: { id: 1, name: 'A. Tech' },
     createdAt: '2026-01-01T00:00:00.000Z',
     updatedAt: '2026-01-01T00:00:00.000Z',

@@ -21,6 +21,14 @@ describe('planner address', () => {
     expect(plannerToQuery(state)).toEqual(query)
   })
 
+  it('keeps the vehicle application it was planned from in the address, for the quote', () => {
+    const query = { block: 'ZX-BL-1', year: '1993', vehicle: '4' }
+    const state = plannerFromQuery(query)
+    expect(state.context).toEqual({ chassisModelYear: 1993, vehicleId: 4 })
+    expect(plannerToQuery(state)).toEqual(query)
+    expect(evaluateBody(state)).toMatchObject({ vehicleId: 4 })
+  })
+
   it('writes slots in template order whatever order they were chosen in, so a build has one address', () => {
     const query = plannerToQuery({ slots: { injector: 'ZX-IN-1', head: 'ZX-HD-2', block: 'ZX-BL-1' }, context: {} })
     expect(Object.keys(query)).toEqual(['block', 'head', 'injector'])
@@ -31,6 +39,8 @@ describe('planner address', () => {
     ['a power that is not a number', { power: 'lots' }, { slots: {}, context: {} }],
     ['blank values', { head: '  ', vin: '' }, { slots: {}, context: {} }],
     ['a repeated key (first one wins)', { head: ['ZX-HD-2', 'ZX-HD-3'] }, { slots: { head: 'ZX-HD-2' }, context: {} }],
+    ['a vehicle id that is not a whole positive number', { vehicle: '2.5' }, { slots: {}, context: {} }],
+    ['a negative vehicle id', { vehicle: '-3' }, { slots: {}, context: {} }],
   ])('ignores %s', (_what, query, expected) => {
     expect(plannerFromQuery(query)).toEqual(expected)
   })

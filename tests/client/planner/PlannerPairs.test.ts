@@ -41,7 +41,15 @@ describe('PlannerPairs', () => {
     // A counter may not read the reports: the count is plain text.
     expect(counter.findAllComponents(RouterLinkStub)).toHaveLength(0)
 
-    useSessionStore().user = { id: 4, email: 'tech@fitwright.test', name: 'Tech', role: 'tech', disabled: false, invitePending: false }
+    useSessionStore().user = {
+      id: 4,
+      email: 'tech@fitwright.test',
+      name: 'Tech',
+      role: 'tech',
+      disabled: false,
+      invitePending: false,
+      homeSiteId: null,
+    }
     const tech = mount(PlannerPairs, { props: { pairs: [pair] }, global: { stubs: { RouterLink: RouterLinkStub } } })
     const link = tech.getComponent(RouterLinkStub)
     expect(link.text()).toContain('confirmed by 2 field reports')

@@ -84,7 +84,14 @@ describe('PlannerSlotPicker', () => {
   })
 
   it('shows on a suggestion what is on the shelf, and nothing of the kind on a part only found by search', async () => {
-    const stock = { available: 2, bestCondition: 'used' as const, minPriceCents: 2500, maxPriceCents: 17500, sites: ['Yard B'] }
+    const stock = {
+      available: 2,
+      bestCondition: 'used' as const,
+      minPriceCents: 2500,
+      maxPriceCents: 17500,
+      sites: ['Yard B', 'Lot A'],
+      nearestSite: 'Yard B',
+    }
     const server = heldServer({ ...makeCandidate(fitting), stock })
     const wrapper = mount(PlannerSlotPicker, {
       props: { buildSlot: headSlot, build: () => ({ slots: { block: 'TM-BL-1810' }, context: {} }) },
@@ -96,7 +103,9 @@ describe('PlannerSlotPicker', () => {
     await server.answerAll()
 
     const options = [...document.body.querySelectorAll('[role="option"]')].map((option) => option.textContent ?? '')
-    expect(options.find((text) => text.includes('TM-HD-2000'))).toMatch(/2 in stock · best used · 25\.00–175\.00\s*Yard B/)
+    expect(options.find((text) => text.includes('TM-HD-2000'))).toMatch(
+      /2 in stock · best used · 25\.00–175\.00\s*nearest: Yard B · also Lot A/,
+    )
     expect(options.find((text) => text.includes('TM-HD-1800'))).not.toContain('stock')
   })
 })

@@ -15,6 +15,7 @@ function sheet(overrides: Partial<BuildSheet> = {}): BuildSheet {
     fuelOctane: null,
     chassisModelYear: null,
     vin: null,
+    vehicleId: null,
     notes: '',
     checklist: {},
     verdict: null,
@@ -53,6 +54,7 @@ describe('planner store', () => {
       fuelOctane: null,
       chassisModelYear: null,
       vin: null,
+      vehicleId: null,
       checklist: {},
     })
     expect(planner.sheetInput(state, 'Copy', 'n')).toEqual({

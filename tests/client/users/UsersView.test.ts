@@ -119,7 +119,7 @@ describe('UsersView, inviting a user', () => {
     expect(post?.body).toEqual({ email: 'new.tech@fitwright.test', name: 'New Tech', role: 'counter' })
     expect(document.body.textContent).toContain('Invitation sent to New Tech')
     expect((wrapper.get('#new-user-email').element as HTMLInputElement).value).toBe('')
-    expect(calls.filter((call) => call.method === 'GET')).toHaveLength(2)
+    expect(calls.filter((call) => call.method === 'GET' && call.path === '/api/users')).toHaveLength(2)
     wrapper.unmount()
   })
 })
@@ -245,6 +245,71 @@ describe('UsersView, changing a role', () => {
 
     expect(patches).toEqual([])
     expect(pageButton('Disable Tech Person')).toBeDefined()
+    wrapper.unmount()
+  })
+})
+
+describe('UsersView, setting a home site', () => {
+  const tech = { id: 2, email: 'tech@fitwright.test', name: 'Tech Person', role: 'tech', disabled: false, homeSiteId: null }
+  const sites = [{ id: 3, name: 'Lot B', address: '' }]
+
+  /** Answers the sites, the stored users, and PATCH with `onUpdate`, storing the change when it succeeds. */
+  function stubUsers(onUpdate: () => Response) {
+    let stored = [admin, tech]
+    const patches: unknown[] = []
+    vi.stubGlobal('fetch', async (url: string, init: RequestInit) => {
+      const json = (body: unknown) => new Response(JSON.stringify(body), { status: 200, headers: { 'Content-Type': 'application/json' } })
+      if (url.includes('/api/sites')) return json(sites)
+      if (init.method === 'PATCH') {
+        const body = JSON.parse(String(init.body)) as { homeSiteId?: number | null }
+        patches.push(body)
+        const answer = onUpdate()
+        if (answer.ok) stored = stored.map((user) => (url.endsWith(`/${user.id}`) ? { ...user, ...body } : user))
+        return answer
+      }
+      return json(stored)
+    })
+    return patches
+  }
+
+  async function mountTable() {
+    const Host = defineComponent({ render: () => [h(Toast), h(UsersView)] })
+    const wrapper = mount(Host, { global: { plugins: [PrimeVue, ToastService, ConfirmationService] }, attachTo: document.body })
+    await flushPromises()
+    return wrapper
+  }
+
+  const homeSelect = (wrapper: Awaited<ReturnType<typeof mountTable>>, name: string) =>
+    wrapper.findAllComponents(Select).find((select) => select.props('ariaLabel') === `Home site of ${name}`)!
+
+  it('sends the site chosen for a user, says so, and shows it from the list loaded again', async () => {
+    const patches = stubUsers(
+      () => new Response(JSON.stringify({ ...tech, homeSiteId: 3 }), { status: 200, headers: { 'Content-Type': 'application/json' } }),
+    )
+    const wrapper = await mountTable()
+    expect(homeSelect(wrapper, 'Tech Person').props('options')).toEqual([
+      { value: null, label: 'None' },
+      { value: 3, label: 'Lot B' },
+    ])
+
+    homeSelect(wrapper, 'Tech Person').vm.$emit('update:modelValue', 3)
+    await flushPromises()
+
+    expect(patches).toEqual([{ homeSiteId: 3 }])
+    expect(document.body.textContent).toContain('Home site of Tech Person: Lot B')
+    expect(homeSelect(wrapper, 'Tech Person').props('modelValue')).toBe(3)
+    wrapper.unmount()
+  })
+
+  it('says a refused change in the toast and keeps the stored site', async () => {
+    stubUsers(() => errorAnswer(400, 'bad_request', 'No site 3.'))
+    const wrapper = await mountTable()
+
+    homeSelect(wrapper, 'Tech Person').vm.$emit('update:modelValue', 3)
+    await flushPromises()
+
+    expect(document.body.textContent).toContain('Home site not changed')
+    expect(homeSelect(wrapper, 'Tech Person').props('modelValue')).toBeNull()
     wrapper.unmount()
   })
 })
