@@ -1,6 +1,6 @@
 import type Database from 'better-sqlite3'
 import type { LinkSource, Relation, ReviewStatus } from '../../shared/schemas/fitment'
-import { unknownModification } from '../catalogue/modification.service'
+import { unknownModification } from '../catalogue/unknown-modification'
 
 /*
  * Raw, synchronous writes of links, identities and the modifications they
