@@ -3,9 +3,9 @@ import path from 'node:path'
 import { pathToFileURL } from 'node:url'
 import { Worker } from 'node:worker_threads'
 import { AppError } from '../../errors/app-error'
-import { receivedError, type JobReply, type JobRequest } from './worker-messages'
+import { receivedError, type JobReply, type JobRequest, type JobWork } from './worker-messages'
 
-type Job = JobRequest extends infer R ? (R extends JobRequest ? Omit<R, 'id'> : never) : never
+type Job = JobWork & { dbPath: string }
 type Progress = (reply: Extract<JobReply, { type: 'progress' }>) => void
 type Running = { id: number; resolve: (value: unknown) => void; reject: (error: Error) => void; onProgress?: Progress }
 
@@ -36,22 +36,20 @@ function spawnWorker(workerData: Record<string, unknown>): Worker {
 }
 
 /**
- * The one import worker of this server: started at the first job, jobs run
- * one after another, progress passed on as it comes. A worker that dies fails
- * its job with a 500 (its open transaction is rolled back with its connection)
- * and a fresh one is started.
+ * The one import worker thread of this process, shared by every app in it
+ * (tests build many): started at the first job, jobs run one after another,
+ * progress passed on as it comes. A worker that dies fails its job with a 500
+ * (its open transaction is rolled back with its connection) and a fresh one
+ * is started.
  */
-export class ImportWorker {
+class WorkerThread {
   private worker?: Worker
   private running?: Running
   private line: Promise<unknown> = Promise.resolve()
   private nextId = 1
-  private closed = false
-
-  constructor(private readonly dbPath: string) {}
 
   private start(): Worker {
-    const worker = spawnWorker({ dbPath: this.dbPath, busyTimeoutMs: BUSY_TIMEOUT_MS })
+    const worker = spawnWorker({ busyTimeoutMs: BUSY_TIMEOUT_MS })
     worker.unref()
     worker.on('message', (reply: JobReply) => this.receive(reply))
     worker.on('error', (error) => console.error('Import worker failed:', error))
@@ -59,12 +57,8 @@ export class ImportWorker {
       if (this.worker === worker) this.worker = undefined
       const running = this.running
       this.running = undefined
-      running?.reject(
-        this.closed
-          ? new AppError(503, 'shutting_down', 'The server is shutting down; the import was not written.')
-          : new AppError(500, 'import_failed', 'The import stopped unexpectedly; nothing was written. Try again.'),
-      )
-      if (!this.closed) this.worker = this.start()
+      running?.reject(new AppError(500, 'import_failed', 'The import stopped unexpectedly; nothing was written. Try again.'))
+      if (running) this.worker = this.start()
     })
     return worker
   }
@@ -80,7 +74,6 @@ export class ImportWorker {
   }
 
   private send(job: Job, onProgress?: Progress): Promise<unknown> {
-    if (this.closed) return Promise.reject(new AppError(503, 'shutting_down', 'The server is shutting down; try the import again later.'))
     const worker = (this.worker ??= this.start())
     const id = this.nextId++
     return new Promise((resolve, reject) => {
@@ -98,15 +91,34 @@ export class ImportWorker {
     return result
   }
 
-  /** Ends the worker at once, as a crash would: its job fails and a fresh worker takes the next. */
+  /** Ends the thread at once, as a crash would. */
   async terminate(): Promise<void> {
     await this.worker?.terminate()
   }
+}
 
-  /** Ends the worker for shutdown; a job still running fails and is not written. */
+const thread = new WorkerThread()
+
+/** One database's jobs in the import worker. */
+export class ImportWorker {
+  private closed = false
+
+  constructor(private readonly dbPath: string) {}
+
+  run(job: JobWork, onProgress?: Progress): Promise<unknown> {
+    if (this.closed) return Promise.reject(new AppError(503, 'shutting_down', 'The server is shutting down; try the import again later.'))
+    return thread.run({ ...job, dbPath: this.dbPath }, onProgress)
+  }
+
+  /** Ends the worker thread at once, as a crash would: its job fails and a fresh worker takes the next. */
+  terminate(): Promise<void> {
+    return thread.terminate()
+  }
+
+  /** Closes this database's connection in the worker, after the jobs already waiting (shutdown). */
   async close(): Promise<void> {
+    if (this.closed) return
     this.closed = true
-    await this.worker?.terminate()
-    this.worker = undefined
+    await thread.run({ kind: 'close', dbPath: this.dbPath }).catch(() => undefined)
   }
 }

@@ -3,9 +3,12 @@ import type { ImportPhase } from '../../../shared/schemas/imports'
 import { AppError } from '../../errors/app-error'
 import type { ImportJobInput } from '../import-job'
 
-/** A job for the import worker. */
-export type JobRequest =
-  { id: number; kind: 'import'; input: ImportJobInput; maxRows: number } | { id: number; kind: 'revert'; batchId: number; userName: string }
+/** The work of one job, as the main thread asks for it. */
+export type JobWork =
+  { kind: 'import'; input: ImportJobInput; maxRows: number } | { kind: 'revert'; batchId: number; userName: string } | { kind: 'close' }
+
+/** A job for the import worker: the work, on which database file. */
+export type JobRequest = JobWork & { id: number; dbPath: string }
 
 /** An error as it crosses from the worker: an AppError keeps its status, code and details. */
 export type SentError =
