@@ -21,6 +21,8 @@ function userIdOf(data: session.SessionData): number | null {
 export class DatabaseSessionStore extends session.Store {
   private readonly now: () => number
   private writes = 0
+  /** The latest expiry of each session whose touch is still being written. */
+  private readonly touches = new Map<string, number>()
 
   constructor(
     private readonly sessions: SessionRepository,
@@ -73,8 +75,29 @@ export class DatabaseSessionStore extends session.Store {
     )
   }
 
+  /**
+   * Answers at once and writes the later expiry behind the answer: express-session
+   * holds every signed-in response until touch is done, and while the import
+   * worker holds the write lock a write waits for it. Touches of one session
+   * waiting meanwhile collapse into the latest.
+   */
   override touch(sid: string, _data: session.SessionData, done?: (error?: unknown) => void): void {
-    this.settle(this.sessions.touch(sid, this.now() + this.lifetimes.idleMs), done)
+    const waiting = this.touches.has(sid)
+    this.touches.set(sid, this.now() + this.lifetimes.idleMs)
+    done?.()
+    if (!waiting) void this.writeTouches(sid)
+  }
+
+  private async writeTouches(sid: string) {
+    try {
+      for (let expiresAt = this.touches.get(sid); expiresAt !== undefined; expiresAt = this.touches.get(sid)) {
+        await this.sessions.touch(sid, expiresAt)
+        if (this.touches.get(sid) === expiresAt) this.touches.delete(sid)
+      }
+    } catch (error) {
+      this.touches.delete(sid)
+      console.error('Extending a session failed:', error)
+    }
   }
 
   override destroy(sid: string, done?: (error?: unknown) => void): void {

@@ -1,4 +1,3 @@
-import request from 'supertest'
 import { afterEach, describe, expect, it } from 'vitest'
 import { importStreamLineSchema, type ImportStreamLine } from '../../shared/schemas/imports'
 import { WorkerRunner } from '../../server/imports/worker/import-runner'
@@ -53,21 +52,21 @@ const count = async (table: string) => ((await t.dataSource.query(`SELECT COUNT(
 
 describe('imports in the import worker', () => {
   it(
-    'answers /api/health while a large commit is being written, before the write ends',
+    'answers a signed-in /api/health while a large commit is being written, before the write ends',
     async () => {
       const editor = await editorOn()
+      // Signed in, so the answer also waits for its session's touch (a write) as every signed-in answer does.
+      const counter = await t.signIn('counter')
       const events: string[] = []
       let health: Promise<void> | undefined
       await streamedCommit(editor, largePartsFile('TW-HL'), (line) => {
         if (line.type === 'progress' && line.phase === 'write') {
           // Records still to write: the transaction is open.
           if (line.done < line.total) events.push('writing')
-          health ??= request(t.app)
-            .get('/api/health')
-            .then((response) => {
-              expect(response.status).toBe(200)
-              events.push('health answered')
-            })
+          health ??= counter.get('/api/health').then((response) => {
+            expect(response.status).toBe(200)
+            events.push('health answered')
+          })
         }
         if (line.type === 'result') events.push(`result ${line.status}`)
       })
