@@ -9,7 +9,7 @@ import { measureConcurrentFits } from './scale/concurrency'
 import { identityRows, linkRows, writeCatalogueFiles } from './scale/csv-files'
 import { measureEdits } from './scale/edits'
 import { signIn, type Client } from './scale/http'
-import { measureHealthDuringCommit, measureSmallImports } from './scale/import-writes'
+import { measureReadsDuringCommit, measureSmallImports } from './scale/import-writes'
 import { importLines, memoryLine } from './scale/load-lines'
 import { loadCatalogue } from './scale/load'
 import { scaleOptions } from './scale/options'
@@ -55,7 +55,7 @@ function rawRates(dbPath: string, copyPath: string, catalogue: Catalogue): { lin
 export const scaleBenchmark: Benchmark = {
   name: 'scale',
   description:
-    'the goals table on an invented catalogue loaded through the import API, each answer beside a bare baseline (--links, --parts, --requests, --budget)',
+    'the goals table on an invented catalogue loaded through the import API, each answer beside a bare baseline (--links, --parts, --commit, --requests, --budget)',
   async run(args) {
     const options = scaleOptions(args)
     const dir = mkdtempSync(path.join(tmpdir(), 'fitwright-scale-'))
@@ -102,7 +102,9 @@ export const scaleBenchmark: Benchmark = {
         lines.push(...(await measureConcurrentFits(counters, bare, picks.typical, options.pace)))
         lines.push(...(await measureEdits(editor, counter, bare, picks.typical)))
         lines.push(await measureSmallImports(importer, files.small))
-        lines.push(...(await measureHealthDuringCommit(importer, counter, files.commit, options.commitRows, options.pace)))
+        lines.push(
+          ...(await measureReadsDuringCommit(importer, counter, bare, picks.typical, files.commit, options.commitRows, options.pace)),
+        )
         lines.push(
           ...importLines(load, rawRates(app.dbPath, path.join(dir, 'raw.sqlite'), catalogue)),
           memoryLine(first.rssAfter, first.rssBefore),

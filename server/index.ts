@@ -39,6 +39,7 @@ function shutdown() {
     void services.accounts
       .resetsQueued()
       .then(() => services.outbox.stop())
+      .then(() => services.imports.close())
       .then(() => dataSource.destroy())
       .finally(() => process.exit(0))
   })

@@ -37,6 +37,7 @@ export async function startAppUnderTest(dir: string, env: Record<string, string>
     async close() {
       server.closeAllConnections()
       await new Promise<void>((resolve) => server.close(() => resolve()))
+      await services.imports.close()
       await dataSource.destroy()
     },
   }

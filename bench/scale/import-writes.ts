@@ -2,7 +2,9 @@ import { setTimeout as sleep } from 'node:timers/promises'
 import type { Client } from './http'
 import { commitImport } from './load'
 import { figureLine, latencyLine, type Line } from './report'
-import { failureReason, measure, type Pace, type Sample } from './stats'
+import type { BareQueries } from './bare-queries'
+import type { PickedPart } from './picks'
+import { failureReason, measureSync, type Pace, type Sample } from './stats'
 
 /** A 100-row links file committed into the loaded catalogue, end to end (upload to answer), one file per request. */
 export async function measureSmallImports(importer: Client, files: string[]): Promise<Line> {
@@ -20,19 +22,49 @@ export async function measureSmallImports(importer: Client, files: string[]): Pr
   return latencyLine('links import, 100 rows, end to end', sample, null, { p95: 1000 })
 }
 
+type Reads = { health: Sample; fits: Sample }
+
+/** Health and what fits (a typical part, in turn) asked alternately, 10 ms apart, until `until()` says stop. */
+async function alternate(counter: Client, fitsRoute: (i: number) => string, until: () => boolean): Promise<Reads> {
+  const reads: Reads = { health: { times: [] }, fits: { times: [] } }
+  const timed = async (sample: Sample, route: string) => {
+    const t = performance.now()
+    try {
+      await counter.get(route)
+      sample.times.push(performance.now() - t)
+    } catch (error) {
+      sample.failure ??= failureReason(error)
+    }
+  }
+  for (let i = 0; !until(); i++) {
+    await timed(reads.health, '/api/health')
+    await timed(reads.fits, fitsRoute(i))
+    if (reads.health.failure && reads.fits.failure) break
+    await sleep(10)
+  }
+  return reads
+}
+
 /**
- * `/api/health` asked every 10 ms while a large links commit runs, against
- * the same request on the idle server just before.
+ * `/api/health` and what fits asked alternately while a large links commit
+ * runs, beside the same requests on the idle server just before and the bare
+ * indexed query of what fits.
  */
-export async function measureHealthDuringCommit(
+export async function measureReadsDuringCommit(
   importer: Client,
   counter: Client,
+  bare: BareQueries,
+  typical: PickedPart[],
   file: string,
   rows: number,
   pace: Pace,
 ): Promise<Line[]> {
-  const idle = await measure(() => counter.get('/api/health'), pace)
-  const during: Sample = { times: [] }
+  const pick = (i: number) => typical[i % typical.length]!
+  const fitsRoute = (i: number) => `/api/parts/${encodeURIComponent(pick(i).number)}/fits`
+  let spent = 0
+  const idleStarted = performance.now()
+  const idle = await alternate(counter, fitsRoute, () => ++spent > pace.requests || performance.now() - idleStarted > pace.budgetMs)
+  const bareFits = measureSync((i) => bare.linksBothWays(pick(i).id), pace)
   let done = false
   const started = performance.now()
   const commit = commitImport(importer, 'links', file)
@@ -43,31 +75,26 @@ export async function measureHealthDuringCommit(
     .finally(() => {
       done = true
     })
-  while (!done) {
-    const t = performance.now()
-    try {
-      await counter.get('/api/health')
-      during.times.push(performance.now() - t)
-    } catch (error) {
-      during.failure = failureReason(error)
-      break
-    }
-    await sleep(10)
-  }
+  const during = await alternate(counter, fitsRoute, () => done)
   const result = await commit
-  const label = `/api/health during a ${rows.toLocaleString('en')}-row links commit`
-  const health = latencyLine(label, during, idle, { p99: 100 })
+  const size = `${rows.toLocaleString('en')}-row links commit`
+  const lines = [
+    latencyLine('/api/health, idle server', idle.health, null, {}),
+    latencyLine(`/api/health during a ${size}`, during.health, idle.health, { p99: 100 }),
+    latencyLine('what fits, typical part, idle server', idle.fits, bareFits, {}),
+    latencyLine(`what fits, typical part, during a ${size}`, during.fits, bareFits, { p99: 100 }),
+  ]
   if ('error' in result)
     return [
-      health,
+      ...lines,
       figureLine(`links commit of ${rows.toLocaleString('en')} rows under reads`, `failed: ${result.error}`, '', '', '', false),
     ]
   const rate = Math.round(result.created / (result.ms / 1000))
   return [
-    health,
+    ...lines,
     figureLine(
       `links commit of ${rows.toLocaleString('en')} rows under reads`,
-      `${rate.toLocaleString('en')} rows/s`,
+      `${rate.toLocaleString('en')} rows/s, ${Math.round(result.ms).toLocaleString('en')} ms`,
       '',
       '',
       '',

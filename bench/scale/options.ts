@@ -10,20 +10,26 @@ const whole = (name: string, value: string | undefined, fallback: number): numbe
   return number
 }
 
-/** `--links N` (100,000), `--parts N` (links / 10), `--requests N` per answer (200), `--budget S` seconds per answer (15). */
+/** `--links N` (100,000), `--parts N` (links / 10), `--commit N` rows (links / 4, at most 250,000), `--requests N` per answer (200), `--budget S` seconds per answer (15). */
 export function scaleOptions(args: string[]): ScaleOptions {
   const { values } = parseArgs({
     args,
     allowPositionals: true,
-    options: { links: { type: 'string' }, parts: { type: 'string' }, requests: { type: 'string' }, budget: { type: 'string' } },
+    options: {
+      links: { type: 'string' },
+      parts: { type: 'string' },
+      commit: { type: 'string' },
+      requests: { type: 'string' },
+      budget: { type: 'string' },
+    },
   })
   const links = whole('links', values.links, 100_000)
   const parts = whole('parts', values.parts, Math.max(100, Math.round(links / 10)))
   return {
     links,
     parts,
-    // The commit /api/health is measured during: 250,000 rows at full size, a quarter of the links below it.
-    commitRows: Math.min(250_000, Math.round(links / 4)),
+    // The commit reads are measured during: 250,000 rows at full size, a quarter of the links below it, unless --commit says.
+    commitRows: whole('commit', values.commit, Math.min(250_000, Math.round(links / 4))),
     pace: { requests: whole('requests', values.requests, 200), warmup: 3, budgetMs: whole('budget', values.budget, 15) * 1000 },
   }
 }

@@ -31,6 +31,8 @@ export class DatabaseSessionStore extends session.Store {
   private writes = 0
   /** The idle end last read or written per session id (ends only ever move later, so a stale one is safe). */
   private readonly knownEnds = new Map<string, number>()
+  /** The latest expiry of each session whose touch is still being written. */
+  private readonly touches = new Map<string, number>()
 
   constructor(
     private readonly sessions: SessionRepository,
@@ -91,6 +93,12 @@ export class DatabaseSessionStore extends session.Store {
     )
   }
 
+  /**
+   * Answers at once and writes the later expiry behind the answer: express-session
+   * holds every signed-in response until touch is done, and while the import
+   * worker holds the write lock a write waits for it. Touches of one session
+   * waiting meanwhile collapse into the latest.
+   */
   override touch(sid: string, _data: session.SessionData, done?: (error?: unknown) => void): void {
     const expiresAt = this.now() + this.lifetimes.idleMs
     const known = this.knownEnds.get(sid)
@@ -99,7 +107,23 @@ export class DatabaseSessionStore extends session.Store {
       return
     }
     this.remember(sid, expiresAt)
-    this.settle(this.sessions.touch(sid, expiresAt), done)
+    const waiting = this.touches.has(sid)
+    this.touches.set(sid, expiresAt)
+    done?.()
+    if (!waiting) void this.writeTouches(sid)
+  }
+
+  private async writeTouches(sid: string) {
+    try {
+      for (let expiresAt = this.touches.get(sid); expiresAt !== undefined; expiresAt = this.touches.get(sid)) {
+        await this.sessions.touch(sid, expiresAt)
+        if (this.touches.get(sid) === expiresAt) this.touches.delete(sid)
+      }
+    } catch (error) {
+      this.touches.delete(sid)
+      this.knownEnds.delete(sid)
+      console.error('Extending a session failed:', error)
+    }
   }
 
   override destroy(sid: string, done?: (error?: unknown) => void): void {

@@ -5,6 +5,7 @@ import { In } from 'typeorm'
 import type { Modification } from '../../shared/schemas/fitment'
 import { ModificationEntity } from './modification.entity'
 import type { ModificationSpec } from '../reasoning/rule-file.schema'
+import { unknownModification } from './unknown-modification'
 
 export function toModification(entity: ModificationEntity): Modification {
   return {
@@ -18,22 +19,6 @@ export function toModification(entity: ModificationEntity): Modification {
     timeMinutes: entity.timeMinutes,
     cautions: entity.cautions,
     status: entity.status,
-  }
-}
-
-/** Stand-in for a name no catalogue entry has yet (an import may name one before an editor writes it up). */
-export function unknownModification(name: string): Modification {
-  return {
-    name,
-    title: name,
-    summary: 'Not yet described by an editor.',
-    steps: [],
-    extraParts: [],
-    consumables: [],
-    skillLevel: 'skilled',
-    timeMinutes: null,
-    cautions: [],
-    status: 'proposed',
   }
 }
 

@@ -1,6 +1,6 @@
 import type BetterSqlite3 from 'better-sqlite3'
 import type { LinkSource, Relation, ReviewStatus } from '../../shared/schemas/fitment'
-import { unknownModification } from '../catalogue/modification.service'
+import { unknownModification } from '../catalogue/unknown-modification'
 import type { Database } from '../db/database'
 
 /*

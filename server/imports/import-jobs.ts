@@ -18,7 +18,16 @@ import { writeVehicles } from './vehicles/vehicle-write'
 /** What a write touched: catalogue records for the fit graph, parts whose shelves changed for the stock index. */
 export type Touched = { catalogue: CatalogueChanges; stockParts: number[] }
 
-export type Planned = { changes: ChangeList; errors: ImportIssue[]; write: (batchId: number) => Touched }
+/** Called once for each record written, for the write phase's progress. */
+export type Tick = () => void
+
+export type Planned = {
+  changes: ChangeList
+  errors: ImportIssue[]
+  /** How many records the write will write, for a determinate progress bar. */
+  writes: number
+  write: (batchId: number, tick?: Tick) => Touched
+}
 
 type Rows = { onHeader: (cells: string[], row: number) => void; onRow: (cells: string[], row: number) => void }
 
@@ -30,32 +39,54 @@ type Plan = { changes: ChangeList; issues: ImportIssue[] }
 function work<R extends Rows, P extends Plan>(
   rows: R,
   plan: (db: Database.Database, rows: R) => P,
-  write: (db: Database.Database, plan: P, batchId: number) => Touched,
+  writes: (plan: P) => number,
+  write: (db: Database.Database, plan: P, batchId: number, tick: Tick) => Touched,
 ): Work {
   return {
     rows,
     plan: (db) => {
       const planned = plan(db, rows)
-      return { changes: planned.changes, errors: planned.issues, write: (batchId) => write(db, planned, batchId) }
+      return {
+        changes: planned.changes,
+        errors: planned.issues,
+        writes: writes(planned),
+        write: (batchId, tick = () => {}) => write(db, planned, batchId, tick),
+      }
     },
   }
 }
 
+const createsAndUpdates = (plan: { creates: unknown[]; updates: unknown[] }) => plan.creates.length + plan.updates.length
+
 export function importWork(type: ImportType): Work {
   switch (type) {
     case 'parts':
-      return work(new PartRows(), planParts, (db, plan, batchId) => ({
-        catalogue: { parts: writeParts(db, plan, batchId) },
+      return work(new PartRows(), planParts, createsAndUpdates, (db, plan, batchId, tick) => ({
+        catalogue: { parts: writeParts(db, plan, batchId, tick) },
         stockParts: [],
       }))
     case 'links':
-      return work(new LinkRows(), planLinks, (db, plan, batchId) => ({ catalogue: writeLinks(db, plan, batchId), stockParts: [] }))
+      return work(
+        new LinkRows(),
+        planLinks,
+        (plan) =>
+          plan.linkDeletes.length +
+          plan.identityDeletes.length +
+          plan.linkUpdates.length +
+          plan.identityUpdates.length +
+          plan.linkCreates.length +
+          plan.identityCreates.length,
+        (db, plan, batchId, tick) => ({ catalogue: writeLinks(db, plan, batchId, tick), stockParts: [] }),
+      )
     case 'vehicles':
-      return work(new VehicleRows(), planVehicles, (db, plan, batchId) => {
-        writeVehicles(db, plan, batchId)
+      return work(new VehicleRows(), planVehicles, createsAndUpdates, (db, plan, batchId, tick) => {
+        writeVehicles(db, plan, batchId, tick)
         return { catalogue: {}, stockParts: [] }
       })
     case 'stock':
-      return work(new StockRows(), planStock, (db, plan, batchId) => ({ catalogue: {}, stockParts: writeStock(db, plan, batchId) }))
+      return work(new StockRows(), planStock, createsAndUpdates, (db, plan, batchId, tick) => ({
+        catalogue: {},
+        stockParts: writeStock(db, plan, batchId, tick),
+      }))
   }
 }

@@ -44,7 +44,8 @@ function demoTemplatePath(): Promise<string> {
   demoTemplate ??= (async () => {
     const dir = mkdtempSync(path.join(tmpdir(), 'fitwright-template-'))
     const file = path.join(dir, 'template.sqlite')
-    const { dataSource } = await prepareDatabase(loadConfig({ NODE_ENV: 'test', FITWRIGHT_DB_PATH: file, FITWRIGHT_DEMO: '1' }))
+    const { dataSource, services } = await prepareDatabase(loadConfig({ NODE_ENV: 'test', FITWRIGHT_DB_PATH: file, FITWRIGHT_DEMO: '1' }))
+    await services.imports.close()
     await dataSource.query('PRAGMA wal_checkpoint(TRUNCATE)')
     await dataSource.destroy()
     return file
@@ -82,6 +83,7 @@ export async function createTestApp(options: { demo?: boolean; env?: Record<stri
     async close() {
       await services.accounts.resetsQueued()
       await services.outbox.stop()
+      await services.imports.close()
       await dataSource.destroy()
       rmSync(dir, { recursive: true, force: true })
     },

@@ -1,4 +1,5 @@
 import type Database from 'better-sqlite3'
+import type { Tick } from '../import-jobs'
 import { SQL_NOW, changeRecorder } from '../../audit/change-log'
 import type { LinksPlan } from './link-plan'
 import { proposedModificationInserter } from '../../fitment/link-rows'
@@ -9,6 +10,7 @@ export function writeLinks(
   db: Database.Database,
   plan: LinksPlan,
   batchId: number,
+  tick: Tick = () => {},
 ): Required<Pick<CatalogueChanges, 'links' | 'identities'>> {
   const links: number[] = []
   const identities: number[] = []
@@ -39,11 +41,13 @@ export function writeLinks(
     record('link', stored.record.id, 'deleted', stored.record.batchId, { link: [stored.record], link_modification: stored.mods })
     deleteLink.run(stored.record.id)
     links.push(stored.record.id)
+    tick()
   }
   for (const stored of plan.identityDeletes) {
     record('identity', stored.id, 'deleted', stored.batchId, { part_identity: [stored] })
     deleteIdentity.run(stored.id)
     identities.push(stored.id)
+    tick()
   }
   for (const { stored, values } of plan.linkUpdates) {
     const { id } = stored.record
@@ -54,19 +58,23 @@ export function writeLinks(
       deleteLinkMods.run(id)
       linkMods(id, values.modifications)
     }
+    tick()
   }
   for (const { stored, note, source } of plan.identityUpdates) {
     record('identity', stored.id, 'updated', stored.batchId, { part_identity: [stored] })
     updateIdentity.run(note, source, batchId, stored.id)
     identities.push(stored.id)
+    tick()
   }
   for (const { a, b, values } of plan.linkCreates) {
     const linkId = Number(insertLink.run(a, b, values.relation, values.note, values.source, batchId).lastInsertRowid)
     linkMods(linkId, values.modifications)
     links.push(linkId)
+    tick()
   }
   for (const { a, b, note, source } of plan.identityCreates) {
     identities.push(Number(insertIdentity.run(a, b, note, source, batchId).lastInsertRowid))
+    tick()
   }
   return { links, identities }
 }

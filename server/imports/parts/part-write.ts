@@ -1,4 +1,5 @@
 import type Database from 'better-sqlite3'
+import type { Tick } from '../import-jobs'
 import type { PartInput } from '../../../shared/schemas/part-input'
 import { SQL_NOW, changeRecorder } from '../../audit/change-log'
 import type { PartsPlan } from './part-plan'
@@ -6,7 +7,7 @@ import { markRows, partColumns } from '../../catalogue/part-writer'
 import { rewritePartWords } from '../../catalogue/part-word-writer'
 
 /** Writes a parts plan with prepared statements; the caller holds the transaction. Answers the ids of the parts written. */
-export function writeParts(db: Database.Database, plan: PartsPlan, batchId: number): number[] {
+export function writeParts(db: Database.Database, plan: PartsPlan, batchId: number, tick: Tick = () => {}): number[] {
   const insertPart = db.prepare(
     'INSERT INTO part (partNumber, partKey, kind, name, family, yearFrom, yearTo, notes, attributes, listPriceCents, batchId) VALUES (?, ?, ?, ?, ?, ?, ?, ?, ?, ?, ?)',
   )
@@ -28,6 +29,7 @@ export function writeParts(db: Database.Database, plan: PartsPlan, batchId: numb
     updatePart.run(c.kind, c.name, c.family, c.yearFrom, c.yearTo, c.notes, JSON.stringify(c.attributes), c.listPriceCents, batchId, id)
     deleteMarks.run(id)
     writeMarks(id, part)
+    tick()
   }
   for (const part of plan.creates) {
     const c = partColumns(part)
@@ -47,6 +49,7 @@ export function writeParts(db: Database.Database, plan: PartsPlan, batchId: numb
     const id = Number(result.lastInsertRowid)
     written.push(id)
     writeMarks(id, part)
+    tick()
   }
   rewritePartWords(db, written)
   return written

@@ -1,4 +1,5 @@
 import type Database from 'better-sqlite3'
+import type { Tick } from '../import-jobs'
 import { changeRecorder } from '../../audit/change-log'
 import type { StockPlan, StockPlanned } from './stock-plan'
 
@@ -29,7 +30,7 @@ function values({ partId, siteId, unit }: StockPlanned) {
  * sold, reserved or edited since from one left as the batch wrote it.
  * Answers the parts whose shelves changed, for the stock index.
  */
-export function writeStock(db: Database.Database, plan: StockPlan, batchId: number): number[] {
+export function writeStock(db: Database.Database, plan: StockPlan, batchId: number, tick: Tick = () => {}): number[] {
   const { createdAt: stamp } = db.prepare('SELECT "createdAt" FROM import_batch WHERE "id" = ?').get(batchId) as { createdAt: string }
   const columns = FIELDS.map((field) => `"${field}"`).join(', ')
   const insert = db.prepare(
@@ -45,10 +46,12 @@ export function writeStock(db: Database.Database, plan: StockPlan, batchId: numb
     record('stock', previous.id, 'updated', previous.batchId, { stock_item: [previous] })
     update.run(...values(planned), batchId, stamp, previous.id)
     touched.add(previous.partId).add(planned.partId)
+    tick()
   }
   for (const planned of plan.creates) {
     insert.run(...values(planned), batchId, stamp, stamp)
     touched.add(planned.partId)
+    tick()
   }
   return [...touched]
 }

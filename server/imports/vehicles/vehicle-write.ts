@@ -1,9 +1,10 @@
 import type Database from 'better-sqlite3'
+import type { Tick } from '../import-jobs'
 import { changeRecorder } from '../../audit/change-log'
 import type { Originals, VehiclesPlan } from './vehicle-plan'
 
 /** Writes a vehicles plan with prepared statements; the caller holds the transaction. */
-export function writeVehicles(db: Database.Database, plan: VehiclesPlan, batchId: number): void {
+export function writeVehicles(db: Database.Database, plan: VehiclesPlan, batchId: number, tick: Tick = () => {}): void {
   const insertVehicle = db.prepare(
     'INSERT INTO vehicle_application ("yearFrom", "yearTo", "make", "model", "body", "market", "engineFamily", "batchId") VALUES (?, ?, ?, ?, ?, ?, ?, ?)',
   )
@@ -20,6 +21,7 @@ export function writeVehicles(db: Database.Database, plan: VehiclesPlan, batchId
     markVehicle.run(batchId, previous.id)
     deleteOriginals.run(previous.id)
     writeOriginals(previous.id, originals)
+    tick()
   }
   for (const { key, originals } of plan.creates) {
     const { lastInsertRowid } = insertVehicle.run(
@@ -33,5 +35,6 @@ export function writeVehicles(db: Database.Database, plan: VehiclesPlan, batchId
       batchId,
     )
     writeOriginals(Number(lastInsertRowid), originals)
+    tick()
   }
 }

@@ -1,0 +1,70 @@
+import type { DataSource } from 'typeorm'
+import { revertBatch } from '../../audit/revert'
+import { inTransaction, sqliteConnection } from '../../db/sqlite-connection'
+import { ImportJobs, type ImportJobInput, type ImportJobResult, type Report } from '../import-job'
+import type { Touched } from '../import-jobs'
+import { ImportWorker } from './import-worker-client'
+
+/** Where imports and reverts run: in the import worker, or on the main thread where no worker can open the database. */
+export interface ImportRunner {
+  import(input: ImportJobInput, maxRows: number, report: Report): Promise<ImportJobResult>
+  revert(batchId: number, userName: string): Promise<Touched>
+  close(): Promise<void>
+}
+
+export class WorkerRunner implements ImportRunner {
+  readonly worker: ImportWorker
+
+  constructor(dbPath: string) {
+    this.worker = new ImportWorker(dbPath)
+  }
+
+  async import(input: ImportJobInput, maxRows: number, report: Report) {
+    const value = await this.worker.run({ kind: 'import', input, maxRows }, (progress) =>
+      report(progress.phase, progress.done, progress.total),
+    )
+    return value as ImportJobResult
+  }
+
+  async revert(batchId: number, userName: string) {
+    return (await this.worker.run({ kind: 'revert', batchId, userName })) as Touched
+  }
+
+  close() {
+    return this.worker.close()
+  }
+}
+
+/**
+ * The same jobs on the main thread's connection: for an in-memory database
+ * (a worker cannot open it) and PostgreSQL (where they answer 501, as bulk
+ * writes still need SQLite).
+ */
+export class InlineRunner implements ImportRunner {
+  private readonly jobs: ImportJobs
+
+  constructor(private readonly dataSource: DataSource) {
+    this.jobs = new ImportJobs(
+      () => sqliteConnection(dataSource),
+      (work) => inTransaction(dataSource, work),
+    )
+  }
+
+  import(input: ImportJobInput, maxRows: number, report: Report) {
+    return this.jobs.run(input, maxRows, report)
+  }
+
+  revert(batchId: number, userName: string) {
+    return inTransaction(this.dataSource, (db) => revertBatch(db, batchId, userName))
+  }
+
+  async close() {}
+}
+
+export function importRunner(dataSource: DataSource): ImportRunner {
+  const { type, database } = dataSource.options
+  if (type === 'better-sqlite3' && typeof database === 'string' && database !== ':memory:' && database !== '') {
+    return new WorkerRunner(database)
+  }
+  return new InlineRunner(dataSource)
+}

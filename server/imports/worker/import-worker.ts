@@ -1,0 +1,54 @@
+import { parentPort, workerData } from 'node:worker_threads'
+import Database from 'better-sqlite3'
+import { revertBatch } from '../../audit/revert'
+import { ImportJobs } from '../import-job'
+import { sendableError, type JobReply, type JobRequest } from './worker-messages'
+
+/**
+ * The import worker: its own connection on each SQLite file it is asked about
+ * (WAL, so the main thread's readers go on while it writes), where imports and
+ * reverts read, check, plan and write. Jobs come one at a time from the main
+ * thread.
+ */
+const { busyTimeoutMs } = workerData as { busyTimeoutMs: number }
+const port = parentPort!
+const open = new Map<string, { db: Database.Database; jobs: ImportJobs }>()
+
+function connection(dbPath: string) {
+  let entry = open.get(dbPath)
+  if (!entry) {
+    const db = new Database(dbPath, { fileMustExist: true })
+    db.pragma('journal_mode = WAL')
+    db.pragma('synchronous = NORMAL')
+    // The same as the main connection (TypeORM turns it on), so deletes cascade alike.
+    db.pragma('foreign_keys = ON')
+    // Waiting here for the main thread's write blocks only this thread.
+    db.pragma(`busy_timeout = ${busyTimeoutMs}`)
+    const jobs = new ImportJobs(
+      () => db,
+      async (work) => db.transaction(() => work(db)).immediate(),
+    )
+    open.set(dbPath, (entry = { db, jobs }))
+  }
+  return entry
+}
+
+const send = (reply: JobReply) => port.postMessage(reply)
+
+async function perform(request: JobRequest): Promise<unknown> {
+  if (request.kind === 'close') {
+    open.get(request.dbPath)?.db.close()
+    open.delete(request.dbPath)
+    return null
+  }
+  const { db, jobs } = connection(request.dbPath)
+  if (request.kind === 'revert') return db.transaction(() => revertBatch(db, request.batchId, request.userName)).immediate()
+  return jobs.run(request.input, request.maxRows, (phase, done, total) => send({ id: request.id, type: 'progress', phase, done, total }))
+}
+
+port.on('message', (request: JobRequest) => {
+  perform(request).then(
+    (value) => send({ id: request.id, type: 'done', value }),
+    (error: unknown) => send({ id: request.id, type: 'failed', error: sendableError(error) }),
+  )
+})
