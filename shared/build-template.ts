@@ -53,6 +53,7 @@ export const MATING_PAIRS: readonly MatingPair[] = [
   { slots: ['timing-belt', 'crank-pulley'], label: 'Belt on crank pulley' },
   { slots: ['distributor', 'head'], label: 'Distributor on head' },
   { slots: ['ignition-leads', 'distributor'], label: 'Leads on distributor cap' },
+  { slots: ['distributor', 'ecu'], label: 'Distributor pickup into control unit' },
   { slots: ['ecu', 'head'], label: 'Control unit and valve-lift hardware' },
   { slots: ['ecu', 'harness'], label: 'Control unit connector' },
   { slots: ['ecu', 'injector'], label: 'Injector driver' },

@@ -107,7 +107,7 @@ export class BuildCompletionService {
       },
       ids: { ...build.ids, [slot]: row.id },
     }
-    const { facts } = this.evaluation.prepare(trial)
+    const { facts } = this.evaluation.prepare(trial, graph)
     const pairs = await this.evaluation.judgePairs(graph, trial, facts, slot)
     if (pairs.some((pair) => pair.relation === 'does-not-fit' || pair.relation === 'unknown')) return null
     const preference = candidatePreference(await this.evaluation.buildCautions(facts), baseline)
@@ -135,7 +135,7 @@ export class BuildCompletionService {
       .map((id) => ({ id, partNumber: graph.partNumberOf(id), ruleClass: graph.ruleClasses.classOf(id) }))
     type Judgement = { relation: Relation; modifications: string[]; reasons: string[]; byRule: boolean; preference: Preference } | null
     // The build's own cautions without the candidate: only what a candidate adds counts against it.
-    const baseline = await this.evaluation.buildCautions(this.evaluation.prepare(build).facts)
+    const baseline = await this.evaluation.buildCautions(this.evaluation.prepare(build, graph).facts)
     const accepted: ({ row: Row } & NonNullable<Judgement>)[] = []
     const neighbourIds = matingSlots(slot).flatMap((other) => (build.ids[other] === undefined ? [] : [build.ids[other]!]))
     const linkedToNeighbours = graph.linkedWith(neighbourIds)

@@ -16,6 +16,7 @@ import type { Facts, RuleBook } from '../reasoning/rule-book'
 import type { RuleExtraPart } from '../reasoning/rule-file.schema'
 import { resolveSlots } from './build-slots'
 import { judgeCompliance } from './compliance'
+import { findCompanions } from '../fitment/companions'
 import { toPart } from '../catalogue/part.repository'
 import type { FitGraph, FitGraphIndex } from '../fitment/fit-graph'
 import type { ModificationService } from '../catalogue/modification.service'
@@ -64,9 +65,9 @@ export class BuildEvaluationService {
     return { parts, ids, context, contextCautions: cautions }
   }
 
-  /** The figures of a build and the facts its rules read. */
-  prepare(build: Pick<ResolvedBuild, 'parts' | 'context'>) {
-    const figures = computeFigures(build.parts, build.context)
+  /** The figures of a build and the facts its rules read; the graph supplies the parts a build implies without a slot. */
+  prepare(build: Pick<ResolvedBuild, 'parts' | 'context'>, graph: FitGraph) {
+    const figures = computeFigures(build.parts, build.context, findCompanions(graph, build.parts))
     const numbers = Object.fromEntries(Object.entries(build.parts).map(([slot, part]) => [slot, part!.partNumber]))
     return { figures, facts: buildFacts(build.parts, figures, build.context, numbers) }
   }
@@ -102,7 +103,7 @@ export class BuildEvaluationService {
   async evaluate(request: EvaluateRequest, asker: { homeSiteId?: number | null } = {}): Promise<Evaluation> {
     const build = await this.resolve(request)
     const graph = await this.graphIndex.snapshot()
-    const { figures, facts } = this.prepare(build)
+    const { figures, facts } = this.prepare(build, graph)
     const pairs = await this.judgePairs(graph, build, facts)
     const buildRules = summariseOutcomes(await this.rules.evaluateBuild(facts))
 

@@ -1,3 +1,4 @@
+import type { ModificationCaution } from '../../shared/schemas/fitment'
 import { Column, CreateDateColumn, Entity, Index, PrimaryGeneratedColumn, UpdateDateColumn } from 'typeorm'
 import type { ExtraPart, SkillLevel } from '../../shared/schemas/fitment'
 
@@ -33,7 +34,7 @@ export class ModificationEntity {
   timeMinutes!: number | null
 
   @Column({ type: 'simple-json' })
-  cautions!: string[]
+  cautions!: ModificationCaution[]
 
   /** Proposed until an editor completes it (an import may name one that does not exist yet). */
   @Column({ type: 'text', default: 'approved' })

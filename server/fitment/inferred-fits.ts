@@ -7,8 +7,8 @@ import type { RuleBook } from '../reasoning/rule-book'
 import { summariseOutcomes, type RuleSummary } from '../reasoning/rule-summary'
 import type { Found } from './found'
 import type { FitGraph } from './graph/fit-graph'
-import type { AttributeClasses } from './graph/attribute-classes'
 import { orderEvidence } from './deciding-reason'
+import { companionsRevision, findCompanions } from './companions'
 
 /** One page of each (kind, relation) group: the items at [offset, offset + limit) in part-number order. */
 export type InferredQuery = { relation?: Relation; kind?: PartKind; offset: number; limit: number; only?: (partId: number) => boolean }
@@ -22,7 +22,9 @@ const JUDGED_LIMIT = 200_000
 export class InferredFits {
   /**
    * Judgements by the part's side (its kind, class and the other kind), then the other part's class.
-   * The rules are fixed while the server runs and a class id is never reused, so a judgement stays true.
+   * The rules are fixed while the server runs and a class id is never reused, so a judgement stays true;
+   * a head and distributor pair also reads the housings and adapter plates in the catalogue, so its side
+   * is keyed by their revision too.
    */
   private readonly judged = new Map<string, Map<number, RuleSummary>>()
   private judgedCount = 0
@@ -44,12 +46,12 @@ export class InferredFits {
     const groups: InferredAnswer['groups'] = []
     for (const otherKind of kinds) {
       const counts = new Map<Relation, number>()
-      const side = this.sideOf(kind, selfClass, otherKind)
+      const side = this.sideOf(graph, kind, selfClass, otherKind)
       for (const candidate of graph.partsOfKind(otherKind)) {
         if (exclude.has(candidate) || (query.only && !query.only(candidate))) continue
         const otherClass = classes.classOf(candidate)
         // Most candidates share a class judged before: no promise for those.
-        const summary = side.get(otherClass) ?? (await this.judge(classes, kind, selfClass, otherKind, otherClass))
+        const summary = side.get(otherClass) ?? (await this.judge(graph, side, kind, selfClass, otherKind, otherClass))
         if (!summary.relation || (query.relation && summary.relation !== query.relation)) continue
         const count = (counts.get(summary.relation) ?? 0) + 1
         counts.set(summary.relation, count)
@@ -61,8 +63,9 @@ export class InferredFits {
     return { found, groups }
   }
 
-  private sideOf(kind: SlotId, selfClass: number, otherKind: SlotId): Map<number, RuleSummary> {
-    const key = `${kind}:${selfClass}|${otherKind}`
+  private sideOf(graph: FitGraph, kind: SlotId, selfClass: number, otherKind: SlotId): Map<number, RuleSummary> {
+    const readsCompanions = (kind === 'head' && otherKind === 'distributor') || (kind === 'distributor' && otherKind === 'head')
+    const key = `${kind}:${selfClass}|${otherKind}${readsCompanions ? `@${companionsRevision(graph)}` : ''}`
     let side = this.judged.get(key)
     if (!side) {
       side = new Map()
@@ -71,14 +74,23 @@ export class InferredFits {
     return side
   }
 
-  private async judge(classes: AttributeClasses, kind: SlotId, selfClass: number, otherKind: SlotId, otherClass: number) {
+  private async judge(
+    graph: FitGraph,
+    side: Map<number, RuleSummary>,
+    kind: SlotId,
+    selfClass: number,
+    otherKind: SlotId,
+    otherClass: number,
+  ) {
+    const classes = graph.ruleClasses
     const slotParts = { [kind]: classes.input(selfClass), [otherKind]: classes.input(otherClass) }
-    const summary = summariseOutcomes(await this.rules.evaluatePair(kind, otherKind, buildFacts(slotParts, computeFigures(slotParts), {})))
+    const figures = computeFigures(slotParts, {}, findCompanions(graph, slotParts))
+    const summary = summariseOutcomes(await this.rules.evaluatePair(kind, otherKind, buildFacts(slotParts, figures, {})))
     if (this.judgedCount >= JUDGED_LIMIT) {
       this.judged.clear()
       this.judgedCount = 0
     }
-    this.sideOf(kind, selfClass, otherKind).set(otherClass, summary)
+    side.set(otherClass, summary)
     this.judgedCount += 1
     return summary
   }
@@ -94,7 +106,12 @@ function inferredFound(partId: number, relation: Relation, summary: RuleSummary)
     modificationNames: [...new Set(summary.modifications.map((m) => m.name))],
     explanation: [
       ...orderEvidence(summary.steps, relation),
-      ...summary.cautions.map((caution): ExplanationStep => ({ type: 'note', text: caution.text, ruleId: caution.ruleId })),
+      ...summary.cautions.map((caution): ExplanationStep => ({
+        type: 'note',
+        text: caution.text,
+        ruleId: caution.ruleId,
+        ...(caution.manual ? { manual: caution.manual } : {}),
+      })),
     ],
   }
 }

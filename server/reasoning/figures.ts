@@ -9,6 +9,7 @@ import { beltTeethForCentre, centreDistanceForBeltMm } from '../../shared/engine
 import { parseMetricThread } from '../../shared/schemas/part-attributes'
 import type { BuildContext } from '../../shared/schemas/build'
 import type { Part } from '../../shared/schemas/part'
+import { ignitionFigures, type Companions, type IgnitionFigures } from './figures-ignition'
 
 /** What the figures read of a part. */
 export type FigurePart = Pick<Part, 'attributes' | 'yearTo'>
@@ -42,6 +43,7 @@ export type FigureFacts = {
     calibratedCcMin: number
   }
   engineModelYear?: number
+  ignition?: IgnitionFigures
   fuelSystemOpened?: boolean
   electricsTouched?: boolean
 }
@@ -205,7 +207,7 @@ export function cylinders(parts: SlotParts): number {
 }
 
 /** Every figure the chosen parts allow; a figure that lacks an input is left out. */
-export function computeFigures(parts: SlotParts, context: BuildContext = {}): FigureFacts {
+export function computeFigures(parts: SlotParts, context: BuildContext = {}, companions: Companions = {}): FigureFacts {
   const figures: FigureFacts = { ...compression(parts) }
   const bore = num(parts.block, 'boreMm')
   const stroke = num(parts.block, 'strokeMm')
@@ -226,6 +228,7 @@ export function computeFigures(parts: SlotParts, context: BuildContext = {}): Fi
   figures.injector = injector(parts, context)
   figures.quench = quench(parts)
   figures.injectorCalibration = injectorCalibration(parts)
+  figures.ignition = ignitionFigures(parts, companions)
   if (parts.block?.yearTo) figures.engineModelYear = parts.block.yearTo
   figures.fuelSystemOpened = Boolean(parts['fuel-rail'] || parts.injector || parts['intake-manifold'])
   figures.electricsTouched = Boolean(parts.ecu || parts.harness)

@@ -1,7 +1,7 @@
 import { z } from 'zod'
 import { mates } from '../../shared/build-template'
 import { SLOT_IDS } from '../../shared/build-template'
-import { skillLevelSchema } from '../../shared/schemas/fitment'
+import { modificationCautionSchema, skillLevelSchema } from '../../shared/schemas/fitment'
 
 /*
  * The shape of a rule file under rules/. Conditions are json-rules-engine
@@ -90,6 +90,8 @@ const eventSchema = z.discriminatedUnion('type', [
         severity: z.enum(['info', 'warning', 'danger']),
         text: template,
         reference: z.string().optional(),
+        /** The service manual section that governs, e.g. "head bolt torque sequence and angle". */
+        manual: z.string().optional(),
         /** A legal problem: "blocked" takes road-legality away, "check" asks for a check first. */
         compliance: z.enum(['check', 'blocked']).optional(),
       })
@@ -163,7 +165,7 @@ export const modificationSpecSchema = z
     consumables: z.array(z.string()),
     skillLevel: skillLevelSchema,
     timeMinutes: z.number().int().positive().nullable(),
-    cautions: z.array(z.string()),
+    cautions: z.array(modificationCautionSchema),
   })
   .strict()
 export type ModificationSpec = z.infer<typeof modificationSpecSchema>

@@ -47,6 +47,8 @@ export const cautionSchema = z.object({
   severity: z.enum(['info', 'warning', 'danger']),
   text: z.string(),
   reference: z.string().optional(),
+  /** The service manual section that governs this work, shown beside the caution. */
+  manual: z.string().optional(),
   ruleId: z.string().optional(),
   compliance: z.enum(['check', 'blocked']).optional(),
 })

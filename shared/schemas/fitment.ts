@@ -45,6 +45,10 @@ export const extraPartSchema = z.object({
 })
 export type ExtraPart = z.infer<typeof extraPartSchema>
 
+/** A modification's caution: its text, or its text and the service manual section that governs it. */
+export const modificationCautionSchema = z.union([z.string(), z.object({ text: z.string(), manual: z.string() }).strict()])
+export type ModificationCaution = z.infer<typeof modificationCautionSchema>
+
 export const modificationSchema = z.object({
   name: z.string(),
   title: z.string(),
@@ -54,7 +58,7 @@ export const modificationSchema = z.object({
   consumables: z.array(z.string()),
   skillLevel: skillLevelSchema,
   timeMinutes: z.number().int().nullable(),
-  cautions: z.array(z.string()),
+  cautions: z.array(modificationCautionSchema),
   status: z.enum(['approved', 'proposed']),
 })
 export type Modification = z.infer<typeof modificationSchema>
@@ -70,6 +74,8 @@ export const explanationStepSchema = z.object({
   source: z.string().optional(),
   linkId: z.number().int().optional(),
   ruleId: z.string().optional(),
+  /** For a caution: the service manual section that governs. */
+  manual: z.string().optional(),
 })
 export type ExplanationStep = z.infer<typeof explanationStepSchema>
 

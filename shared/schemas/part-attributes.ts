@@ -20,6 +20,10 @@ const toothed = { teeth: count, pitchMm: mm, profile: toothProfile, widthMm: mm 
 
 export const MATERIALS = ['cast-iron', 'aluminium', 'steel'] as const
 export const DIAGNOSTIC_GENERATIONS = ['pre-obd', 'obd-i', 'obd-ii'] as const
+/** Distributor pickups; an inductive one gives an AC signal, Hall-effect and optical ones a square wave. */
+export const PICKUP_TYPES = ['inductive', 'hall-effect', 'optical'] as const
+/** The signal a control unit's ignition input reads. */
+export const IGNITION_INPUTS = ['inductive', 'square-wave'] as const
 
 export const attributeShapes = {
   block: {
@@ -69,6 +73,11 @@ export const attributeShapes = {
     capStyle: code,
     internals: code,
     internalsTransferable: z.boolean(),
+    pickupType: z.enum(PICKUP_TYPES),
+    /** How deep the drive dog sits in the cam slot with the body on its own flange. */
+    driveDogDepthMm: mm,
+    /** How much longer the listed service drive dog is, where one exists. */
+    longerDogMm: mm,
   },
   'ignition-leads': { capStyle: code, cylinders: count },
   ecu: {
@@ -80,10 +89,12 @@ export const attributeShapes = {
     /** The injector flow the unit's fuel map assumes, and the pressure it is rated at. */
     calibratedInjectorCcMin: mm,
     calibratedInjectorPressureBar: mm,
+    ignitionInput: z.enum(IGNITION_INPUTS),
   },
   harness: { connector: code, vvlLeads: z.boolean(), injectorPlug: code },
   'intake-manifold': { portPattern: code, fuelRailMount: code },
-  'intake-gasket': { portPattern: code },
+  /** An adapter gasket has a head side and a manifold side instead of one port pattern. */
+  'intake-gasket': { portPattern: code, headPortPattern: code, manifoldPortPattern: code },
   'exhaust-manifold': { portPattern: code },
   'exhaust-gasket': { portPattern: code },
   'fuel-rail': { fuelRailMount: code, injectorCupMm: mm, outlets: count, pressureBar: mm },
@@ -98,7 +109,7 @@ export const attributeShapes = {
   'timing-belt': toothed,
   'crank-pulley': { ...toothed, crankSnout: code },
   'oil-restrictor': { orificeMm: mm },
-  other: { thicknessMm: mm, innerDiameterMm: mm, quantityPerPack: count },
+  other: { thicknessMm: mm, innerDiameterMm: mm, quantityPerPack: count, adaptsFromMount: code, adaptsToMount: code },
 } satisfies Record<PartKind, z.ZodRawShape>
 
 function attributesSchema<S extends z.ZodRawShape>(shape: S) {

@@ -32,7 +32,7 @@ describe.skipIf(!run)('technician: the planner shows what is on the shelf', () =
     await head.pressSequentially('TM-HD-18', { delay: 30 })
     const used = page.getByRole('option', { name: /^TM-HD-1810\b/ }).first()
     // The demo yard holds a used grade-A unit (175.00) and a core (25.00) of this head.
-    await expect.poll(() => used.textContent(), within).toMatch(/2 in stock · best used · 25\.00–175\.00\s*Hollin yard, lot B/)
+    await expect.poll(() => used.textContent(), within).toMatch(/2 in stock · best used · 25\.00–175\.00\s*nearest: Hollin yard, lot B/)
     await page.waitForTimeout(400)
     await page.screenshot({ path: `${SCREENSHOT_DIR}/planner-stock-suggestions-1366.png` })
     await used.click()

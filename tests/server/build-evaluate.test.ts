@@ -47,6 +47,13 @@ describe('POST /api/builds/evaluate on the demo builds', () => {
     ['TK18 head on a TK20V block with torque-to-yield bolts', 'does-not-fit', ['oil-restrictor-remove-duplicate']],
     ['TK20V head on a TK18 block with the old bolts', 'does-not-fit', ['oil-restrictor-fit']],
     ['Salvage exhaust manifold on a TK20V head', 'unknown', []],
+    ['TK18 intake manifold on a TK20V head with the adapter gasket', 'fits-with-modification', ['intake-port-adapter-gasket']],
+    ['Early inductive distributor on a later TK18 control unit', 'fits-with-modification', ['pickup-signal-converter']],
+    [
+      'Sealed TK20V distributor on a TK18 head through the adapter plate',
+      'fits-with-modification',
+      ['distributor-adapter-plate', 'longer-drive-dog'],
+    ],
   ])('"%s" is %s with modifications %j', async (name, verdict, modifications) => {
     const { name: _name, ...build } = demo(name)
     const response = await evaluate(build)

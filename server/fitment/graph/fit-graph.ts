@@ -43,6 +43,8 @@ export class FitGraph {
   private partNumbers: (string | undefined)[] = []
   private kinds = new Uint8Array(16)
   private partTotal = 0
+  /** Bumped whenever a part of the kind is added, changed or removed: caches over a kind's parts compare it. */
+  private readonly kindRevisions = new Uint32Array(PART_KINDS.length)
 
   constructor(readonly details: FitDetails) {}
 
@@ -69,6 +71,10 @@ export class FitGraph {
     return this.partNumbers[id] ?? `#${id}`
   }
 
+  revisionOfKind(kind: PartKind): number {
+    return this.kindRevisions[KIND_CODE.get(kind)!]!
+  }
+
   kindOf(id: number): PartKind {
     return PART_KINDS[this.kinds[id] ?? 0]!
   }
@@ -83,6 +89,8 @@ export class FitGraph {
     if (id >= this.kinds.length) this.kinds = resized(this.kinds, Math.max(id + 1, this.kinds.length * 2))
     const kindCode = KIND_CODE.get(kind) ?? KIND_CODE.get('other')!
     this.kinds[id] = kindCode
+    this.kindRevisions[kindCode]!++
+    if (previousKind !== undefined && previousKind !== kindCode) this.kindRevisions[previousKind]!++
     this.byNumber.set(partNumber, id)
     this.ruleClasses.set(id, kindCode, previousKind, attributes, yearTo, previous !== partNumber)
   }
@@ -109,6 +117,7 @@ export class FitGraph {
     for (const identityId of identityIds) this.identities.remove(identityId)
     this.classes.refresh(ends)
     this.ruleClasses.remove(id, this.kinds[id]!)
+    this.kindRevisions[this.kinds[id]!]!++
     if (this.byNumber.get(partNumber) === id) this.byNumber.delete(partNumber)
     this.partNumbers[id] = undefined
     this.partTotal--
