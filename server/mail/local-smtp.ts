@@ -1,5 +1,5 @@
 import { createWriteStream } from 'node:fs'
-import { mkdir } from 'node:fs/promises'
+import { mkdir, rename, rm } from 'node:fs/promises'
 import type { AddressInfo } from 'node:net'
 import path from 'node:path'
 import { pipeline } from 'node:stream/promises'
@@ -24,10 +24,17 @@ export async function startLocalSmtp(dir: string): Promise<LocalSmtp> {
     logger: false,
     onData(stream, _session, callback) {
       const name = `${new Date().toISOString().replace(/[:.]/g, '-')}-${process.pid}-${++sequence}.eml`
-      pipeline(stream, createWriteStream(path.join(dir, name))).then(
-        () => callback(),
-        (error: Error) => callback(error),
-      )
+      // Written under a partial name, then renamed: a reader of the folder only ever sees whole messages.
+      const partial = path.join(dir, `.${name}.part`)
+      pipeline(stream, createWriteStream(partial))
+        .then(() => rename(partial, path.join(dir, name)))
+        .then(
+          () => callback(),
+          (error: Error) => {
+            void rm(partial, { force: true })
+            callback(error)
+          },
+        )
     },
   })
   await new Promise<void>((resolve, reject) => {
