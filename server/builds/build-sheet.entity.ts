@@ -1,6 +1,7 @@
 import { FLOAT_COLUMN } from '../db/column-types'
 import { Column, CreateDateColumn, Entity, Index, JoinColumn, ManyToOne, PrimaryGeneratedColumn, UpdateDateColumn } from 'typeorm'
 import { UserEntity } from '../users/user.entity'
+import type { FaceFinish } from '../../shared/schemas/build'
 
 /** A technician's saved target combination. */
 @Entity('build_sheet')
@@ -38,6 +39,10 @@ export class BuildSheetEntity {
   /** The vehicle application the build was planned from, if any (its make and model go on a quote). */
   @Column({ type: 'integer', nullable: true })
   vehicleId!: number | null
+
+  /** Deck and head face as measured (roughness and out-of-flat), null when not measured. */
+  @Column({ type: 'simple-json', nullable: true })
+  faceFinish!: FaceFinish | null
 
   @Column({ type: 'text', default: '' })
   notes!: string

@@ -1,6 +1,6 @@
 import type { DataSource, Repository } from 'typeorm'
 import { isSlotId } from '../../shared/build-template'
-import type { BuildSheet, BuildSheetInput, BuildSheetUpdate, Evaluation } from '../../shared/schemas/build'
+import { faceFinishOf, type BuildSheet, type BuildSheetInput, type BuildSheetUpdate, type Evaluation } from '../../shared/schemas/build'
 import type { User } from '../../shared/schemas/auth'
 import { can } from '../../shared/permissions'
 import { BuildSheetEntity } from './build-sheet.entity'
@@ -20,6 +20,7 @@ function toBuildSheet(entity: BuildSheetEntity): BuildSheet {
     chassisModelYear: entity.chassisModelYear,
     vin: entity.vin,
     vehicleId: entity.vehicleId ?? null,
+    faceFinish: entity.faceFinish ?? null,
     notes: entity.notes,
     checklist: entity.checklist ?? {},
     verdict: verdictSchema.safeParse(entity.savedVerdict).data ?? null,
@@ -93,6 +94,7 @@ export class BuildSheetService {
       chassisModelYear: input.chassisModelYear ?? null,
       vin: input.vin ?? null,
       vehicleId: input.vehicleId ?? null,
+      faceFinish: faceFinishOf(input),
       notes: input.notes,
       checklist: sortedTicks(input.checklist),
     })
@@ -110,6 +112,7 @@ export class BuildSheetService {
     if ('chassisModelYear' in change) entity.chassisModelYear = change.chassisModelYear ?? null
     if ('vin' in change) entity.vin = change.vin ?? null
     if ('vehicleId' in change) entity.vehicleId = change.vehicleId ?? null
+    if ('faceFinish' in change) entity.faceFinish = change.faceFinish ? faceFinishOf(change.faceFinish) : null
     if (change.notes !== undefined) entity.notes = change.notes
     if (change.checklist !== undefined) entity.checklist = sortedTicks(change.checklist)
     await this.judge(entity)
@@ -140,6 +143,7 @@ export class BuildSheetService {
       ...(entity.fuelOctane !== null && { fuelOctane: entity.fuelOctane }),
       ...(entity.chassisModelYear !== null && { chassisModelYear: entity.chassisModelYear }),
       ...(entity.vin !== null && { vin: entity.vin }),
+      ...entity.faceFinish,
     }
     return this.evaluation.evaluate({ slots: entity.slots, ...context }).catch((error: unknown) => {
       if (error instanceof AppError) return null

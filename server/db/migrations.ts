@@ -1,5 +1,7 @@
 import { StockPhotos1796229010828 } from '../migrations/1796229010828-StockPhotos'
 import { CounterFinish1796235249342 } from '../migrations/1796235249342-CounterFinish'
+import { FaceFinish1796279666605 } from '../migrations/1796279666605-FaceFinish'
+import { FaceFinish1796279676351 as PostgresFaceFinish1796279676351 } from '../migrations/postgres/1796279676351-FaceFinish'
 import { StockPhotos1796229013832 as PostgresStockPhotos1796229013832 } from '../migrations/postgres/1796229013832-StockPhotos'
 import { CounterFinish1796235252157 as PostgresCounterFinish1796235252157 } from '../migrations/postgres/1796235252157-CounterFinish'
 import { AccountTokens1796223315452 } from '../migrations/1796223315452-AccountTokens'
@@ -56,6 +58,7 @@ export const migrations = [
   SharedLinks1796227511872,
   StockPhotos1796229010828,
   CounterFinish1796235249342,
+  FaceFinish1796279666605,
 ]
 
 /** PostgreSQL's, generated from the same entities (`npx tsx server/db/generate-migration.ts Name --postgres`). */
@@ -77,4 +80,5 @@ export const postgresMigrations = [
   PostgresSharedLinks1796227515397,
   PostgresStockPhotos1796229013832,
   PostgresCounterFinish1796235252157,
+  PostgresFaceFinish1796279676351,
 ]

@@ -1,5 +1,5 @@
 import type { SlotId } from '../../shared/build-template'
-import type { PartAttributes } from '../../shared/schemas/part-attributes'
+import { parseMetricThread, type PartAttributes } from '../../shared/schemas/part-attributes'
 import type { PartKind } from '../../shared/schemas/part-kinds'
 import type { FitGraph } from './fit-graph'
 import type { CompanionPart, Companions } from '../reasoning/figures-ignition'
@@ -23,22 +23,47 @@ const memos = new WeakMap<FitGraph, Memo>()
 /**
  * The parts a build implies without a slot: where the distributor's flange
  * differs from the head's mount, the housings its internals could move into
- * or the adapter plates a sealed body could sit on.
+ * or the adapter plates a sealed body could sit on; under head bolts, the
+ * hardened washers the catalogue stocks for their thread.
  */
 export function findCompanions(graph: FitGraph, parts: Parts): Companions {
+  return { ...distributorCompanions(graph, parts), ...washerCompanions(graph, parts) }
+}
+
+function remembered(graph: FitGraph, key: string, find: () => Companions): Companions {
+  const memo = memoOf(graph)
+  let companions = memo.byPair.get(key)
+  if (!companions) {
+    companions = find()
+    memo.byPair.set(key, companions)
+  }
+  return companions
+}
+
+function distributorCompanions(graph: FitGraph, parts: Parts): Companions {
   const mount = parts.head?.attributes.distributorMount
   const distributor = parts.distributor?.attributes
   const flange = distributor?.mountPattern
   if (!distributor || typeof mount !== 'string' || typeof flange !== 'string' || mount === flange) return {}
   const transfer = distributor.internalsTransferable === true
-  const memo = memoOf(graph)
-  const key = `${mount}|${flange}|${transfer}`
-  let companions = memo.byPair.get(key)
-  if (!companions) {
-    companions = transfer ? housingsFor(graph, mount) : adaptersFor(graph, flange, mount)
-    memo.byPair.set(key, companions)
-  }
-  return companions
+  return remembered(graph, `${mount}|${flange}|${transfer}`, () =>
+    transfer ? housingsFor(graph, mount) : adaptersFor(graph, flange, mount),
+  )
+}
+
+/** Only a head with boss heights per position asks: the other heads' bolts are judged on one boss height. */
+function washerCompanions(graph: FitGraph, parts: Parts): Companions {
+  const thread = parseMetricThread(String(parts['head-bolt']?.attributes.thread ?? ''))
+  if (!thread || parts.head?.attributes.bossHeightsMm === undefined) return {}
+  return remembered(graph, `washers|${thread.diameterMm}`, () => ({ headBoltWashers: washersFor(graph, thread.diameterMm) }))
+}
+
+/** Washers and spacers whose hole takes the bolt (up to 1 mm over its diameter), thinnest first. */
+function washersFor(graph: FitGraph, diameterMm: number): CompanionPart[] {
+  const hole = (a: PartAttributes) => Number(a.innerDiameterMm)
+  return partsWhere(graph, 'other', (a) => Number(a.thicknessMm) > 0 && hole(a) >= diameterMm && hole(a) <= diameterMm + 1).sort(
+    (a, b) => Number(a.attributes.thicknessMm) - Number(b.attributes.thicknessMm),
+  )
 }
 
 /** Which catalogue state the companions were found in, for caches of judgements that used them. */

@@ -20,18 +20,25 @@ export async function judgePair(
 ): Promise<JudgedPair> {
   const [idA, idB] = input.partIds
   const partNumbers: [string, string] = [graph.partNumberOf(idA), graph.partNumberOf(idB)]
-  const summary = summariseOutcomes(await rules.evaluatePair(input.slots[0], input.slots[1], input.facts))
+  const outcomes = await rules.evaluatePair(input.slots[0], input.slots[1], input.facts)
+  const summary = summariseOutcomes(outcomes)
   const found = graph.linkBetween(idA, idB)
   if (found) {
     const chain = planChain(graph, idA, found.viaA, found.link, found.viaB, idB)
     const details = await loadChainDetails(graph, [chain])
-    const modifications = details.links.get(found.link.id)?.modifications ?? []
+    const linked = details.links.get(found.link.id)?.modifications ?? []
+    // The link knows the parts; this engine's measured faces can still call for machining on top.
+    const measured =
+      found.link.relation === 'does-not-fit' ? [] : summary.modifications.filter((m) => m.measured && !linked.includes(m.name))
+    const modifications = [...new Set([...linked, ...measured.map((m) => m.name)])]
+    const relation = measured.length ? 'fits-with-modification' : found.link.relation
     const explanation = chainSteps(graph, chain, details)
-    const ruleSteps = orderEvidence(summary.steps, found.link.relation)
-    if (summary.relation && summary.relation !== found.link.relation) {
+    const ruleSteps = orderEvidence(summary.steps, relation)
+    const partRules = summariseOutcomes(outcomes.filter((outcome) => !outcome.measured))
+    if (partRules.relation && partRules.relation !== found.link.relation) {
       explanation.push({
         type: 'note',
-        text: `The rules alone would say "${RELATION_WORDS[summary.relation]}" (${summary.ruleIds.join(', ')}); the reviewed link decides.`,
+        text: `The rules alone would say "${RELATION_WORDS[partRules.relation]}" (${partRules.ruleIds.join(', ')}); the reviewed link decides.`,
       })
     }
     explanation.push(...ruleSteps)
@@ -40,9 +47,9 @@ export async function judgePair(
       slots: input.slots,
       label: input.label,
       partNumbers,
-      relation: found.link.relation,
+      relation,
       decidedBy: 'link',
-      reason: decidingReason(found.link.relation, 'link', explanation, fromRules),
+      reason: decidingReason(relation, 'link', explanation, fromRules),
       ruleIds: summary.ruleIds,
       modifications,
       explanation,

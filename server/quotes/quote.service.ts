@@ -164,6 +164,7 @@ export class QuoteService {
           chassisModelYear: sheet.chassisModelYear ?? undefined,
           vin: sheet.vin ?? undefined,
           vehicleId: sheet.vehicleId ?? undefined,
+          ...sheet.faceFinish,
         },
       }
     }

@@ -12,6 +12,8 @@ export type Companions = {
   distributorHousings?: CompanionPart[]
   /** Adapter plates from the distributor's flange to the head's mount, thinnest first. */
   distributorAdapters?: CompanionPart[]
+  /** Hardened washers and spacers for the head bolts' thread, thinnest first. */
+  headBoltWashers?: CompanionPart[]
 }
 
 export type IgnitionFigures = {

@@ -9,6 +9,8 @@ import { beltTeethForCentre, centreDistanceForBeltMm } from '../../shared/engine
 import { parseMetricThread } from '../../shared/schemas/part-attributes'
 import type { BuildContext } from '../../shared/schemas/build'
 import type { Part } from '../../shared/schemas/part'
+import { deckFinishFigures, type DeckFinishFigures } from './figures-deck'
+import { headBoltPositionFigures, type HeadBoltPositionFigures } from './figures-head-bolts'
 import { ignitionFigures, type Companions, type IgnitionFigures } from './figures-ignition'
 
 /** What the figures read of a part. */
@@ -32,6 +34,8 @@ export type FigureFacts = {
     lengthRangeMm: { min: number; max: number }
     washerStackMm?: number
   }
+  /** Bolt positions whose boss differs from the head's usual height, where the head lists them. */
+  headBoltPositions?: HeadBoltPositionFigures
   timing?: { centreMm: number; centreShiftMm?: number; centreShiftAbsMm?: number; beltTeethNeeded?: number }
   injector?: { neededCcMin: number; availableCcMin: number; headroomPct: number; railPressureBar: number }
   quench?: { mm: number; status: QuenchStatus; minMm: number; maxMm: number }
@@ -44,6 +48,8 @@ export type FigureFacts = {
   }
   engineModelYear?: number
   ignition?: IgnitionFigures
+  /** Deck and head face as measured, against the gasket's construction. */
+  deckFinish?: DeckFinishFigures
   fuelSystemOpened?: boolean
   electricsTouched?: boolean
 }
@@ -224,11 +230,13 @@ export function computeFigures(parts: SlotParts, context: BuildContext = {}, com
   const headLift = text(parts.head, 'valveLift')
   if (ecuVvl !== undefined && headLift) figures.vvlMatch = ecuVvl === (headLift === 'variable')
   figures.headBolt = headBolt(parts)
+  figures.headBoltPositions = headBoltPositionFigures(parts, companions)
   figures.timing = timing(parts)
   figures.injector = injector(parts, context)
   figures.quench = quench(parts)
   figures.injectorCalibration = injectorCalibration(parts)
   figures.ignition = ignitionFigures(parts, companions)
+  figures.deckFinish = deckFinishFigures(parts, context)
   if (parts.block?.yearTo) figures.engineModelYear = parts.block.yearTo
   figures.fuelSystemOpened = Boolean(parts['fuel-rail'] || parts.injector || parts['intake-manifold'])
   figures.electricsTouched = Boolean(parts.ecu || parts.harness)

@@ -9,7 +9,8 @@ import { renderTemplate, resolvePath, templateReferences } from './templates'
 export type Facts = Record<string, unknown>
 
 /** A rule that fired, with its texts filled in from the facts. */
-export type RuleOutcome = { ruleId: string; ruleName: string; ruleTitle: string; event: RuleEvent }
+/** `measured`: from a file that judges the engine's measured condition (see the rule-file schema). */
+export type RuleOutcome = { ruleId: string; ruleName: string; ruleTitle: string; event: RuleEvent; measured?: boolean }
 
 type CompiledEngine = { engine: Engine; reads: { fact: string; path: string }[] }
 
@@ -54,7 +55,7 @@ function renderEvent(event: RuleEvent, facts: Facts): RuleEvent {
 export class RuleBook {
   private readonly pairEngines = new Map<string, CompiledEngine>()
   private readonly buildEngine: CompiledEngine
-  private readonly ruleInfo = new Map<string, { id: string; title: string; event: RuleEvent }>()
+  private readonly ruleInfo = new Map<string, { id: string; title: string; event: RuleEvent; measured: boolean }>()
   private readonly cache = new Map<string, RuleOutcome[]>()
 
   constructor(readonly loaded: LoadedRules) {
@@ -81,7 +82,7 @@ export class RuleBook {
     const reads: { fact: string; path: string }[] = []
     for (const { file, rule } of rules) {
       const name = `${file.id}/${rule.name}`
-      this.ruleInfo.set(name, { id: file.id, title: file.title, event: rule.event })
+      this.ruleInfo.set(name, { id: file.id, title: file.title, event: rule.event, measured: file.measured === true })
       engine.addRule({
         name,
         priority: rule.priority ?? 1,
@@ -139,6 +140,7 @@ export class RuleBook {
           ruleName: (result.name as string).slice(info.id.length + 1),
           ruleTitle: info.title,
           event: renderEvent(info.event, facts),
+          ...(info.measured ? { measured: true } : {}),
         }
       })
       .sort((a, b) => a.ruleId.localeCompare(b.ruleId) || a.ruleName.localeCompare(b.ruleName))

@@ -121,6 +121,11 @@ export const ruleFileSchema = z
     source: z.string().min(1),
     scope: z.enum(['pair', 'build']),
     pair: slotPair.optional(),
+    /**
+     * The rules judge this engine's measured condition (given with the build), not the parts:
+     * their modifications apply on top of a reviewed link, which only knows the parts.
+     */
+    measured: z.boolean().optional(),
     rules: z.array(ruleSchema).min(1),
   })
   .strict()

@@ -3,7 +3,8 @@ import { worstVerdict, type ExplanationStep, type Relation } from '../../shared/
 import type { RuleOutcome } from './rule-book'
 import type { RuleExtraPart } from './rule-file.schema'
 
-export type RuleModification = { name: string; reason: string; extraParts: RuleExtraPart[]; ruleId: string }
+/** `measured`: called for by the engine's measured condition, so it applies over a reviewed link too. */
+export type RuleModification = { name: string; reason: string; extraParts: RuleExtraPart[]; ruleId: string; measured?: boolean }
 
 /** What the rules that fired say about one pair, gathered. */
 export type RuleSummary = {
@@ -18,7 +19,7 @@ export type RuleSummary = {
 export function summariseOutcomes(outcomes: RuleOutcome[]): RuleSummary {
   const summary: RuleSummary = { modifications: [], extraParts: [], cautions: [], steps: [], ruleIds: [] }
   const relations: Relation[] = []
-  for (const { ruleId, event } of outcomes) {
+  for (const { ruleId, event, measured } of outcomes) {
     if (!summary.ruleIds.includes(ruleId)) summary.ruleIds.push(ruleId)
     switch (event.type) {
       case 'relation':
@@ -32,6 +33,7 @@ export function summariseOutcomes(outcomes: RuleOutcome[]): RuleSummary {
           reason: event.params.reason,
           extraParts: event.params.extraParts ?? [],
           ruleId,
+          ...(measured ? { measured } : {}),
         })
         summary.steps.push({ type: 'rule', ruleId, relation: 'fits-with-modification', text: event.params.reason })
         break

@@ -89,11 +89,11 @@ export class SharedLinkService {
     if (link.kind === 'sheet') {
       const found = await this.deps.sheets.forSharedLink(link.targetId)
       if (!found) throw new AppError(410, 'link_gone', GONE)
-      const { name, slots, targetPowerKw, fuelOctane, chassisModelYear, vin, notes, updatedAt } = found.sheet
+      const { name, slots, targetPowerKw, fuelOctane, chassisModelYear, vin, faceFinish, notes, updatedAt } = found.sheet
       return {
         kind: 'sheet',
         ...common,
-        sheet: { name, slots, targetPowerKw, fuelOctane, chassisModelYear, vin, notes, updatedAt },
+        sheet: { name, slots, targetPowerKw, fuelOctane, chassisModelYear, vin, faceFinish, notes, updatedAt },
         evaluation: found.evaluation,
       }
     }

@@ -9,6 +9,37 @@ export const slotsInputSchema = slotRecord(
   z.union([z.string().trim().min(1, 'Give a part number.').max(100), z.array(z.string().trim().max(100))]),
 )
 
+const roughness = (label: string) =>
+  z
+    .number({ error: () => `${label} must be a number of µm Ra.` })
+    .positive(`${label} must be above zero.`)
+    .max(25, `${label} must be at most 25 µm Ra.`)
+    .optional()
+const flatness = (label: string) =>
+  z
+    .number({ error: () => `${label} must be a number of mm.` })
+    .min(0, `${label} cannot be below zero.`)
+    .max(2, `${label} must be at most 2 mm.`)
+    .optional()
+
+/** The faces as measured on this engine: average roughness (µm Ra) and out-of-flat over the face (mm). */
+export const faceFinishSchema = z.object({
+  deckRaUm: roughness('Deck finish'),
+  deckFlatnessMm: flatness('Deck out-of-flat'),
+  headRaUm: roughness('Head face finish'),
+  headFlatnessMm: flatness('Head face out-of-flat'),
+})
+export type FaceFinish = z.infer<typeof faceFinishSchema>
+export const FACE_FINISH_FIELDS = Object.keys(faceFinishSchema.shape) as (keyof FaceFinish)[]
+
+/** The measured faces of a build's context, or null when none was measured (as a sheet stores it). */
+export function faceFinishOf(context: FaceFinish): FaceFinish | null {
+  const measured = Object.fromEntries(
+    FACE_FINISH_FIELDS.flatMap((field) => (context[field] === undefined ? [] : [[field, context[field]]])),
+  )
+  return Object.keys(measured).length ? (measured as FaceFinish) : null
+}
+
 export const buildContextSchema = z.object({
   targetPowerKw: z
     .number({ error: () => 'Target power must be a number of kW.' })
@@ -37,6 +68,7 @@ export const buildContextSchema = z.object({
   engineOut: z.boolean().optional(),
   /** The build removes or disables an emission control (catalyst, EGR, evaporative). */
   emissionControlsRemoved: z.boolean().optional(),
+  ...faceFinishSchema.shape,
 })
 export type BuildContext = z.infer<typeof buildContextSchema>
 
@@ -205,6 +237,7 @@ export const buildSheetUpdateSchema = z
     chassisModelYear: buildContextSchema.shape.chassisModelYear.unwrap().nullable(),
     vin: buildContextSchema.shape.vin.unwrap().nullable(),
     vehicleId: buildContextSchema.shape.vehicleId.unwrap().nullable(),
+    faceFinish: faceFinishSchema.nullable(),
     notes: z.string().max(4000),
     checklist: checklistTicksSchema,
   })
@@ -222,6 +255,8 @@ export const buildSheetSchema = z.object({
   vin: z.string().nullable(),
   /** The vehicle application it was planned from (null for one planned from parts alone, or saved before this was kept). */
   vehicleId: z.number().int().nullable().default(null),
+  /** Deck and head face as measured (null when not measured). */
+  faceFinish: faceFinishSchema.nullable().default(null),
   notes: z.string(),
   checklist: z.record(z.string(), z.array(z.number().int())).default({}),
   /** The verdict and labour as of the last save (null for a sheet saved before they were kept). */

@@ -14,6 +14,15 @@ const unknownAttribute = z.union([z.string(), z.number(), z.boolean()])
 /** ISO metric thread notation, e.g. M11x1.5 (diameter x pitch, mm). */
 export const metricThreadSchema = z.string().regex(/^M\d+(\.\d+)?x\d+(\.\d+)?$/, 'Thread must read like M11x1.5 (diameter x pitch in mm).')
 
+/** Boss heights per head-bolt position in the manual's tightening order, mm, separated by ";" (e.g. 98;98;96.5;98). */
+export const bossHeightsSchema = z
+  .string()
+  .trim()
+  .regex(
+    /^\d+(\.\d+)?(\s*;\s*\d+(\.\d+)?){0,31}$/,
+    'Boss heights are mm per bolt position in tightening order, separated by ";" (like 98;98;96.5).',
+  )
+
 export const TOOTH_PROFILES = ['trapezoidal', 'curvilinear', 'modified-curvilinear'] as const
 const toothProfile = z.enum(TOOTH_PROFILES)
 const toothed = { teeth: count, pitchMm: mm, profile: toothProfile, widthMm: mm }
@@ -54,6 +63,10 @@ export const attributeShapes = {
     camNose: code,
     camAboveDeckMm: mm,
     material: z.enum(MATERIALS),
+    /** Where one boss differs (a repaired corner), the height at every bolt position. */
+    bossHeightsMm: bossHeightsSchema,
+    /** Metal machined off the gasket face; chamber volume and heights are the skimmed head's own. */
+    skimmedMm: z.number().min(0).max(3),
   },
   'head-gasket': {
     boreMm: mm,
@@ -128,6 +141,12 @@ export function knownAttributes(kind: PartKind): { name: string; type: 'number' 
     name,
     type: schema instanceof z.ZodNumber ? 'number' : schema instanceof z.ZodBoolean ? 'boolean' : 'text',
   }))
+}
+
+/** The positions of a bossHeightsMm value, numbered from 1 in tightening order; null when it does not read. */
+export function parseBossHeights(value: unknown): { position: string; bossHeightMm: number }[] | null {
+  if (typeof value !== 'string' || !bossHeightsSchema.safeParse(value).success) return null
+  return value.split(';').map((height, index) => ({ position: String(index + 1), bossHeightMm: Number(height.trim()) }))
 }
 
 export function parseMetricThread(thread: string): { diameterMm: number; pitchMm: number } | null {

@@ -33,6 +33,7 @@ export const sharedSheetSchema = buildSheetSchema.pick({
   fuelOctane: true,
   chassisModelYear: true,
   vin: true,
+  faceFinish: true,
   notes: true,
   updatedAt: true,
 })

@@ -1,6 +1,6 @@
 import type { LocationQuery, LocationQueryRaw } from 'vue-router'
 import { SLOT_IDS, type SlotId } from '@shared/build-template'
-import type { BuildContext, EvaluateRequest } from '@shared/schemas/build'
+import { FACE_FINISH_FIELDS, type BuildContext, type EvaluateRequest } from '@shared/schemas/build'
 import { queryNumber, queryText } from './route-query'
 
 export type PlannerSlots = Partial<Record<SlotId, string>>
@@ -14,6 +14,10 @@ const CONTEXT_KEYS = {
   vin: 'vin',
   /** The vehicle application it was planned from (Plan from this vehicle), for the quote's make and model. */
   vehicleId: 'vehicle',
+  deckRaUm: 'deckRa',
+  deckFlatnessMm: 'deckFlat',
+  headRaUm: 'headRa',
+  headFlatnessMm: 'headFlat',
 } as const
 type NumberField = Exclude<keyof typeof CONTEXT_KEYS, 'vin' | 'vehicleId'>
 
@@ -28,7 +32,7 @@ export function plannerFromQuery(query: LocationQuery): PlannerState {
     if (value) slots[slot] = value
   }
   const context: BuildContext = {}
-  for (const field of ['targetPowerKw', 'fuelOctane', 'chassisModelYear'] as NumberField[]) {
+  for (const field of ['targetPowerKw', 'fuelOctane', 'chassisModelYear', ...FACE_FINISH_FIELDS] as NumberField[]) {
     const value = queryNumber(query[CONTEXT_KEYS[field]])
     if (value !== undefined) context[field] = value
   }

@@ -9,6 +9,10 @@ const CONTEXT_FIELDS: Record<string, { label: string; inputId: string }> = {
   fuelOctane: { label: 'Fuel octane', inputId: 'ctx-octane' },
   chassisModelYear: { label: 'Car model year', inputId: 'ctx-year' },
   vin: { label: 'VIN', inputId: 'ctx-vin' },
+  deckRaUm: { label: 'Deck finish', inputId: 'ctx-deck-ra' },
+  deckFlatnessMm: { label: 'Deck out-of-flat', inputId: 'ctx-deck-flat' },
+  headRaUm: { label: 'Head face finish', inputId: 'ctx-head-ra' },
+  headFlatnessMm: { label: 'Head face out-of-flat', inputId: 'ctx-head-flat' },
 }
 
 /**

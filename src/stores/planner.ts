@@ -10,6 +10,7 @@ import type {
   Evaluation,
   FillResult,
 } from '@shared/schemas/build'
+import { faceFinishOf } from '@shared/schemas/build'
 import { buildsApi } from '@/api/builds'
 import { useRemote } from '@/composables/useRemote'
 import { buildKey, evaluateBody, filledSlotCount, type PlannerSlots, type PlannerState } from '@/lib/planner-query'
@@ -27,7 +28,7 @@ export function sheetState(saved: BuildSheet): PlannerState {
   if (saved.chassisModelYear !== null) context.chassisModelYear = saved.chassisModelYear
   if (saved.vin) context.vin = saved.vin
   if (saved.vehicleId !== null) context.vehicleId = saved.vehicleId
-  return { slots, context }
+  return { slots, context: { ...context, ...saved.faceFinish } }
 }
 
 /**
@@ -132,6 +133,7 @@ export const usePlannerStore = defineStore('planner', () => {
       chassisModelYear: c.chassisModelYear ?? null,
       vin: c.vin ?? null,
       vehicleId: c.vehicleId ?? null,
+      faceFinish: faceFinishOf(c),
       checklist: ticks.value,
     }
   }

@@ -37,9 +37,8 @@ describe.skipIf(!run)('counter: what fits a head, and the fit graph', () => {
     await page.waitForURL(/\/parts\/TM-HD-2000$/)
   })
 
-  it('shows the head with its identical number and what else fits it, grouped by kind and relation', async () => {
+  it('shows the head and what else fits it, grouped by kind and relation', async () => {
     await expect.poll(() => page.getByRole('heading', { level: 1 }).textContent(), within).toContain('TM-HD-2000')
-    expect(await page.getByRole('link', { name: 'TM-HD-2000R' }).first().isVisible()).toBe(true)
     const blocksWithMod = page.getByRole('list', { name: 'Cylinder block: fits with modification' })
     expect(await blocksWithMod.textContent()).toContain('TM-BL-1800')
     expect(await blocksWithMod.textContent()).toContain('Fit an oil feed restrictor')
@@ -83,7 +82,7 @@ describe.skipIf(!run)('counter: what fits a head, and the fit graph', () => {
     expect(await legend.textContent()).toContain('Same part, another number')
     const table = page.getByRole('table')
     expect(await table.textContent()).toContain('TM-BL-1800')
-    expect(await page.getByRole('img', { name: /Fit graph around TM-HD-2000: 4 parts, 3 connections/ }).count()).toBe(1)
+    expect(await page.getByRole('img', { name: /Fit graph around TM-HD-2000: 3 parts, 2 connections/ }).count()).toBe(1)
     await saveScreenshot(page, 'graph-neighbourhood')
   })
 

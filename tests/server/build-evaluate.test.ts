@@ -1,4 +1,4 @@
-import { readFileSync } from 'node:fs'
+import { readdirSync, readFileSync } from 'node:fs'
 import { afterAll, beforeAll, describe, expect, it } from 'vitest'
 import { expectBadRequest } from '../helpers/expect-error'
 import { createTestApp, type TestApp } from '../helpers/test-app'
@@ -20,6 +20,10 @@ type DemoBuild = {
   vin?: string
 }
 const demoBuilds = JSON.parse(readFileSync('data/demo/builds.json', 'utf8')) as DemoBuild[]
+const ruleFilesText = readdirSync('rules')
+  .filter((file) => file.endsWith('.json'))
+  .map((file) => readFileSync(`rules/${file}`, 'utf8'))
+  .join('\n')
 const demo = (name: string) => demoBuilds.find((b) => b.name === name)!
 const evaluate = (build: Omit<DemoBuild, 'name'>) => agent.post('/api/builds/evaluate').send(build)
 
@@ -89,6 +93,24 @@ describe('POST /api/builds/evaluate on the demo builds', () => {
     const rules = (await agent.get('/api/rules')).body as { id: string }[]
     expect(rules.length).toBeGreaterThanOrEqual(15)
     expect([...fired].sort()).toEqual(rules.map((r) => r.id).sort())
+  })
+
+  it('together, the demo builds show every verdict, every compliance status and every modification the rules can call for', async () => {
+    const verdicts = new Set<string>()
+    const compliance = new Set<string>()
+    const applied = new Set<string>()
+    for (const { name: _name, ...build } of demoBuilds) {
+      const body = (await evaluate(build)).body as { verdict: string; compliance: { status: string }; modifications: { name: string }[] }
+      verdicts.add(body.verdict)
+      compliance.add(body.compliance.status)
+      for (const modification of body.modifications) applied.add(modification.name)
+    }
+    expect([...verdicts].sort()).toEqual(['does-not-fit', 'fits', 'fits-with-modification', 'unknown'])
+    expect([...compliance].sort()).toEqual(['blocked', 'check', 'ok'])
+    const named = new Set<string>()
+    for (const spec of JSON.parse(readFileSync('rules/catalogue/modifications.json', 'utf8')) as { name: string }[]) named.add(spec.name)
+    const calledByRules = [...named].filter((name) => ruleFilesText.includes(`"modification": "${name}"`))
+    expect(calledByRules.filter((name) => !applied.has(name))).toEqual([])
   })
 
   it('judges only mating pairs whose two slots are filled and lists the empty slots', async () => {

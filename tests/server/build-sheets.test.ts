@@ -114,13 +114,23 @@ describe('/api/builds (build sheets)', () => {
 })
 
 /** The build context a saved sheet carries, as the planner sends it. */
-function context(sheet: { targetPowerKw: number | null; fuelOctane: number | null; chassisModelYear: number | null; vin: string | null }) {
-  return Object.fromEntries(
-    Object.entries({
-      targetPowerKw: sheet.targetPowerKw,
-      fuelOctane: sheet.fuelOctane,
-      chassisModelYear: sheet.chassisModelYear,
-      vin: sheet.vin,
-    }).filter(([, value]) => value !== null),
-  )
+type SheetContext = {
+  targetPowerKw: number | null
+  fuelOctane: number | null
+  chassisModelYear: number | null
+  vin: string | null
+  faceFinish: Record<string, number> | null
+}
+function context(sheet: SheetContext) {
+  return {
+    ...Object.fromEntries(
+      Object.entries({
+        targetPowerKw: sheet.targetPowerKw,
+        fuelOctane: sheet.fuelOctane,
+        chassisModelYear: sheet.chassisModelYear,
+        vin: sheet.vin,
+      }).filter(([, value]) => value !== null),
+    ),
+    ...sheet.faceFinish,
+  }
 }

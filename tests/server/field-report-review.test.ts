@@ -65,10 +65,10 @@ describe('approving a field report', () => {
     expect([contradicted[0]!.from, contradicted[0]!.to].sort()).toEqual(['TM-BL-1800', 'TM-HD-1800'])
     expect((await editor.get('/api/links?contradicted=2')).status).toBe(400)
     // Reached through an identical number, the line names the link its reports are on, and they are found there.
-    const throughIdentical = await fitOf('TM-HD-2000R', 'TM-BL-1800')
+    const throughIdentical = await fitOf('TM-HD-1810', 'TM-BL-2001')
     expect(throughIdentical).toMatchObject({ fieldReports: { confirmed: 1 } })
     const [linkFrom, linkTo] = (throughIdentical as Fit & { linkParts: [string, string] }).linkParts
-    expect([linkFrom, linkTo].sort()).toEqual(['TM-BL-1800', 'TM-HD-2000'])
+    expect([linkFrom, linkTo].sort()).toEqual(['TM-BL-2000', 'TM-HD-1810'])
     const reports = (await editor.get(`/api/field-reports?from=${linkFrom}&to=${linkTo}`)).body.items as { id: number }[]
     expect(reports.map((report) => report.id)).toContain(id)
     // A build with the confirmed pair says so on the pair, and a rule-decided pair carries no report.

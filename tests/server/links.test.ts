@@ -120,7 +120,7 @@ describe('/api/links (editors review and edit the fitment graph)', () => {
   it('keeps one relation per pair: no identity over a link, no link over an identity', async () => {
     const overLink = await editor.post('/api/identities').send({ partA: 'TM-HD-2000', partB: 'TM-BL-2000' })
     expect(overLink.status).toBe(409)
-    const overIdentity = await editor.post('/api/links').send({ fromPart: 'TM-HD-2000', toPart: 'TM-HD-2000R', relation: 'fits' })
+    const overIdentity = await editor.post('/api/links').send({ fromPart: 'TM-BL-2000', toPart: 'TM-BL-2001', relation: 'fits' })
     expect(overIdentity.status).toBe(409)
     expect(overIdentity.body.error.message).toMatch(/identical/)
   })

@@ -35,10 +35,11 @@ describe('GET /api/parts/:partNumber/substitutes', () => {
   })
 
   it('never offers the part itself or an identical number, and only parts of the same kind', async () => {
-    const response = await counter.get('/api/parts/TM-HD-2000/substitutes')
-    expect(numbers(response.body)).not.toContain('TM-HD-2000')
-    expect(numbers(response.body)).not.toContain('TM-HD-2000R')
-    expect(response.body.items.every((item: Item & { part: { kind: string } }) => item.part.kind === 'head')).toBe(true)
+    const response = await counter.get('/api/parts/TM-BL-2000/substitutes')
+    expect(numbers(response.body)).toContain('TM-BL-1800')
+    expect(numbers(response.body)).not.toContain('TM-BL-2000')
+    expect(numbers(response.body)).not.toContain('TM-BL-2001')
+    expect(response.body.items.every((item: Item & { part: { kind: string } }) => item.part.kind === 'block')).toBe(true)
   })
 
   it('answers an empty list for a part with no reviewed fits', async () => {

@@ -17,6 +17,7 @@ function sheet(id: number, name: string, slots: Record<string, string>, notes = 
     chassisModelYear: null,
     vin: null,
     vehicleId: null,
+    faceFinish: null,
     owner: { id: 1, name: 'A. Tech' },
     createdAt: '2026-01-01T00:00:00.000Z',
     updatedAt: '2026-01-01T00:00:00.000Z',

@@ -11,6 +11,14 @@ import {
 } from '@/lib/planner-query'
 
 describe('planner address', () => {
+  it('keeps the deck and head face readings in the address, as the sheet saves them', () => {
+    const query = { block: 'ZX-BL-1', deckRa: '2.4', deckFlat: '0.03', headFlat: '0.08' }
+    const state = plannerFromQuery(query)
+    expect(state.context).toEqual({ deckRaUm: 2.4, deckFlatnessMm: 0.03, headFlatnessMm: 0.08 })
+    expect(plannerToQuery(state)).toEqual(query)
+    expect(evaluateBody(state)).toMatchObject({ deckRaUm: 2.4, deckFlatnessMm: 0.03, headFlatnessMm: 0.08 })
+  })
+
   it('reads slots and context from the query and writes the same query back', () => {
     const query = { block: 'ZX-BL-1', head: 'ZX-HD-2', power: '110', octane: '91', year: '1994', vin: 'ABC123' }
     const state = plannerFromQuery(query)

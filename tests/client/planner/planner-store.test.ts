@@ -16,6 +16,7 @@ function sheet(overrides: Partial<BuildSheet> = {}): BuildSheet {
     chassisModelYear: null,
     vin: null,
     vehicleId: null,
+    faceFinish: null,
     notes: '',
     checklist: {},
     verdict: null,
@@ -45,6 +46,13 @@ describe('planner store', () => {
     expect(plannerToQuery(sheetState(sheet()))).toEqual({ block: 'ZY-BL-1', head: 'ZX-HD-2', power: '110' })
   })
 
+  it("opens a sheet's deck and head face readings into the address and saves them back as one field", () => {
+    const state = sheetState(sheet({ faceFinish: { deckRaUm: 2.4, headFlatnessMm: 0.08 } }))
+    expect(plannerToQuery(state)).toMatchObject({ deckRa: '2.4', headFlat: '0.08' })
+    expect(usePlannerStore().sheetUpdate(state).faceFinish).toEqual({ deckRaUm: 2.4, headFlatnessMm: 0.08 })
+    expect(usePlannerStore().sheetUpdate(sheetState(sheet())).faceFinish).toBeNull()
+  })
+
   it('saves every context field, clearing with null what the build no longer has', () => {
     const planner = usePlannerStore()
     const state = { slots: { block: 'ZY-BL-1', head: 'ZX-HD-2' }, context: { targetPowerKw: 110 } }
@@ -55,6 +63,7 @@ describe('planner store', () => {
       chassisModelYear: null,
       vin: null,
       vehicleId: null,
+      faceFinish: null,
       checklist: {},
     })
     expect(planner.sheetInput(state, 'Copy', 'n')).toEqual({
