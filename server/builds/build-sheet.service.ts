@@ -4,6 +4,8 @@ import { faceFinishOf, type BuildSheet, type BuildSheetInput, type BuildSheetUpd
 import type { User } from '../../shared/schemas/auth'
 import { can } from '../../shared/permissions'
 import { BuildSheetEntity } from './build-sheet.entity'
+import { BuildSheetRepository, type BuildSheetRow } from './build-sheet.repository'
+import { databaseOf } from '../db/sqlite-connection'
 import { AppError } from '../errors/app-error'
 import { resolveSlots } from './build-slots'
 import type { PartService } from '../catalogue/part.service'
@@ -31,6 +33,24 @@ function toBuildSheet(entity: BuildSheetEntity): BuildSheet {
   }
 }
 
+function rowOf(entity: BuildSheetEntity): BuildSheetRow {
+  const { name, slots, targetPowerKw, fuelOctane, chassisModelYear, vin, vehicleId, faceFinish, notes, checklist } = entity
+  return {
+    name,
+    slots,
+    targetPowerKw,
+    fuelOctane,
+    chassisModelYear,
+    vin,
+    vehicleId,
+    faceFinish: faceFinish ?? null,
+    notes,
+    checklist: checklist ?? {},
+    savedVerdict: entity.savedVerdict ?? null,
+    labourMinutes: entity.labourMinutes ?? null,
+  }
+}
+
 /** A step ticked twice is ticked once; an untouched modification is not stored. */
 function sortedTicks(ticks: Record<string, number[]>): Record<string, number[]> {
   return Object.fromEntries(
@@ -44,12 +64,15 @@ function sortedTicks(ticks: Record<string, number[]>): Record<string, number[]> 
 export class BuildSheetService {
   private readonly sheets: Repository<BuildSheetEntity>
 
+  private readonly rows: BuildSheetRepository
+
   constructor(
     dataSource: DataSource,
     private readonly parts: PartService,
     private readonly evaluation: BuildEvaluationService,
   ) {
     this.sheets = dataSource.getRepository(BuildSheetEntity)
+    this.rows = new BuildSheetRepository(databaseOf(dataSource))
   }
 
   async list(user: User): Promise<BuildSheet[]> {
@@ -99,8 +122,8 @@ export class BuildSheetService {
       checklist: sortedTicks(input.checklist),
     })
     await this.judge(entity)
-    const saved = await this.sheets.save(entity)
-    return this.get(saved.id, user)
+    const id = await this.rows.insert(user.id, rowOf(entity))
+    return this.get(id, user)
   }
 
   async update(id: number, change: BuildSheetUpdate, user: User): Promise<BuildSheet> {
@@ -116,7 +139,7 @@ export class BuildSheetService {
     if (change.notes !== undefined) entity.notes = change.notes
     if (change.checklist !== undefined) entity.checklist = sortedTicks(change.checklist)
     await this.judge(entity)
-    await this.sheets.save(entity)
+    await this.rows.update(id, rowOf(entity))
     return this.get(id, user)
   }
 
@@ -159,7 +182,7 @@ export class BuildSheetService {
   }
 
   async remove(id: number, user: User): Promise<void> {
-    const entity = await this.owned(id, user)
-    await this.sheets.remove(entity)
+    await this.owned(id, user)
+    await this.rows.remove(id)
   }
 }

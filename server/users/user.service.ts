@@ -1,7 +1,5 @@
 import bcrypt from 'bcryptjs'
-import type BetterSqlite3 from 'better-sqlite3'
 import { In, type DataSource, type Repository } from 'typeorm'
-import { inTransaction } from '../db/sqlite-connection'
 import type { Role, User, UserUpdateInput } from '../../shared/schemas/auth'
 import { UserEntity } from './user.entity'
 import { AppError } from '../errors/app-error'
@@ -9,7 +7,7 @@ import { SessionRepository } from '../auth/session.repository'
 import { databaseOf } from '../db/sqlite-connection'
 import { SecurityEventService } from '../security/security-events.service'
 import type { NewSecurityEvent } from '../security/security-event.repository'
-import { sqliteTime } from '../db/sqlite-database'
+import type { SqlValue } from '../db/database'
 import { BCRYPT_ROUNDS, checkNewPassword, hashPassword, needsRehash } from '../auth/password-policy'
 
 // Compared against when the e-mail is unknown, so both failures take the same time.
@@ -32,10 +30,6 @@ export function toUser(entity: UserEntity): User {
 }
 
 /** A home site must be a site: a 400 on the field otherwise. */
-function requireSite(db: BetterSqlite3.Database, siteId: number | null) {
-  if (siteId !== null && !db.prepare('SELECT 1 FROM site WHERE id = ?').get(siteId)) throw noSite(siteId)
-}
-
 function noSite(siteId: number): AppError {
   return AppError.badRequest(`No site ${siteId}.`, [{ path: 'homeSiteId', message: `No site ${siteId}; choose one of the sites.` }])
 }
@@ -112,38 +106,41 @@ export class UserService {
   ): Promise<User> {
     if (change.password) checkNewPassword(change.password)
     const passwordHash = change.password ? await hashPassword(change.password) : null
-    const before = await inTransaction(this.dataSource, (db) => {
-      const current = db.prepare('SELECT role, email, disabledAt FROM user WHERE id = ?').get(id) as
-        { role: Role; email: string; disabledAt: string | null } | undefined
+    // Through the port: one transaction on either database, which waits its turn while an import writes.
+    const before = await databaseOf(this.dataSource).transaction(async (tx) => {
+      const current = await tx.get<{ role: Role; email: string; disabledAt: unknown }>(
+        'SELECT "role", "email", "disabledAt" FROM "user" WHERE "id" = ?',
+        [id],
+      )
       if (!current) throw AppError.notFound(`No user with id ${id}.`)
-      if (change.homeSiteId !== undefined) requireSite(db, change.homeSiteId)
+      if (change.homeSiteId !== undefined && change.homeSiteId !== null) {
+        if (!(await tx.get('SELECT 1 AS "found" FROM site WHERE "id" = ?', [change.homeSiteId]))) throw noSite(change.homeSiteId)
+      }
       const losesAdmin = current.role === 'admin' && ((change.role && change.role !== 'admin') || change.disabled === true)
       if (losesAdmin) {
-        const { admins } = db.prepare("SELECT COUNT(*) AS admins FROM user WHERE role = 'admin' AND disabledAt IS NULL").get() as {
-          admins: number
-        }
-        if (admins <= 1) throw AppError.conflict('Fitwright needs at least one administrator; make another one first.')
+        const row = await tx.get<{ admins: number }>(
+          'SELECT CAST(COUNT(*) AS INTEGER) AS "admins" FROM "user" WHERE "role" = \'admin\' AND "disabledAt" IS NULL',
+        )
+        if ((row?.admins ?? 0) <= 1) throw AppError.conflict('Fitwright needs at least one administrator; make another one first.')
       }
       if (id === acting.userId && change.disabled === true) throw AppError.conflict('You cannot disable your own account.')
       if (id === acting.userId && change.role && change.role !== 'admin' && current.role === 'admin') {
         throw AppError.conflict('You cannot take the administrator role from yourself.')
       }
-      const disabledAt = change.disabled === undefined ? undefined : change.disabled ? sqliteTime(new Date()) : null
-      db.prepare(
-        `UPDATE user SET name = COALESCE(?, name), role = COALESCE(?, role), passwordHash = COALESCE(?, passwordHash)${
-          disabledAt === undefined ? '' : ', disabledAt = ?'
-        }${change.homeSiteId === undefined ? '' : ', homeSiteId = ?'} WHERE id = ?`,
-      ).run(
-        change.name ?? null,
-        change.role ?? null,
-        passwordHash,
-        ...(disabledAt === undefined ? [] : [disabledAt]),
-        ...(change.homeSiteId === undefined ? [] : [change.homeSiteId]),
-        id,
-      )
+      const sets: string[] = []
+      const values: SqlValue[] = []
+      const set = (column: string, value: SqlValue) => {
+        sets.push(`"${column}" = ?`)
+        values.push(value)
+      }
+      if (change.name !== undefined) set('name', change.name)
+      if (change.role !== undefined) set('role', change.role)
+      if (passwordHash) set('passwordHash', passwordHash)
+      if (change.disabled !== undefined) set('disabledAt', change.disabled ? new Date() : null)
+      if (change.homeSiteId !== undefined) set('homeSiteId', change.homeSiteId)
+      if (sets.length) await tx.run(`UPDATE "user" SET ${sets.join(', ')} WHERE "id" = ?`, [...values, id])
       // A password set here makes any invitation or reset link still out for the user worthless.
-      if (passwordHash)
-        db.prepare('UPDATE account_token SET usedAt = ? WHERE userId = ? AND usedAt IS NULL').run(sqliteTime(new Date()), id)
+      if (passwordHash) await tx.run('UPDATE account_token SET "usedAt" = ? WHERE "userId" = ? AND "usedAt" IS NULL', [new Date(), id])
       return current
     })
     if (passwordHash || change.disabled === true) {
