@@ -60,8 +60,11 @@ export class UserService {
 
   /** The signed-in user behind a session; a disabled one no longer counts as signed in. */
   async findById(id: number): Promise<User | null> {
-    const entity = await this.users.findOneBy({ id })
-    return entity && !entity.disabledAt ? toUser(entity) : null
+    // Every signed-in request asks this: one prepared statement through the port, not an entity load.
+    const row = await databaseOf(this.dataSource).get<
+      Pick<UserEntity, 'id' | 'email' | 'name' | 'role' | 'passwordHash' | 'homeSiteId'> & { disabledAt: unknown }
+    >('SELECT "id", "email", "name", "role", "passwordHash", "disabledAt", "homeSiteId" FROM "user" WHERE "id" = ?', [id])
+    return row && row.disabledAt === null ? toUser({ ...row, disabledAt: null } as UserEntity) : null
   }
 
   async list(): Promise<User[]> {
