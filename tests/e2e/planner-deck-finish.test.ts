@@ -41,6 +41,20 @@ describe.skipIf(!run)('technician: the deck and head face as measured, against t
     await saveScreenshot(page, `planner-deck-finish-${name}`)
   })
 
+  it.each([
+    ['desktop', 1366, 900],
+    ['tablet', 768, 1024],
+  ])('on %s, a head with one lower boss puts a washer under that bolt only, and the parts list counts it', async (name, width, height) => {
+    await page.setViewportSize({ width, height })
+    await page.goto(`${server.url}/planner?block=TM-BL-2000&head=TM-HD-1812&head-gasket=TM-HG-2000&head-bolt=TM-HB-1810`)
+    await expect
+      .poll(() => pairReason(page, 'Head bolts into block threads').textContent(), within)
+      .toMatch(/^Position 9 \(boss 85 mm\): bottoms by 0\.8 mm: add one hardened washer \(2 mm\) under this bolt only/)
+    const washers = page.locator('.planner-parts-list tr', { hasText: 'Hardened washers for the odd bolt positions only (TM-XW-1120)' })
+    await expect.poll(() => washers.count(), within).toBe(1)
+    await saveScreenshot(page, `planner-boss-positions-${name}`)
+  })
+
   it('shows an out-of-range reading in the banner with the field named', async () => {
     await page.setViewportSize({ width: 768, height: 1024 })
     await page.goto(`${server.url}/planner?${BUILD}&headFlat=5`)
