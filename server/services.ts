@@ -68,6 +68,7 @@ export function createServices(dataSource: DataSource, config: AppConfig, rules:
   const fieldReportNotices = new FieldReportNotices(outbox, outboxRows, users, fieldReports, config.publicUrl)
   const completion = new BuildCompletionService(parts, graphIndex, evaluation, modifications, stockIndex)
   const shopSettings = new ShopSettingsService(databaseOf(dataSource))
+  const imports = new ImportService(dataSource, { maxRows: config.importMaxRows }, graphIndex, stockIndex)
   const sheets = new BuildSheetService(dataSource, parts, evaluation)
   const securityEvents = new SecurityEventService(dataSource)
   const accountRows = new AccountTokenRepository(databaseOf(dataSource))
@@ -125,8 +126,8 @@ export function createServices(dataSource: DataSource, config: AppConfig, rules:
       publicUrl: config.publicUrl,
     }),
     links: new LinkService(dataSource, parts, graphIndex),
-    imports: new ImportService(dataSource, { maxRows: config.importMaxRows }, graphIndex, stockIndex),
-    exports: new ExportService(dataSource),
+    imports,
+    exports: new ExportService(imports.jobRunner),
     photos,
     stockIndex,
     stock,

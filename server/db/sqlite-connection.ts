@@ -49,7 +49,7 @@ export function databaseOf(dataSource: DataSource): Database {
 function sqlitePort(dataSource: DataSource): SqliteDatabase {
   const port = databaseOf(dataSource)
   if (!(port instanceof SqliteDatabase)) {
-    // Imports, reverts and hand edits of links still write through the SQLite connection: say so instead of failing obscurely.
+    // Imports, reverts and exports still run on the SQLite connection: say so instead of failing obscurely.
     throw new AppError(501, 'needs_sqlite', 'This change still needs the embedded SQLite database; on PostgreSQL it is not available yet.')
   }
   return port

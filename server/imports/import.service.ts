@@ -79,7 +79,7 @@ export class ImportService {
     return this.runner.close()
   }
 
-  /** The runner, for tests that end its worker part-way as a crash would. */
+  /** Where imports run (the import worker, or inline): exports read the catalogue there too, and tests end its worker part-way. */
   get jobRunner(): ImportRunner {
     return this.runner
   }

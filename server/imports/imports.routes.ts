@@ -79,13 +79,13 @@ export function importRoutes(services: { imports: ImportService; exports: Export
   })
 
   // Editors' tool for the spreadsheet round trip; the catalogue as one file is not a counter task.
-  router.get('/export/:file', importers, (req, res) => {
+  router.get('/export/:file', importers, async (req, res) => {
     const { file } = parseParams(exportParamsSchema, req)
     requireImportType(req.user!.role, file.replace('.csv', ''))
     const stamp = new Date().toISOString().slice(0, 10)
     res.attachment(`fitwright-${file.replace('.csv', '')}-${stamp}.csv`)
     res.type('text/csv; charset=utf-8')
-    res.send(`${UTF8_BOM}${services.exports.csv(file)}`)
+    res.send(`${UTF8_BOM}${await services.exports.csv(file)}`)
   })
 
   return router

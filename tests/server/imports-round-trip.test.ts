@@ -12,10 +12,10 @@ import { partInputSchema, type PartInput } from '../../shared/schemas/part-input
 import { PART_KINDS, type PartKind } from '../../shared/schemas/part-kinds'
 import { snakeToCamel } from '../../server/imports/csv/part-row'
 import { openDatabase } from '../../server/db/data-source'
-import { ExportService } from '../../server/imports/export.service'
+import { linksCsv, partsCsv } from '../../server/imports/export.service'
 import { FitGraphIndex } from '../../server/fitment/fit-graph'
 import { ImportService } from '../../server/imports/import.service'
-import { databaseOf, inTransaction } from '../../server/db/sqlite-connection'
+import { databaseOf, inTransaction, sqliteConnection } from '../../server/db/sqlite-connection'
 import { insertIdentityRow, insertLinkRow } from '../../server/fitment/link-rows'
 import { insertPartRows } from '../../server/catalogue/part-writer'
 
@@ -152,12 +152,11 @@ describe('export then import into an empty database (property, fast-check)', () 
         const target = await openDatabase(':memory:')
         try {
           await writeCatalogue(source, catalogue)
-          const exports = new ExportService(source)
           const imports = new ImportService(target, { maxRows: 1000 }, new FitGraphIndex(target))
           for (const type of ['parts', 'links'] as const) {
             // A links file of no links is refused as empty, so there is nothing to import.
             if (type === 'links' && catalogue.links.length === 0) continue
-            const csv = type === 'parts' ? exports.partsCsv() : exports.linksCsv()
+            const csv = type === 'parts' ? partsCsv(sqliteConnection(source)) : linksCsv(sqliteConnection(source))
             const file = path.join(dir, `${type}.csv`)
             writeFileSync(file, csv)
             const user = { id: null, name: 'test' }

@@ -56,7 +56,7 @@ describe('stock.csv exported then previewed as a stock import (property, fast-ch
         for (const [index, { labelled, ...unit }] of units.entries()) {
           await t.services.stock.create(stockInputSchema.parse({ ...unit, label: labelled ? `RT-${run}-${index}` : null }))
         }
-        const csv = t.services.exports.csv('stock.csv')
+        const csv = await t.services.exports.csv('stock.csv')
         const file = path.join(dir, 'stock.csv')
         writeFileSync(file, csv)
         const result = await t.services.imports.run({

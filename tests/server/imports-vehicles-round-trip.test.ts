@@ -60,7 +60,7 @@ describe('vehicles.csv exported then previewed as a vehicles import (property, f
           total += 1
           await t.services.vehicles.create(vehicleInputSchema.parse({ ...vehicle, model: `${vehicle.model} ${total}` }))
         }
-        const csv = t.services.exports.csv('vehicles.csv')
+        const csv = await t.services.exports.csv('vehicles.csv')
         const file = path.join(dir, 'vehicles.csv')
         writeFileSync(file, csv)
         const result = await t.services.imports.run({

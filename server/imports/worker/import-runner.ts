@@ -4,11 +4,15 @@ import { inTransaction, sqliteConnection } from '../../db/sqlite-connection'
 import { ImportJobs, type ImportJobInput, type ImportJobResult, type Report } from '../import-job'
 import type { Touched } from '../import-jobs'
 import { ImportWorker } from './import-worker-client'
+import { exportCsv } from '../export.service'
+import type { ExportFile } from '../../../shared/schemas/imports'
 
 /** Where imports and reverts run: in the import worker, or on the main thread where no worker can open the database. */
 export interface ImportRunner {
   import(input: ImportJobInput, maxRows: number, report: Report): Promise<ImportJobResult>
   revert(batchId: number, userName: string): Promise<Touched>
+  /** An export file, read where the imports run. */
+  export(file: ExportFile): Promise<string>
   close(): Promise<void>
 }
 
@@ -28,6 +32,10 @@ export class WorkerRunner implements ImportRunner {
 
   async revert(batchId: number, userName: string) {
     return (await this.worker.run({ kind: 'revert', batchId, userName })) as Touched
+  }
+
+  async export(file: ExportFile) {
+    return (await this.worker.run({ kind: 'export', file })) as string
   }
 
   close() {
@@ -56,6 +64,10 @@ export class InlineRunner implements ImportRunner {
 
   revert(batchId: number, userName: string) {
     return inTransaction(this.dataSource, (db) => revertBatch(db, batchId, userName))
+  }
+
+  async export(file: ExportFile) {
+    return exportCsv(sqliteConnection(this.dataSource), file)
   }
 
   async close() {}

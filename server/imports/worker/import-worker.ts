@@ -1,6 +1,7 @@
 import { parentPort, workerData } from 'node:worker_threads'
 import Database from 'better-sqlite3'
 import { revertBatch } from '../../audit/revert'
+import { exportCsv } from '../export.service'
 import { ImportJobs } from '../import-job'
 import { sendableError, type JobReply, type JobRequest } from './worker-messages'
 
@@ -43,6 +44,8 @@ async function perform(request: JobRequest): Promise<unknown> {
   }
   const { db, jobs } = connection(request.dbPath)
   if (request.kind === 'revert') return db.transaction(() => revertBatch(db, request.batchId, request.userName)).immediate()
+  // One read transaction, so the file is one moment of the catalogue even while the main thread writes.
+  if (request.kind === 'export') return db.transaction(() => exportCsv(db, request.file)).deferred()
   return jobs.run(request.input, request.maxRows, (phase, done, total) => send({ id: request.id, type: 'progress', phase, done, total }))
 }
 

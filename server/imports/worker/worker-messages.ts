@@ -1,11 +1,14 @@
 import type { FieldError } from '../../../shared/schemas/errors'
-import type { ImportPhase } from '../../../shared/schemas/imports'
+import type { ExportFile, ImportPhase } from '../../../shared/schemas/imports'
 import { AppError } from '../../errors/app-error'
 import type { ImportJobInput } from '../import-job'
 
 /** The work of one job, as the main thread asks for it. */
 export type JobWork =
-  { kind: 'import'; input: ImportJobInput; maxRows: number } | { kind: 'revert'; batchId: number; userName: string } | { kind: 'close' }
+  | { kind: 'import'; input: ImportJobInput; maxRows: number }
+  | { kind: 'revert'; batchId: number; userName: string }
+  | { kind: 'export'; file: ExportFile }
+  | { kind: 'close' }
 
 /** A job for the import worker: the work, on which database file. */
 export type JobRequest = JobWork & { id: number; dbPath: string }
