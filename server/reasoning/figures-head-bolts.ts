@@ -67,13 +67,16 @@ export function headBoltPositionFigures(parts: SlotParts, companions: Companions
   const used = new Set(answers.flatMap((answer) => answer.washersMm))
   const washerParts = washers.filter((part) => used.has(Number(part.attributes.thicknessMm))).map((part) => part.partNumber)
   const common = plan.commonLengthRangeMm
+  const commonLength = common ? `${Math.ceil(common.min)}–${Math.floor(common.max)} mm` : undefined
+  const status = STATUS[worst]!
+  const each = answers.map((answer) => `Position ${answer.position} (boss ${answer.bossHeightMm} mm): ${lowerFirst(answer.reason)}`)
+  // Where a bolt must change anyway, one length for the whole set is what the counter orders.
+  if (status === 'bolt-length' && commonLength) each.push(`a set of ${commonLength} bolts fits every position`)
   return {
-    status: STATUS[worst]!,
-    summary: answers
-      .map((answer) => `Position ${answer.position} (boss ${answer.bossHeightMm} mm): ${lowerFirst(answer.reason)}`)
-      .join('; '),
+    status,
+    summary: each.join('; '),
     washerCount: answers.reduce((sum, answer) => sum + answer.washersMm.length, 0),
     washerParts: washerParts.join(', '),
-    ...(common ? { commonLength: `${Math.ceil(common.min)}–${Math.floor(common.max)} mm` } : {}),
+    ...(commonLength ? { commonLength } : {}),
   }
 }

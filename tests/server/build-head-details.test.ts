@@ -53,6 +53,8 @@ describe('head-bolt boss heights per bolt position', () => {
     expect(bolts.relation).toBe('does-not-fit')
     const reasons = body.pairs.map((p) => p.reason).join(' ')
     expect(reasons).toMatch(/Position 9 \(boss 85 mm\): bottoms by 4\.8 mm; torque-to-yield bolts never get washers/)
+    // Bolt lengths that fit: 88 mm bosses 107.7–126.2 mm, the 85 mm boss 104.7–123.2 mm; both: 108–123 mm.
+    expect(reasons).toContain('a set of 108–123 mm bolts fits every position')
     expect(body.partsList.some((line) => line.description.startsWith('Hardened washers for the odd bolt positions'))).toBe(false)
   })
 
