@@ -1,6 +1,13 @@
 import type { DataSource, Repository } from 'typeorm'
 import { isSlotId } from '../../shared/build-template'
-import { faceFinishOf, type BuildSheet, type BuildSheetInput, type BuildSheetUpdate, type Evaluation } from '../../shared/schemas/build'
+import {
+  faceFinishOf,
+  sheetContext,
+  type BuildSheet,
+  type BuildSheetInput,
+  type BuildSheetUpdate,
+  type Evaluation,
+} from '../../shared/schemas/build'
 import type { User } from '../../shared/schemas/auth'
 import { can } from '../../shared/permissions'
 import { BuildSheetEntity } from './build-sheet.entity'
@@ -161,14 +168,7 @@ export class BuildSheetService {
 
   /** Judges the sheet as it stands; null when it cannot be judged (a part left the catalogue). */
   private evaluateSheet(entity: BuildSheetEntity): Promise<Evaluation | null> {
-    const context = {
-      ...(entity.targetPowerKw !== null && { targetPowerKw: entity.targetPowerKw }),
-      ...(entity.fuelOctane !== null && { fuelOctane: entity.fuelOctane }),
-      ...(entity.chassisModelYear !== null && { chassisModelYear: entity.chassisModelYear }),
-      ...(entity.vin !== null && { vin: entity.vin }),
-      ...entity.faceFinish,
-    }
-    return this.evaluation.evaluate({ slots: entity.slots, ...context }).catch((error: unknown) => {
+    return this.evaluation.evaluate({ slots: entity.slots, ...sheetContext(entity) }).catch((error: unknown) => {
       if (error instanceof AppError) return null
       throw error
     })

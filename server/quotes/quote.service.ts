@@ -1,5 +1,5 @@
 import type { User } from '../../shared/schemas/auth'
-import type { EvaluateRequest } from '../../shared/schemas/build'
+import { sheetContext, type EvaluateRequest } from '../../shared/schemas/build'
 import type { Quote, QuoteList, QuoteListQuery, QuoteRequest, QuoteVehicle } from '../../shared/schemas/quotes'
 import { quoteTotals } from '../../shared/quote-totals'
 import { toIsoTime, type Database } from '../db/database'
@@ -157,15 +157,7 @@ export class QuoteService {
       return {
         buildSheetId: sheet.id,
         buildName: sheet.name,
-        build: {
-          slots: sheet.slots,
-          targetPowerKw: sheet.targetPowerKw ?? undefined,
-          fuelOctane: sheet.fuelOctane ?? undefined,
-          chassisModelYear: sheet.chassisModelYear ?? undefined,
-          vin: sheet.vin ?? undefined,
-          vehicleId: sheet.vehicleId ?? undefined,
-          ...sheet.faceFinish,
-        },
+        build: { slots: sheet.slots, ...sheetContext(sheet) },
       }
     }
     const { customer: _customer, ...build } = request

@@ -2,7 +2,8 @@ import { planHeadBoltWashers, type PositionAnswer } from '../../shared/engineeri
 import type { ThreadMaterial } from '../../shared/engineering/fasteners'
 import { parseBossHeights, parseMetricThread } from '../../shared/schemas/part-attributes'
 import type { Companions } from './figures-ignition'
-import type { FigurePart, SlotParts } from './figures'
+import type { SlotParts } from './figures'
+import { num } from './part-values'
 
 /**
  * The head bolts over a head whose bosses differ by position: what the odd
@@ -18,11 +19,6 @@ export type HeadBoltPositionFigures = {
   washerParts: string
   /** One bolt length that fits every position, when there is one, e.g. "116–121 mm". */
   commonLength?: string
-}
-
-const num = (part: FigurePart | undefined, name: string): number | undefined => {
-  const value = part?.attributes[name]
-  return typeof value === 'number' && Number.isFinite(value) ? value : undefined
 }
 
 const lowerFirst = (text: string) => text.charAt(0).toLowerCase() + text.slice(1)

@@ -10,6 +10,7 @@ import { parseMetricThread } from '../../shared/schemas/part-attributes'
 import type { BuildContext } from '../../shared/schemas/build'
 import type { Part } from '../../shared/schemas/part'
 import { deckFinishFigures, type DeckFinishFigures } from './figures-deck'
+import { bool, num, text } from './part-values'
 import { headBoltPositionFigures, type HeadBoltPositionFigures } from './figures-head-bolts'
 import { ignitionFigures, type Companions, type IgnitionFigures } from './figures-ignition'
 
@@ -57,18 +58,6 @@ export type FigureFacts = {
 /** Hardened washer stacks on offer, thinnest first (whole millimetres up to a spacer's 8 mm). */
 const WASHER_STACKS_MM = [1, 2, 3, 4, 5, 6, 7, 8]
 
-const num = (part: FigurePart | undefined, name: string): number | undefined => {
-  const value = part?.attributes[name]
-  return typeof value === 'number' && Number.isFinite(value) ? value : undefined
-}
-const text = (part: FigurePart | undefined, name: string): string | undefined => {
-  const value = part?.attributes[name]
-  return typeof value === 'string' ? value : undefined
-}
-const bool = (part: FigurePart | undefined, name: string): boolean | undefined => {
-  const value = part?.attributes[name]
-  return typeof value === 'boolean' ? value : undefined
-}
 const round = (value: number, places = 3) => Math.round(value * 10 ** places) / 10 ** places
 
 function compression(parts: SlotParts): Pick<FigureFacts, 'compressionRatio' | 'sweptVolumeCc' | 'clearanceVolumeCc'> {

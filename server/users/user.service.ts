@@ -17,7 +17,10 @@ const DEMO_ROUNDS = 10
 /** The hash of an invited user who has not chosen a password yet: nothing matches it. */
 export const INVITE_PENDING = ''
 
-export function toUser(entity: UserEntity): User {
+/** What a user answer is made of: the entity, or a row read through the port. */
+type UserRow = Pick<UserEntity, 'id' | 'email' | 'name' | 'role' | 'passwordHash' | 'homeSiteId'> & { disabledAt: unknown }
+
+export function toUser(entity: UserRow): User {
   return {
     id: entity.id,
     email: entity.email,
@@ -61,10 +64,11 @@ export class UserService {
   /** The signed-in user behind a session; a disabled one no longer counts as signed in. */
   async findById(id: number): Promise<User | null> {
     // Every signed-in request asks this: one prepared statement through the port, not an entity load.
-    const row = await databaseOf(this.dataSource).get<
-      Pick<UserEntity, 'id' | 'email' | 'name' | 'role' | 'passwordHash' | 'homeSiteId'> & { disabledAt: unknown }
-    >('SELECT "id", "email", "name", "role", "passwordHash", "disabledAt", "homeSiteId" FROM "user" WHERE "id" = ?', [id])
-    return row && row.disabledAt === null ? toUser({ ...row, disabledAt: null } as UserEntity) : null
+    const row = await databaseOf(this.dataSource).get<UserRow>(
+      'SELECT "id", "email", "name", "role", "passwordHash", "disabledAt", "homeSiteId" FROM "user" WHERE "id" = ?',
+      [id],
+    )
+    return row && row.disabledAt === null ? toUser(row) : null
   }
 
   async list(): Promise<User[]> {

@@ -267,6 +267,23 @@ export const buildSheetSchema = z.object({
   updatedAt: z.string(),
 })
 export type BuildSheet = z.infer<typeof buildSheetSchema>
+
+/** What a saved sheet keeps of a build's context, as a context again (nothing for what it does not hold). */
+export type SheetContext = Pick<BuildSheet, 'targetPowerKw' | 'fuelOctane' | 'chassisModelYear' | 'vin' | 'faceFinish'> & {
+  vehicleId?: number | null
+}
+
+/** A saved sheet's context as the planner, an evaluation or a quote takes it. */
+export function sheetContext(sheet: SheetContext): BuildContext {
+  return {
+    ...(sheet.targetPowerKw !== null && { targetPowerKw: sheet.targetPowerKw }),
+    ...(sheet.fuelOctane !== null && { fuelOctane: sheet.fuelOctane }),
+    ...(sheet.chassisModelYear !== null && { chassisModelYear: sheet.chassisModelYear }),
+    ...(sheet.vin && { vin: sheet.vin }),
+    ...(sheet.vehicleId != null && { vehicleId: sheet.vehicleId }),
+    ...sheet.faceFinish,
+  }
+}
 export const buildSheetListSchema = z.array(buildSheetSchema)
 
 export { extraPartSchema }

@@ -1,16 +1,16 @@
 import { defineStore } from 'pinia'
 import { computed, ref } from 'vue'
 import { isSlotId, type SlotId } from '@shared/build-template'
-import type {
-  BuildContext,
-  BuildSheet,
-  ChecklistTicks,
-  BuildSheetInput,
-  BuildSheetUpdate,
-  Evaluation,
-  FillResult,
+import {
+  faceFinishOf,
+  sheetContext,
+  type BuildSheet,
+  type ChecklistTicks,
+  type BuildSheetInput,
+  type BuildSheetUpdate,
+  type Evaluation,
+  type FillResult,
 } from '@shared/schemas/build'
-import { faceFinishOf } from '@shared/schemas/build'
 import { buildsApi } from '@/api/builds'
 import { useRemote } from '@/composables/useRemote'
 import { buildKey, evaluateBody, filledSlotCount, type PlannerSlots, type PlannerState } from '@/lib/planner-query'
@@ -22,13 +22,7 @@ export type PlannerAddress = { sheetId: number | null; query: Record<string, str
 export function sheetState(saved: BuildSheet): PlannerState {
   const slots: PlannerSlots = {}
   for (const [slot, partNumber] of Object.entries(saved.slots)) if (isSlotId(slot)) slots[slot] = partNumber
-  const context: BuildContext = {}
-  if (saved.targetPowerKw !== null) context.targetPowerKw = saved.targetPowerKw
-  if (saved.fuelOctane !== null) context.fuelOctane = saved.fuelOctane
-  if (saved.chassisModelYear !== null) context.chassisModelYear = saved.chassisModelYear
-  if (saved.vin) context.vin = saved.vin
-  if (saved.vehicleId !== null) context.vehicleId = saved.vehicleId
-  return { slots, context: { ...context, ...saved.faceFinish } }
+  return { slots, context: sheetContext(saved) }
 }
 
 /**
