@@ -10,6 +10,7 @@ import type { PartService } from '../catalogue/part.service'
 import { candidatePreference, type Preference } from './candidate-preference'
 import type { Caution } from '../../shared/schemas/build'
 import type { StockIndex } from '../stock/stock-index'
+import { JudgementCache, type CandidateReads } from './judgement-cache'
 
 /** A candidate as the fit graph holds it: its id, number and rule class (attributes and last year). */
 type Row = { id: number; partNumber: string; ruleClass: number }
@@ -68,12 +69,20 @@ export class BuildCompletionService {
     return new CompletionReads(this.modifications)
   }
 
-  /** Candidates for the empty slots of a resolved build (only those in `only`, when given). */
+  /**
+   * Candidates for the empty slots of a resolved build (only those in `only`, when given).
+   * `firstFound` stops each slot at the first part that fits, for callers that ask only whether one does.
+   */
   async completeBuild(
     build: ResolvedBuild,
     graph: FitGraph,
     limit: number,
-    { only, reads = this.reads(), homeSiteId = null }: { only?: SlotId[]; reads?: CompletionReads; homeSiteId?: number | null } = {},
+    {
+      only,
+      reads = this.reads(),
+      homeSiteId = null,
+      firstFound = false,
+    }: { only?: SlotId[]; reads?: CompletionReads; homeSiteId?: number | null; firstFound?: boolean } = {},
   ): Promise<Completion> {
     const result: Completion = { slots: {} }
     for (const slot of BUILD_SLOTS) {
@@ -87,7 +96,7 @@ export class BuildCompletionService {
         }
         continue
       }
-      const { candidates, total } = await this.candidatesFor(slot.id, build, graph, reads, limit, homeSiteId)
+      const { candidates, total } = await this.candidatesFor(slot.id, build, graph, reads, firstFound ? 1 : limit, homeSiteId, firstFound)
       result.slots[slot.id] = {
         matesWith,
         candidates,
@@ -97,17 +106,26 @@ export class BuildCompletionService {
     return result
   }
 
-  /** A candidate in the slot against every filled slot it mates with; null unless all fit. */
-  private async judge(slot: SlotId, row: Row, build: ResolvedBuild, graph: FitGraph, baseline: Caution[]) {
+  /**
+   * A candidate in the slot against every filled slot it mates with; null unless all fit.
+   * With `reads`, the candidate's number is read through it too (see JudgementCache).
+   */
+  private async judge(
+    slot: SlotId,
+    id: number,
+    part: CandidateReads['part'],
+    build: ResolvedBuild,
+    graph: FitGraph,
+    baseline: Caution[],
+    reads?: CandidateReads,
+  ) {
     const trial: ResolvedBuild = {
       ...build,
-      parts: {
-        ...build.parts,
-        [slot]: { partNumber: row.partNumber, ...graph.ruleClasses.input(row.ruleClass) } as Part,
-      },
-      ids: { ...build.ids, [slot]: row.id },
+      parts: { ...build.parts, [slot]: part as Part },
+      ids: { ...build.ids, [slot]: id },
     }
     const { facts } = this.evaluation.prepare(trial, graph)
+    if (reads) facts.slots = reads.trackNumber(facts.slots as object, slot)
     const pairs = await this.evaluation.judgePairs(graph, trial, facts, slot)
     if (pairs.some((pair) => pair.relation === 'does-not-fit' || pair.relation === 'unknown')) return null
     const preference = candidatePreference(await this.evaluation.buildCautions(facts), baseline)
@@ -128,6 +146,7 @@ export class BuildCompletionService {
     reads: CompletionReads,
     limit: number,
     homeSiteId: number | null,
+    firstFound: boolean,
   ) {
     // Every part of the slot's kind, in part-number order, from the graph rather than the part table.
     const rows: Row[] = graph
@@ -139,16 +158,15 @@ export class BuildCompletionService {
     const accepted: ({ row: Row } & NonNullable<Judgement>)[] = []
     const neighbourIds = matingSlots(slot).flatMap((other) => (build.ids[other] === undefined ? [] : [build.ids[other]!]))
     const linkedToNeighbours = graph.linkedWith(neighbourIds)
-    // Without a reviewed link the rules decide, and parts with the same attributes get the same answer.
-    const byAttributes = new Map<number, Judgement>()
+    // Without a reviewed link the rules decide, and parts that agree on what the rules read get the same answer.
+    const unlinked = new JudgementCache<Judgement>()
     for (const row of rows) {
-      const linked = linkedToNeighbours.has(row.id)
-      let judgement = linked ? undefined : byAttributes.get(row.ruleClass)
-      if (judgement === undefined) {
-        judgement = await this.judge(slot, row, build, graph, baseline)
-        if (!linked) byAttributes.set(row.ruleClass, judgement)
-      }
+      const input = { partNumber: row.partNumber, ...graph.ruleClasses.input(row.ruleClass) }
+      const judgement = linkedToNeighbours.has(row.id)
+        ? await this.judge(slot, row.id, input, build, graph, baseline)
+        : await unlinked.judge(input, (reads) => this.judge(slot, row.id, reads.part, build, graph, baseline, reads))
       if (judgement) accepted.push({ row, ...judgement })
+      if (judgement && firstFound) break
     }
     const scored = await Promise.all(
       accepted.map(async (a) => {

@@ -45,7 +45,11 @@ export class BuildFillService {
           ids: { ...build.ids, [slot]: graph.byNumber.get(candidate.part.partNumber)! },
         }
         // Only the slot's mates can become dead ends by this choice.
-        const mates = await this.completion.completeBuild(trial, graph, TRIES_PER_SLOT, { only: matingSlots(slot), reads })
+        const mates = await this.completion.completeBuild(trial, graph, TRIES_PER_SLOT, {
+          only: matingSlots(slot),
+          reads,
+          firstFound: true,
+        })
         if (createsDeadEnd(slot, completion, mates)) {
           skipped.push({
             slot,

@@ -1,4 +1,4 @@
-import { APPROVED, DOES_NOT_FIT, REJECTED, type FitGraph, type GraphIdentity, type GraphLink } from './graph/fit-graph'
+import { APPROVED, REJECTED, type FitGraph, type GraphIdentity, type GraphLink } from './graph/fit-graph'
 
 export type PathStep = { from: number; to: number } & ({ type: 'identity'; identity: GraphIdentity } | { type: 'link'; link: GraphLink })
 
@@ -8,15 +8,7 @@ export function isFitLink(link: Pick<GraphLink, 'status' | 'relation'>): boolean
 }
 
 /** Per-graph work arrays, reused by every search (searches run to the end without awaiting). */
-type Buffers = {
-  stamp: Uint32Array
-  closed: Uint32Array
-  distance: Int32Array
-  via: Int32Array
-  previous: Int32Array
-  queue: Int32Array
-  round: number
-}
+type Buffers = { stamp: Uint32Array; via: Int32Array; previous: Int32Array; queue: Int32Array; round: number }
 const buffers = new WeakMap<FitGraph, Buffers>()
 
 function buffersFor(graph: FitGraph): Buffers {
@@ -26,11 +18,9 @@ function buffersFor(graph: FitGraph): Buffers {
     const capacity = Math.max(size, Math.ceil((found?.stamp.length ?? 0) * 1.5))
     found = {
       stamp: new Uint32Array(capacity),
-      closed: new Uint32Array(capacity),
-      distance: new Int32Array(capacity),
       via: new Int32Array(capacity),
       previous: new Int32Array(capacity),
-      queue: new Int32Array(capacity * 2 + 2),
+      queue: new Int32Array(capacity),
       round: 0,
     }
     buffers.set(graph, found)
@@ -39,57 +29,51 @@ function buffersFor(graph: FitGraph): Buffers {
   return found
 }
 
+/** `via` for a part reached through identities from `previous`: its chain is read back by identityChain. */
+const BY_IDENTITY = 0
+
 /**
- * Shortest chain of fit links between two parts by 0-1 breadth-first search
- * over the graph's typed arrays: identity steps cost nothing (identical parts
- * are one part), fit links cost one. Stops when the target leaves the queue.
- * Returns the steps in order, or null when no chain exists.
+ * Shortest chain of fit links between two parts, by breadth-first search over
+ * the graph's path lists (approved fit links only). Identical parts are one
+ * part: reaching one reaches its whole class at the same distance, so identity
+ * steps cost nothing. Stops when the target is reached. Returns the steps in
+ * order, or null when no chain exists.
  */
 export function shortestFitPath(graph: FitGraph, from: number, to: number): PathStep[] | null {
-  const { stamp, closed, distance, via, previous, queue, round } = buffersFor(graph)
+  const { stamp, via, previous, queue, round } = buffersFor(graph)
   const { links, identities } = graph
-  // Each part enters the deque at most twice (0-1 BFS), so twice the parts is room enough.
-  const size = queue.length
-  let head = 0
+  const paths = links.paths
+  const entries = paths.entries
   let tail = 0
-  const reach = (part: number, cost: number, step: number, from: number, front: boolean): void => {
-    if (stamp[part] === round && distance[part]! <= cost) return
+  // Marks a part reached (and its identical parts with it); answers whether that reached the target.
+  const reach = (part: number, step: number, back: number): boolean => {
     stamp[part] = round
-    distance[part] = cost
     via[part] = step
-    previous[part] = from
-    if (front) {
-      head = (head - 1 + size) % size
-      queue[head] = part
-    } else {
-      queue[tail] = part
-      tail = (tail + 1) % size
+    previous[part] = back
+    queue[tail++] = part
+    if (part === to) return true
+    if (identities.degreeOf(part) === 0) return false
+    for (const member of graph.classOf(part)) {
+      if (stamp[member] === round) continue
+      stamp[member] = round
+      via[member] = BY_IDENTITY
+      previous[member] = part
+      queue[tail++] = member
+      if (member === to) return true
     }
+    return false
   }
-  reach(from, 0, 0, from, false)
-  let found = false
-  while (head !== tail) {
+  let found = reach(from, BY_IDENTITY, from)
+  for (let head = 0; head < tail && !found; head++) {
     const current = queue[head]!
-    head = (head + 1) % size
-    // A part can sit in the deque twice; the second time it has nothing new to give.
-    if (closed[current] === round) continue
-    closed[current] = round
-    if (current === to) {
-      found = true
-      break
-    }
-    const base = distance[current]!
-    const identitySlots = identities.slotsAt(current)
-    for (let i = 0, n = identities.degreeOf(current); i < n; i++) {
-      const slot = identitySlots[i]!
-      // Identity steps are kept as negative numbers, links as their slot + 1.
-      reach(identities.other(slot, current), base, -(slot + 1), current, true)
-    }
-    const linkSlots = links.slotsAt(current)
-    for (let i = 0, n = links.degreeOf(current); i < n; i++) {
-      const slot = linkSlots[i]!
-      if (links.status[slot] !== APPROVED || links.relation[slot] === DOES_NOT_FIT) continue
-      reach(links.other(slot, current), base + 1, slot + 1, current, false)
+    for (let at = paths.runOf(current), end = at + 2 * paths.degreeOf(current); at < end; at += 2) {
+      const next = entries[at]!
+      if (stamp[next] === round) continue
+      // Links are kept as their slot + 1, so BY_IDENTITY (0) stays apart.
+      if (reach(next, entries[at + 1]! + 1, current)) {
+        found = true
+        break
+      }
     }
   }
   if (!found) return null
@@ -97,11 +81,14 @@ export function shortestFitPath(graph: FitGraph, from: number, to: number): Path
   for (let node = to; node !== from;) {
     const step = via[node]!
     const back = previous[node]!
-    steps.push(
-      step < 0
-        ? { type: 'identity', identity: graph.identityAt(-step - 1), from: back, to: node }
-        : { type: 'link', link: graph.linkAt(step - 1), from: back, to: node },
-    )
+    if (step === BY_IDENTITY) {
+      let at = node
+      for (const identity of graph.identityChain(back, node).reverse()) {
+        const before = identity.a === at ? identity.b : identity.a
+        steps.push({ type: 'identity', identity, from: before, to: at })
+        at = before
+      }
+    } else steps.push({ type: 'link', link: graph.linkAt(step - 1), from: back, to: node })
     node = back
   }
   return steps.reverse()

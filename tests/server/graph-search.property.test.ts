@@ -57,7 +57,7 @@ function freshGraph(partList: GraphPart[], links: GraphLink[], identities: Graph
   for (const part of partList) graph.setPart(part.id, part.partNumber, part.kind)
   for (const link of links) graph.setLink(link.id, link.a, link.b, link.relation, link.status)
   for (const identity of identities) graph.identities.add(identity.id, identity.a, identity.b)
-  graph.rebuildClasses()
+  graph.settle()
   return graph
 }
 

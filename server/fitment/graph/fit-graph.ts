@@ -1,5 +1,6 @@
 import { PART_KINDS, type PartKind } from '../../../shared/schemas/part-kinds'
 import { RELATIONS, REVIEW_STATUSES, type Relation, type ReviewStatus } from '../../../shared/schemas/fitment'
+import { AdjacencyArena } from './adjacency-arena'
 import { EdgeStore, resized } from './edge-store'
 import { AttributeClasses } from './attribute-classes'
 import { IdentityClasses } from './identity-classes'
@@ -21,11 +22,41 @@ export const DOES_NOT_FIT = RELATION_CODE.get('does-not-fit')!
 class LinkStore extends EdgeStore {
   relation = new Uint8Array(16)
   status = new Uint8Array(16)
+  /** The approved fit links alone, laid out for path searches (1 where a slot is in it). */
+  readonly paths = new AdjacencyArena()
+  private inPaths = new Uint8Array(16)
 
   protected override grow(capacity: number) {
     super.grow(capacity)
     this.relation = resized(this.relation, capacity)
     this.status = resized(this.status, capacity)
+    this.inPaths = resized(this.inPaths, capacity)
+  }
+
+  review(slot: number, relation: number, status: number) {
+    this.relation[slot] = relation
+    this.status[slot] = status
+    const carries = status === APPROVED && relation !== DOES_NOT_FIT
+    if (carries === (this.inPaths[slot] === 1)) return
+    if (carries) {
+      this.paths.attach(this.a[slot]!, this.b[slot]!, slot)
+      this.paths.attach(this.b[slot]!, this.a[slot]!, slot)
+    } else this.leavePaths(slot)
+    this.inPaths[slot] = carries ? 1 : 0
+  }
+
+  override remove(id: number): number {
+    const slot = this.slotOf(id)
+    if (slot >= 0 && this.inPaths[slot] === 1) {
+      this.leavePaths(slot)
+      this.inPaths[slot] = 0
+    }
+    return super.remove(id)
+  }
+
+  private leavePaths(slot: number) {
+    this.paths.detach(this.a[slot]!, slot)
+    this.paths.detach(this.b[slot]!, slot)
   }
 }
 
@@ -130,8 +161,7 @@ export class FitGraph {
       slot = -1
     }
     if (slot < 0) slot = this.links.add(id, a, b)
-    this.links.relation[slot] = RELATION_CODE.get(relation)!
-    this.links.status[slot] = STATUS_CODE.get(status)!
+    this.links.review(slot, RELATION_CODE.get(relation)!, STATUS_CODE.get(status)!)
   }
 
   removeLink(id: number) {
@@ -158,9 +188,13 @@ export class FitGraph {
     this.classes.refresh(ends)
   }
 
-  /** After a bulk load: the classes in one union-find pass instead of one walk per identity. */
-  rebuildClasses() {
+  /**
+   * After a bulk load: the classes in one union-find pass instead of one walk
+   * per identity, and the path lists packed in part order.
+   */
+  settle() {
     this.classes.rebuild()
+    this.links.paths.pack()
   }
 
   classOf(id: number): number[] {

@@ -122,7 +122,7 @@ export class FitGraphIndex {
       after = rows[rows.length - 1]!.id
       await nextTurn()
     }
-    graph.rebuildClasses()
+    graph.settle()
     return graph
   }
 
