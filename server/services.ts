@@ -52,8 +52,8 @@ import { createSignInThrottle } from './auth/sign-in-throttle'
 
 /** Every service, built once per app around one data source and one rule book. */
 export function createServices(dataSource: DataSource, config: AppConfig, rules: RuleBook) {
-  const parts = new PartService(dataSource)
   const graphIndex = new FitGraphIndex(dataSource)
+  const parts = new PartService(dataSource, () => graphIndex.snapshot())
   const modifications = new ModificationService(dataSource)
   const evidence = new FieldReportEvidence(databaseOf(dataSource))
   const stockRows = new StockRepository(databaseOf(dataSource))

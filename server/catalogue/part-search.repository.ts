@@ -1,54 +1,46 @@
 import type { PartKind } from '../../shared/schemas/part-kinds'
 import type { Database, SqlValue } from '../db/database'
 import { afterPrefix } from './part-words'
+import type { SearchTiers } from './search-order'
 
-export type PartSearch = { key: string; words: string[]; kind?: PartKind; limit: number; offset: number }
-
-/** How a part matched: lower ranks first. */
-const EXACT = 0
-const PREFIX = 1
-const WORD = 2
+export type PartSearch = { key: string; words: string[] }
 
 /**
- * Search over indexes only: the normalised number and mark keys (exact, then
- * prefix as a range `>= key AND < next`), and the part_word index for words
- * of the name and family (every query word the prefix of some word of the part).
+ * Search over indexes only, in three tiers: the normalised number and mark
+ * keys exactly, then as a prefix (a range `>= key AND < next`), then the
+ * part_word index for words of the name and family (every query word the
+ * prefix of some word of the part). Each tier answers ids alone; ordering and
+ * paging are pageOfHits', over the part numbers held in memory.
  */
 export class PartSearchRepository {
   constructor(private readonly db: Database) {}
 
-  async search(query: PartSearch): Promise<{ ids: number[]; total: number }> {
-    const hits: string[] = []
-    const params: SqlValue[] = []
+  async tiers(query: PartSearch): Promise<SearchTiers> {
+    const ids = (sql: string, params: SqlValue[]) => this.db.column<number>(sql, params)
+    const tiers: SearchTiers = []
     if (query.key) {
       const end = afterPrefix(query.key)
-      hits.push(
-        `SELECT p."id" AS "id", ${EXACT} AS "rank" FROM part p WHERE p."partKey" = ?`,
-        `SELECT m."partId" AS "id", ${EXACT} AS "rank" FROM part_mark m WHERE m."valueKey" = ?`,
-        `SELECT p."id" AS "id", ${PREFIX} AS "rank" FROM part p WHERE p."partKey" >= ? AND p."partKey" < ?`,
-        `SELECT m."partId" AS "id", ${PREFIX} AS "rank" FROM part_mark m WHERE m."valueKey" >= ? AND m."valueKey" < ?`,
+      tiers.push(
+        await ids('SELECT "id" FROM part WHERE "partKey" = ? UNION SELECT "partId" FROM part_mark WHERE "valueKey" = ?', [
+          query.key,
+          query.key,
+        ]),
+        await ids(
+          'SELECT "id" FROM part WHERE "partKey" >= ? AND "partKey" < ? UNION SELECT "partId" FROM part_mark WHERE "valueKey" >= ? AND "valueKey" < ?',
+          [query.key, end, query.key, end],
+        ),
       )
-      params.push(query.key, query.key, query.key, end, query.key, end)
     }
     if (query.words.length) {
-      const each = query.words.map(() => 'SELECT w."partId" FROM part_word w WHERE w."word" >= ? AND w."word" < ?')
-      hits.push(`SELECT "partId" AS "id", ${WORD} AS "rank" FROM (${each.join(' INTERSECT ')}) AS "words"`)
-      for (const word of query.words) params.push(word, afterPrefix(word))
+      const each = query.words.map(() => 'SELECT "partId" AS "id" FROM part_word WHERE "word" >= ? AND "word" < ?')
+      tiers.push(
+        await ids(
+          each.join(' INTERSECT '),
+          query.words.flatMap((word) => [word, afterPrefix(word)]),
+        ),
+      )
     }
-    if (hits.length === 0) return { ids: [], total: 0 }
-    const kind = query.kind ? ' WHERE p."kind" = ?' : ''
-    const kindParams: SqlValue[] = query.kind ? [query.kind] : []
-    const best = `WITH "hits" AS (${hits.join(' UNION ALL ')}),
-      "best" AS (SELECT "id", MIN("rank") AS "rank" FROM "hits" GROUP BY "id")`
-    const count = await this.db.get<{ total: number }>(
-      `${best} SELECT CAST(COUNT(*) AS INTEGER) AS "total" FROM "best" b JOIN part p ON p."id" = b."id"${kind}`,
-      [...params, ...kindParams],
-    )
-    const rows = await this.db.all<{ id: number }>(
-      `${best} SELECT b."id" AS "id" FROM "best" b JOIN part p ON p."id" = b."id"${kind} ORDER BY b."rank", p."partNumber" LIMIT ? OFFSET ?`,
-      [...params, ...kindParams, query.limit, query.offset],
-    )
-    return { ids: rows.map((row) => row.id), total: count?.total ?? 0 }
+    return tiers
   }
 
   /** Without search text: the catalogue (of a kind) in part-number order. */

@@ -1,8 +1,9 @@
 import { Entity, Index, JoinColumn, ManyToOne, PrimaryColumn } from 'typeorm'
 import { PartEntity } from './part.entity'
 
-/** One word of a part's name or family, lower case: the index behind search by word prefix. */
+/** One word of a part's name or family, lower case: the index behind search by word prefix (covering: word, then part). */
 @Entity('part_word')
+@Index(['word', 'partId'])
 export class PartWordEntity {
   @PrimaryColumn({ type: 'integer' })
   partId!: number
@@ -11,7 +12,6 @@ export class PartWordEntity {
   @JoinColumn({ name: 'partId' })
   part!: PartEntity
 
-  @Index()
   @PrimaryColumn({ type: 'text' })
   word!: string
 }

@@ -7,12 +7,17 @@ import { AppError } from '../errors/app-error'
 import { PartRepository, toPart, type PartRecord } from './part.repository'
 import { PartSearchRepository } from './part-search.repository'
 import { wordsOf } from './part-words'
+import { pageOfHits, type PartDirectory } from './search-order'
 
 export class PartService {
   private readonly repository: PartRepository
   private readonly search: PartSearchRepository
 
-  constructor(dataSource: DataSource) {
+  /** `directory` holds every part's number and kind in memory, for ordering search hits (the fit graph). */
+  constructor(
+    dataSource: DataSource,
+    private readonly directory: () => Promise<PartDirectory>,
+  ) {
     const db = databaseOf(dataSource)
     this.repository = new PartRepository(db)
     this.search = new PartSearchRepository(db)
@@ -28,7 +33,10 @@ export class PartService {
     const text = query.q.trim()
     const page = { limit: query.pageSize, offset: (query.page - 1) * query.pageSize }
     const found = text
-      ? await this.search.search({ key: normalisePartCode(text), words: wordsOf(text), kind: query.kind, ...page })
+      ? pageOfHits(await this.search.tiers({ key: normalisePartCode(text), words: wordsOf(text) }), await this.directory(), {
+          kind: query.kind,
+          ...page,
+        })
       : await this.search.browse(query.kind, page.limit, page.offset)
     return { items: await this.byIds(found.ids), total: found.total }
   }

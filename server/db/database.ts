@@ -17,6 +17,8 @@ export interface Database {
   readonly dialect: Dialect
   all<T = Row>(sql: string, params?: readonly SqlValue[]): Promise<T[]>
   get<T = Row>(sql: string, params?: readonly SqlValue[]): Promise<T | undefined>
+  /** The first column of every row, without an object per row: for long id lists. */
+  column<T extends SqlValue = number>(sql: string, params?: readonly SqlValue[]): Promise<T[]>
   run(sql: string, params?: readonly SqlValue[]): Promise<{ changes: number }>
   /** Runs an `INSERT … RETURNING "id"` and answers the new id. */
   insert(sql: string, params?: readonly SqlValue[]): Promise<number>

@@ -1,7 +1,9 @@
 import { StockPhotos1796229010828 } from '../migrations/1796229010828-StockPhotos'
 import { CounterFinish1796235249342 } from '../migrations/1796235249342-CounterFinish'
 import { FaceFinish1796279666605 } from '../migrations/1796279666605-FaceFinish'
+import { WordPartIndex1796291212029 } from '../migrations/1796291212029-WordPartIndex'
 import { FaceFinish1796279676351 as PostgresFaceFinish1796279676351 } from '../migrations/postgres/1796279676351-FaceFinish'
+import { WordPartIndex1796291213360 as PostgresWordPartIndex1796291213360 } from '../migrations/postgres/1796291213360-WordPartIndex'
 import { StockPhotos1796229013832 as PostgresStockPhotos1796229013832 } from '../migrations/postgres/1796229013832-StockPhotos'
 import { CounterFinish1796235252157 as PostgresCounterFinish1796235252157 } from '../migrations/postgres/1796235252157-CounterFinish'
 import { AccountTokens1796223315452 } from '../migrations/1796223315452-AccountTokens'
@@ -59,6 +61,7 @@ export const migrations = [
   StockPhotos1796229010828,
   CounterFinish1796235249342,
   FaceFinish1796279666605,
+  WordPartIndex1796291212029,
 ]
 
 /** PostgreSQL's, generated from the same entities (`npx tsx server/db/generate-migration.ts Name --postgres`). */
@@ -81,4 +84,5 @@ export const postgresMigrations = [
   PostgresStockPhotos1796229013832,
   PostgresCounterFinish1796235252157,
   PostgresFaceFinish1796279676351,
+  PostgresWordPartIndex1796291213360,
 ]

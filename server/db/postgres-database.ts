@@ -67,6 +67,11 @@ export class PostgresDatabase implements Database {
     return result.rows as T[]
   }
 
+  async column<T extends SqlValue = number>(sql: string, params: readonly SqlValue[] = []): Promise<T[]> {
+    const result = await this.client().query({ text: this.text(sql), values: bind(params), rowMode: 'array' })
+    return (result.rows as unknown[][]).map((row) => row[0] as T)
+  }
+
   async get<T = Row>(sql: string, params: readonly SqlValue[] = []): Promise<T | undefined> {
     return (await this.all<T>(sql, params))[0]
   }

@@ -45,12 +45,15 @@ export class SqliteDatabase implements Database {
     handle.pragma('busy_timeout = 0')
   }
 
-  private statement(sql: string): BetterSqlite3.Statement {
-    let statement = this.statements.get(sql)
+  /** `pluck`: a statement of its own that answers the first column's values. */
+  private statement(sql: string, pluck = false): BetterSqlite3.Statement {
+    const key = pluck ? `pluck:${sql}` : sql
+    let statement = this.statements.get(key)
     if (!statement) {
       if (this.statements.size >= STATEMENT_CACHE_LIMIT) this.statements.clear()
       statement = this.handle.prepare(sql)
-      this.statements.set(sql, statement)
+      if (pluck) statement.pluck()
+      this.statements.set(key, statement)
     }
     return statement
   }
@@ -76,6 +79,11 @@ export class SqliteDatabase implements Database {
   async all<T = Row>(sql: string, params: readonly SqlValue[] = []): Promise<T[]> {
     await this.turn()
     return this.retrying(() => this.statement(sql).all(...bind(params)) as T[])
+  }
+
+  async column<T extends SqlValue = number>(sql: string, params: readonly SqlValue[] = []): Promise<T[]> {
+    await this.turn()
+    return this.retrying(() => this.statement(sql, true).all(...bind(params)) as T[])
   }
 
   async get<T = Row>(sql: string, params: readonly SqlValue[] = []): Promise<T | undefined> {

@@ -22,7 +22,7 @@ function listOf(arena: AdjacencyArena, part: number): string[] {
 describe('AdjacencyArena against a plain map of lists', () => {
   it('holds exactly the pairs attached and not detached, at every part, through moves and packs', () => {
     fc.assert(
-      fc.property(fc.array(operationArb, { maxLength: 400 }), (operations) => {
+      fc.property(fc.array(operationArb, { maxLength: 400, size: 'max' }), (operations) => {
         const arena = new AdjacencyArena()
         const model = new Map<number, Map<number, number>>()
         for (const { attach, part, neighbour, slot, pack } of operations) {

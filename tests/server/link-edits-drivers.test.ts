@@ -28,7 +28,7 @@ describe.each(databaseDrivers('link-edits'))('link hand edits on $name', { timeo
     ]
     for (const [number, kind] of parts) await db.insert(insertPart, [number, number.replace(/-/g, ''), kind, number, now, now])
     graph = new FitGraphIndex(opened.dataSource)
-    links = new LinkService(opened.dataSource, new PartService(opened.dataSource), graph)
+    links = new LinkService(opened.dataSource, new PartService(opened.dataSource, () => graph.snapshot()), graph)
   })
   afterAll(async () => opened.close())
 
