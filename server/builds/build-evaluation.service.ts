@@ -7,7 +7,8 @@ import { worstVerdict } from '../../shared/schemas/fitment'
 import type { Part } from '../../shared/schemas/part'
 import { partKindSchema } from '../../shared/schemas/part-kinds'
 import { buildFacts } from '../reasoning/facts'
-import { computeFigures, cylinders } from '../reasoning/figures'
+import { cylinders } from '../reasoning/figures'
+import { computeFigures } from '../reasoning/figure-facts'
 import { summariseFigures } from '../reasoning/figures-summary'
 import { judgePair, type JudgedPair } from '../fitment/pair-judge'
 import { summariseOutcomes } from '../reasoning/rule-summary'
@@ -67,7 +68,7 @@ export class BuildEvaluationService {
 
   /** The figures of a build and the facts its rules read; the graph supplies the parts a build implies without a slot. */
   prepare(build: Pick<ResolvedBuild, 'parts' | 'context'>, graph: FitGraph) {
-    const figures = computeFigures(build.parts, build.context, findCompanions(graph, build.parts))
+    const figures = computeFigures(build.parts, build.context, () => findCompanions(graph, build.parts))
     const numbers = Object.fromEntries(Object.entries(build.parts).map(([slot, part]) => [slot, part!.partNumber]))
     return { figures, facts: buildFacts(build.parts, figures, build.context, numbers) }
   }

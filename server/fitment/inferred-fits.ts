@@ -2,7 +2,7 @@ import { matingSlots, type SlotId } from '../../shared/build-template'
 import type { ExplanationStep, Relation } from '../../shared/schemas/fitment'
 import type { PartKind } from '../../shared/schemas/part-kinds'
 import { buildFacts } from '../reasoning/facts'
-import { computeFigures } from '../reasoning/figures'
+import { computeFigures } from '../reasoning/figure-facts'
 import type { RuleBook } from '../reasoning/rule-book'
 import { summariseOutcomes, type RuleSummary } from '../reasoning/rule-summary'
 import type { Found } from './found'
@@ -84,7 +84,7 @@ export class InferredFits {
   ) {
     const classes = graph.ruleClasses
     const slotParts = { [kind]: classes.input(selfClass), [otherKind]: classes.input(otherClass) }
-    const figures = computeFigures(slotParts, {}, findCompanions(graph, slotParts))
+    const figures = computeFigures(slotParts, {}, () => findCompanions(graph, slotParts))
     const summary = summariseOutcomes(await this.rules.evaluatePair(kind, otherKind, buildFacts(slotParts, figures, {})))
     if (this.judgedCount >= JUDGED_LIMIT) {
       this.judged.clear()

@@ -1,6 +1,5 @@
 import type { SlotId } from '../../shared/build-template'
 import { staticCompressionRatio } from '../../shared/engineering/compression'
-import { displacementCc } from '../../shared/engineering/displacement'
 import { checkHeadBolt, spacerFix, type HeadBoltInput, type ThreadMaterial } from '../../shared/engineering/fasteners'
 import { checkInjectorCalibration, type CalibrationStatus } from '../../shared/engineering/injector-calibration'
 import { injectorHeadroom } from '../../shared/engineering/injectors'
@@ -9,10 +8,10 @@ import { beltTeethForCentre, centreDistanceForBeltMm } from '../../shared/engine
 import { parseMetricThread } from '../../shared/schemas/part-attributes'
 import type { BuildContext } from '../../shared/schemas/build'
 import type { Part } from '../../shared/schemas/part'
-import { deckFinishFigures, type DeckFinishFigures } from './figures-deck'
-import { bool, num, text } from './part-values'
-import { headBoltPositionFigures, type HeadBoltPositionFigures } from './figures-head-bolts'
-import { ignitionFigures, type Companions, type IgnitionFigures } from './figures-ignition'
+import type { DeckFinishFigures } from './figures-deck'
+import { num, text } from './part-values'
+import type { HeadBoltPositionFigures } from './figures-head-bolts'
+import type { IgnitionFigures } from './figures-ignition'
 
 /** What the figures read of a part. */
 export type FigurePart = Pick<Part, 'attributes' | 'yearTo'>
@@ -60,7 +59,7 @@ const WASHER_STACKS_MM = [1, 2, 3, 4, 5, 6, 7, 8]
 
 const round = (value: number, places = 3) => Math.round(value * 10 ** places) / 10 ** places
 
-function compression(parts: SlotParts): Pick<FigureFacts, 'compressionRatio' | 'sweptVolumeCc' | 'clearanceVolumeCc'> {
+export function compression(parts: SlotParts): Pick<FigureFacts, 'compressionRatio' | 'sweptVolumeCc' | 'clearanceVolumeCc'> {
   const { block, head } = parts
   const gasket = parts['head-gasket']
   const input = {
@@ -82,7 +81,7 @@ function compression(parts: SlotParts): Pick<FigureFacts, 'compressionRatio' | '
   }
 }
 
-function headBolt(parts: SlotParts): FigureFacts['headBolt'] {
+export function headBolt(parts: SlotParts): FigureFacts['headBolt'] {
   const bolt = parts['head-bolt']
   const thread = parseMetricThread(text(bolt, 'thread') ?? '')
   const material = text(parts.block, 'material') as ThreadMaterial | undefined
@@ -116,7 +115,7 @@ function headBolt(parts: SlotParts): FigureFacts['headBolt'] {
   }
 }
 
-function timing(parts: SlotParts): FigureFacts['timing'] {
+export function timing(parts: SlotParts): FigureFacts['timing'] {
   const crankToDeck = num(parts.block, 'crankToDeckMm')
   const gasket = num(parts['head-gasket'], 'compressedThicknessMm')
   const camAboveDeck = num(parts.head, 'camAboveDeckMm')
@@ -138,7 +137,7 @@ function timing(parts: SlotParts): FigureFacts['timing'] {
   }
 }
 
-function injector(parts: SlotParts, context: BuildContext): FigureFacts['injector'] {
+export function injector(parts: SlotParts, context: BuildContext): FigureFacts['injector'] {
   const flowCcMin = num(parts.injector, 'flowCcMin')
   const ratedPressureBar = num(parts.injector, 'ratedPressureBar')
   if (!context.targetPowerKw || flowCcMin === undefined || ratedPressureBar === undefined) return undefined
@@ -164,7 +163,7 @@ function injector(parts: SlotParts, context: BuildContext): FigureFacts['injecto
 }
 
 /** The fitted injectors against the flow the control unit's fuel map was calibrated for. */
-function injectorCalibration(parts: SlotParts): FigureFacts['injectorCalibration'] {
+export function injectorCalibration(parts: SlotParts): FigureFacts['injectorCalibration'] {
   const input = {
     fittedFlowCcMin: num(parts.injector, 'flowCcMin'),
     fittedRatedPressureBar: num(parts.injector, 'ratedPressureBar'),
@@ -184,7 +183,7 @@ function injectorCalibration(parts: SlotParts): FigureFacts['injectorCalibration
 }
 
 /** Quench from the block's deck clearance and the gasket's compressed thickness, against the usual band. */
-function quench(parts: SlotParts): FigureFacts['quench'] {
+export function quench(parts: SlotParts): FigureFacts['quench'] {
   const deckClearanceMm = num(parts.block, 'deckClearanceMm')
   const compressedGasketMm = num(parts['head-gasket'], 'compressedThicknessMm')
   if (deckClearanceMm === undefined || compressedGasketMm === undefined) return undefined
@@ -199,35 +198,4 @@ function quench(parts: SlotParts): FigureFacts['quench'] {
 /** Cylinders of the build: from the block, else from the lead set, else four. */
 export function cylinders(parts: SlotParts): number {
   return num(parts.block, 'cylinders') ?? num(parts['ignition-leads'], 'cylinders') ?? 4
-}
-
-/** Every figure the chosen parts allow; a figure that lacks an input is left out. */
-export function computeFigures(parts: SlotParts, context: BuildContext = {}, companions: Companions = {}): FigureFacts {
-  const figures: FigureFacts = { ...compression(parts) }
-  const bore = num(parts.block, 'boreMm')
-  const stroke = num(parts.block, 'strokeMm')
-  const count = num(parts.block, 'cylinders')
-  if (bore && stroke && count) figures.displacementCc = round(displacementCc(count, bore, stroke), 1)
-  const gasketBore = num(parts['head-gasket'], 'boreMm')
-  if (bore && gasketBore) figures.gasketBoreExcessMm = round(gasketBore - bore, 2)
-  const headRestrictor = bool(parts.head, 'oilRestrictor')
-  const blockRestrictor = bool(parts.block, 'oilRestrictor')
-  if (headRestrictor !== undefined && blockRestrictor !== undefined) {
-    figures.oilRestrictors = Number(headRestrictor) + Number(blockRestrictor) + (parts['oil-restrictor'] ? 1 : 0)
-  }
-  const ecuVvl = bool(parts.ecu, 'variableValveLift')
-  const headLift = text(parts.head, 'valveLift')
-  if (ecuVvl !== undefined && headLift) figures.vvlMatch = ecuVvl === (headLift === 'variable')
-  figures.headBolt = headBolt(parts)
-  figures.headBoltPositions = headBoltPositionFigures(parts, companions)
-  figures.timing = timing(parts)
-  figures.injector = injector(parts, context)
-  figures.quench = quench(parts)
-  figures.injectorCalibration = injectorCalibration(parts)
-  figures.ignition = ignitionFigures(parts, companions)
-  figures.deckFinish = deckFinishFigures(parts, context)
-  if (parts.block?.yearTo) figures.engineModelYear = parts.block.yearTo
-  figures.fuelSystemOpened = Boolean(parts['fuel-rail'] || parts.injector || parts['intake-manifold'])
-  figures.electricsTouched = Boolean(parts.ecu || parts.harness)
-  return figures
 }

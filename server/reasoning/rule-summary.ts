@@ -16,7 +16,21 @@ export type RuleSummary = {
   ruleIds: string[]
 }
 
+/** Summaries by outcome list: the rule book hands out the same cached list for the same values, so each is gathered once. */
+const summaries = new WeakMap<readonly RuleOutcome[], RuleSummary>()
+
+/** The rules' outcomes gathered; the answer is shared between callers and frozen, so read it, never change it. */
 export function summariseOutcomes(outcomes: RuleOutcome[]): RuleSummary {
+  let summary = summaries.get(outcomes)
+  if (!summary) {
+    summary = gather(outcomes)
+    for (const list of [summary.modifications, summary.extraParts, summary.cautions, summary.steps, summary.ruleIds]) Object.freeze(list)
+    summaries.set(outcomes, Object.freeze(summary))
+  }
+  return summary
+}
+
+function gather(outcomes: RuleOutcome[]): RuleSummary {
   const summary: RuleSummary = { modifications: [], extraParts: [], cautions: [], steps: [], ruleIds: [] }
   const relations: Relation[] = []
   for (const { ruleId, event, measured } of outcomes) {
