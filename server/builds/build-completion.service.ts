@@ -4,13 +4,13 @@ import type { Candidate, Completion } from '../../shared/schemas/build'
 import { SKILL_LEVELS, worstVerdict, type Relation } from '../../shared/schemas/fitment'
 import type { BuildEvaluationService, ResolvedBuild } from './build-evaluation.service'
 import type { FitGraph, FitGraphIndex } from '../fitment/fit-graph'
-import type { Part } from '../../shared/schemas/part'
 import type { ModificationService } from '../catalogue/modification.service'
 import type { PartService } from '../catalogue/part.service'
 import { candidatePreference, type Preference } from './candidate-preference'
 import type { Caution } from '../../shared/schemas/build'
 import type { StockIndex } from '../stock/stock-index'
 import { JudgementCache, type CandidateReads } from './judgement-cache'
+import { SlotTrials } from './slot-trials'
 
 /** A candidate as the fit graph holds it: its id, number and rule class (attributes and last year). */
 type Row = { id: number; partNumber: string; ruleClass: number }
@@ -111,21 +111,16 @@ export class BuildCompletionService {
    * With `reads`, the candidate's number is read through it too (see JudgementCache).
    */
   private async judge(
-    slot: SlotId,
+    trials: SlotTrials,
     id: number,
     part: CandidateReads['part'],
-    build: ResolvedBuild,
     graph: FitGraph,
-    baseline: Caution[],
-    reads?: CandidateReads,
+    { baseline, linked, reads }: { baseline: Caution[]; linked: boolean; reads?: CandidateReads },
   ) {
-    const trial: ResolvedBuild = {
-      ...build,
-      parts: { ...build.parts, [slot]: part as Part },
-      ids: { ...build.ids, [slot]: id },
-    }
-    const { facts } = this.evaluation.prepare(trial, graph)
-    if (reads) facts.slots = reads.trackNumber(facts.slots as object, slot)
+    const { slot } = trials
+    const { build: trial, facts } = trials.trial(id, part, reads)
+    // Without a reviewed link the rules decide every pair, and most candidates fail one: screen before explaining.
+    if (!linked && (await this.evaluation.rulesRuleOut(trial, facts, slot))) return null
     const pairs = await this.evaluation.judgePairs(graph, trial, facts, slot)
     if (pairs.some((pair) => pair.relation === 'does-not-fit' || pair.relation === 'unknown')) return null
     const preference = candidatePreference(await this.evaluation.buildCautions(facts), baseline)
@@ -160,11 +155,12 @@ export class BuildCompletionService {
     const linkedToNeighbours = graph.linkedWith(neighbourIds)
     // Without a reviewed link the rules decide, and parts that agree on what the rules read get the same answer.
     const unlinked = new JudgementCache<Judgement>()
+    const trials = new SlotTrials(build, slot, graph)
     for (const row of rows) {
       const input = { partNumber: row.partNumber, ...graph.ruleClasses.input(row.ruleClass) }
       const judgement = linkedToNeighbours.has(row.id)
-        ? await this.judge(slot, row.id, input, build, graph, baseline)
-        : await unlinked.judge(input, (reads) => this.judge(slot, row.id, reads.part, build, graph, baseline, reads))
+        ? await this.judge(trials, row.id, input, graph, { baseline, linked: true })
+        : await unlinked.judge(input, (part, reads) => this.judge(trials, row.id, part, graph, { baseline, linked: false, reads }))
       if (judgement) accepted.push({ row, ...judgement })
       if (judgement && firstFound) break
     }

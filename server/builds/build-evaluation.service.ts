@@ -86,6 +86,21 @@ export class BuildEvaluationService {
     return judged
   }
 
+  /**
+   * Whether the rules alone leave a pair at `slot` unfitted (does not fit, or
+   * nothing decides it): the verdict judgePairs would give a part without a
+   * reviewed link to its mates, without the explanation, for screening many.
+   */
+  async rulesRuleOut(build: Pick<ResolvedBuild, 'ids'>, facts: Facts, slot: SlotId): Promise<boolean> {
+    for (const { slots } of MATING_PAIRS) {
+      const [a, b] = slots
+      if ((a !== slot && b !== slot) || build.ids[a] === undefined || build.ids[b] === undefined) continue
+      const { relation } = summariseOutcomes(await this.rules.evaluatePair(a, b, facts))
+      if (!relation || relation === 'does-not-fit') return true
+    }
+    return false
+  }
+
   /** The cautions the whole-build rules raise for these facts (cached by the values they read). */
   async buildCautions(facts: Facts): Promise<Caution[]> {
     return summariseOutcomes(await this.rules.evaluateBuild(facts)).cautions

@@ -10,7 +10,9 @@ const PART_NUMBER = '\u0000partNumber'
 const EVERYTHING = '\u0000*'
 const MISSING = '\u0000missing'
 /** Beyond this many read sets a slot's candidates are judged one by one rather than compared with each set. */
-const MAX_SHAPES = 32
+const MAX_SHAPES = 4
+/** After this many judgements, a cache that answered fewer than one in ten stops looking (its lookups cost more than they save). */
+const TRIAL = 200
 
 type Shape = { names: string[]; answers: Map<string, unknown> }
 
@@ -88,14 +90,22 @@ function valueOf(input: CandidateInput, name: string): unknown {
  */
 export class JudgementCache<T> {
   private readonly shapes = new Map<string, Shape>()
+  private hits = 0
+  private misses = 0
 
-  async judge(input: CandidateInput, run: (reads: CandidateReads) => Promise<T>): Promise<T> {
+  /** `run` judges the part it is given; with `reads`, that part notes what is read of it. */
+  async judge(input: CandidateInput, run: (part: CandidateReads['part'], reads?: CandidateReads) => Promise<T>): Promise<T> {
+    if (this.misses >= TRIAL && this.hits * 10 < this.misses) return run(input)
     for (const shape of this.shapes.values()) {
       const key = keyOf(input, shape.names)
-      if (shape.answers.has(key)) return shape.answers.get(key) as T
+      if (shape.answers.has(key)) {
+        this.hits++
+        return shape.answers.get(key) as T
+      }
     }
+    this.misses++
     const reads = new CandidateReads(input)
-    const answer = await run(reads)
+    const answer = await run(reads.part, reads)
     const names = [...reads.names].sort()
     const id = names.join('\u0001')
     let shape = this.shapes.get(id)
@@ -109,5 +119,10 @@ export class JudgementCache<T> {
 }
 
 function keyOf(input: CandidateInput, names: string[]): string {
-  return JSON.stringify(names.map((name) => valueOf(input, name)))
+  let key = ''
+  for (const name of names) {
+    const value = valueOf(input, name)
+    key += (typeof value === 'object' || typeof value === 'string' ? JSON.stringify(value) : `${typeof value}:${String(value)}`) + '\u0001'
+  }
+  return key
 }
