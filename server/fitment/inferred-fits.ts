@@ -51,7 +51,10 @@ export class InferredFits {
         if (exclude.has(candidate) || (query.only && !query.only(candidate))) continue
         const otherClass = classes.classOf(candidate)
         // Most candidates share a class judged before: no promise for those.
-        const summary = side.get(otherClass) ?? (await this.judge(graph, side, kind, selfClass, otherKind, otherClass))
+        const summary =
+          side.get(otherClass) ??
+          this.judge(graph, side, kind, selfClass, otherKind, otherClass) ??
+          (await this.judgeByRules(graph, side, kind, selfClass, otherKind, otherClass))
         if (!summary.relation || (query.relation && summary.relation !== query.relation)) continue
         const count = (counts.get(summary.relation) ?? 0) + 1
         counts.set(summary.relation, count)
@@ -74,7 +77,13 @@ export class InferredFits {
     return side
   }
 
-  private async judge(
+  /** A judgement from the rule book's answers so far, without a promise; undefined when the rules must run. */
+  private judge(graph: FitGraph, side: Map<number, RuleSummary>, kind: SlotId, selfClass: number, otherKind: SlotId, otherClass: number) {
+    const outcomes = this.rules.cachedPair(kind, otherKind, this.factsOf(graph, kind, selfClass, otherKind, otherClass))
+    return outcomes && this.keep(side, otherClass, summariseOutcomes(outcomes))
+  }
+
+  private async judgeByRules(
     graph: FitGraph,
     side: Map<number, RuleSummary>,
     kind: SlotId,
@@ -82,10 +91,21 @@ export class InferredFits {
     otherKind: SlotId,
     otherClass: number,
   ) {
+    const facts = this.factsOf(graph, kind, selfClass, otherKind, otherClass)
+    return this.keep(side, otherClass, summariseOutcomes(await this.rules.evaluatePair(kind, otherKind, facts)))
+  }
+
+  private factsOf(graph: FitGraph, kind: SlotId, selfClass: number, otherKind: SlotId, otherClass: number) {
     const classes = graph.ruleClasses
     const slotParts = { [kind]: classes.input(selfClass), [otherKind]: classes.input(otherClass) }
-    const figures = computeFigures(slotParts, {}, () => findCompanions(graph, slotParts))
-    const summary = summariseOutcomes(await this.rules.evaluatePair(kind, otherKind, buildFacts(slotParts, figures, {})))
+    return buildFacts(
+      slotParts,
+      computeFigures(slotParts, {}, () => findCompanions(graph, slotParts)),
+      {},
+    )
+  }
+
+  private keep(side: Map<number, RuleSummary>, otherClass: number, summary: RuleSummary): RuleSummary {
     if (this.judgedCount >= JUDGED_LIMIT) {
       this.judged.clear()
       this.judgedCount = 0

@@ -12,20 +12,13 @@ const UNSET = Symbol('unset')
 
 /**
  * Every figure the chosen parts allow; a figure that lacks an input reads as
- * undefined. The sums are set at once; the worked figures (compression,
- * bolts, timing, injectors, ignition, faces) are computed on their first read
- * and kept, because judging one pair reads only a few of them and completion
- * judges thousands of candidates. Read the figures by name: the worked ones
- * are getters, not own properties.
+ * undefined. Every figure is worked out when read, the costly ones
+ * (compression, bolts, timing, injectors, ignition, faces) once and kept,
+ * because judging one pair reads only a few of them and completion judges
+ * thousands of candidates. Read the figures by name: they are getters, not
+ * own properties.
  */
 class BuildFigureFacts implements FigureFacts {
-  displacementCc?: number
-  gasketBoreExcessMm?: number
-  oilRestrictors?: number
-  vvlMatch?: boolean
-  engineModelYear?: number
-  fuelSystemOpened: boolean
-  electricsTouched: boolean
   #compression: ReturnType<typeof compression> | undefined
   #headBolt: FigureFacts['headBolt'] | typeof UNSET = UNSET
   #headBoltPositions: FigureFacts['headBoltPositions'] | typeof UNSET = UNSET
@@ -43,23 +36,40 @@ class BuildFigureFacts implements FigureFacts {
     companions: Companions | (() => Companions),
   ) {
     this.#companions = companions
-    const bore = num(parts.block, 'boreMm')
-    const stroke = num(parts.block, 'strokeMm')
-    const count = num(parts.block, 'cylinders')
-    if (bore && stroke && count) this.displacementCc = round(displacementCc(count, bore, stroke), 1)
-    const gasketBore = num(parts['head-gasket'], 'boreMm')
-    if (bore && gasketBore) this.gasketBoreExcessMm = round(gasketBore - bore, 2)
-    const headRestrictor = bool(parts.head, 'oilRestrictor')
-    const blockRestrictor = bool(parts.block, 'oilRestrictor')
-    if (headRestrictor !== undefined && blockRestrictor !== undefined) {
-      this.oilRestrictors = Number(headRestrictor) + Number(blockRestrictor) + (parts['oil-restrictor'] ? 1 : 0)
-    }
-    const ecuVvl = bool(parts.ecu, 'variableValveLift')
-    const headLift = text(parts.head, 'valveLift')
-    if (ecuVvl !== undefined && headLift) this.vvlMatch = ecuVvl === (headLift === 'variable')
-    if (parts.block?.yearTo) this.engineModelYear = parts.block.yearTo
-    this.fuelSystemOpened = Boolean(parts['fuel-rail'] || parts.injector || parts['intake-manifold'])
-    this.electricsTouched = Boolean(parts.ecu || parts.harness)
+  }
+
+  // The sums: cheap enough to work out on every read.
+  get displacementCc() {
+    const { block } = this.parts
+    const bore = num(block, 'boreMm')
+    const stroke = num(block, 'strokeMm')
+    const count = num(block, 'cylinders')
+    return bore && stroke && count ? round(displacementCc(count, bore, stroke), 1) : undefined
+  }
+  get gasketBoreExcessMm() {
+    const bore = num(this.parts.block, 'boreMm')
+    const gasketBore = num(this.parts['head-gasket'], 'boreMm')
+    return bore && gasketBore ? round(gasketBore - bore, 2) : undefined
+  }
+  get oilRestrictors() {
+    const headRestrictor = bool(this.parts.head, 'oilRestrictor')
+    const blockRestrictor = bool(this.parts.block, 'oilRestrictor')
+    if (headRestrictor === undefined || blockRestrictor === undefined) return undefined
+    return Number(headRestrictor) + Number(blockRestrictor) + (this.parts['oil-restrictor'] ? 1 : 0)
+  }
+  get vvlMatch() {
+    const ecuVvl = bool(this.parts.ecu, 'variableValveLift')
+    const headLift = text(this.parts.head, 'valveLift')
+    return ecuVvl !== undefined && headLift ? ecuVvl === (headLift === 'variable') : undefined
+  }
+  get engineModelYear() {
+    return this.parts.block?.yearTo || undefined
+  }
+  get fuelSystemOpened() {
+    return Boolean(this.parts['fuel-rail'] || this.parts.injector || this.parts['intake-manifold'])
+  }
+  get electricsTouched() {
+    return Boolean(this.parts.ecu || this.parts.harness)
   }
 
   private companions(): Companions {

@@ -15,6 +15,7 @@ export type RuleOutcome = { ruleId: string; ruleName: string; ruleTitle: string;
 type CompiledEngine = { engine: Engine; reads: { fact: string; path: string }[] }
 
 const CACHE_LIMIT = 50_000
+const NO_OUTCOMES: RuleOutcome[] = Object.freeze([]) as unknown as RuleOutcome[]
 
 function conditionReads(condition: Condition, into: { fact: string; path: string }[]) {
   if ('all' in condition) condition.all.forEach((c) => conditionReads(c, into))
@@ -119,16 +120,31 @@ export class RuleBook {
   /** Rules for one mating pair; answers are cached by the values the rules read. */
   async evaluatePair(kindA: string, kindB: string, facts: Facts): Promise<RuleOutcome[]> {
     const compiled = this.pairEngines.get(pairKey(kindA, kindB))
-    if (!compiled) return []
+    if (!compiled) return NO_OUTCOMES
     return this.run(`${pairKey(kindA, kindB)}`, compiled, facts)
+  }
+
+  /**
+   * A pair's outcomes when the rules have judged these values before, without
+   * a promise (thousands of candidates a request share a few answers); else
+   * undefined, and evaluatePair runs the rules.
+   */
+  cachedPair(kindA: string, kindB: string, facts: Facts): RuleOutcome[] | undefined {
+    const compiled = this.pairEngines.get(pairKey(kindA, kindB))
+    if (!compiled) return NO_OUTCOMES
+    return this.cache.get(this.keyOf(pairKey(kindA, kindB), compiled, facts))
   }
 
   async evaluateBuild(facts: Facts): Promise<RuleOutcome[]> {
     return this.run('build', this.buildEngine, facts)
   }
 
+  private keyOf(scope: string, compiled: CompiledEngine, facts: Facts): string {
+    return scope + JSON.stringify(compiled.reads.map((read) => resolvePath(facts[read.fact], read.path) ?? null))
+  }
+
   private async run(scope: string, compiled: CompiledEngine, facts: Facts): Promise<RuleOutcome[]> {
-    const key = scope + JSON.stringify(compiled.reads.map((read) => resolvePath(facts[read.fact], read.path) ?? null))
+    const key = this.keyOf(scope, compiled, facts)
     const cached = this.cache.get(key)
     if (cached) return cached
     const { results } = await compiled.engine.run(facts)
