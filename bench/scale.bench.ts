@@ -19,6 +19,7 @@ import { latencyLine, printTable, type Line } from './scale/report'
 import { rawInsertRates } from './scale/raw-import'
 import { failureReason, measure } from './scale/stats'
 import { loadTypedGraph } from './scale/typed-graph'
+import { measureServerMemory } from './scale/server-memory'
 import type { Benchmark } from './types'
 
 const IMPORT_CHUNK = 250_000
@@ -108,6 +109,10 @@ export const scaleBenchmark: Benchmark = {
         lines.push(
           ...importLines(load, rawRates(app.dbPath, path.join(dir, 'raw.sqlite'), catalogue)),
           memoryLine(first.rssAfter, first.rssBefore),
+          ...(await measureServerMemory(app.dbPath, app.password, {
+            fits: `/api/parts/${encodeURIComponent(picks.typical[0]!.number)}/fits`,
+            path: `/api/graph/path?from=${encodeURIComponent(picks.paths[0]!.from.number)}&to=${encodeURIComponent(picks.paths[0]!.to.number)}`,
+          })),
         )
         console.log(
           `\n${catalogue.parts.length.toLocaleString('en')} parts, ${catalogue.links.length.toLocaleString('en')} links, ${catalogue.identities.length.toLocaleString('en')} identities; up to ${options.pace.requests} requests per answer or ${options.pace.budgetMs / 1000} s:`,

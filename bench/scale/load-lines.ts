@@ -23,7 +23,7 @@ export function importLines(load: LoadTimings, raw: { links: number; identities:
 
 export function memoryLine(afterMb: number, beforeMb: number): Line {
   return figureLine(
-    'resident memory, graph built',
+    'resident memory, graph built (benchmark and server in one process)',
     `${afterMb.toLocaleString('en')} MB`,
     `${beforeMb.toLocaleString('en')} MB before`,
     '',

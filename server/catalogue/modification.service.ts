@@ -1,24 +1,27 @@
 import type { DataSource } from 'typeorm'
 import { databaseOf } from '../db/sqlite-connection'
-import { placeholders } from '../db/database'
-import { In } from 'typeorm'
+import { chunks, placeholders } from '../db/database'
 import type { Modification } from '../../shared/schemas/fitment'
-import { ModificationEntity } from './modification.entity'
 import type { ModificationSpec } from '../reasoning/rule-file.schema'
 import { unknownModification } from './unknown-modification'
 
-export function toModification(entity: ModificationEntity): Modification {
+const COLUMNS = '"name", "title", "summary", "steps", "extraParts", "consumables", "skillLevel", "timeMinutes", "cautions", "status"'
+
+/** A modification row as the port reads it: the lists are JSON text on both drivers. */
+type ModificationRow = Omit<Modification, 'steps' | 'extraParts' | 'consumables' | 'cautions'> & {
+  steps: string
+  extraParts: string
+  consumables: string
+  cautions: string
+}
+
+function fromRow(row: ModificationRow): Modification {
   return {
-    name: entity.name,
-    title: entity.title,
-    summary: entity.summary,
-    steps: entity.steps,
-    extraParts: entity.extraParts,
-    consumables: entity.consumables,
-    skillLevel: entity.skillLevel,
-    timeMinutes: entity.timeMinutes,
-    cautions: entity.cautions,
-    status: entity.status,
+    ...row,
+    steps: JSON.parse(row.steps) as Modification['steps'],
+    extraParts: JSON.parse(row.extraParts) as Modification['extraParts'],
+    consumables: JSON.parse(row.consumables) as Modification['consumables'],
+    cautions: JSON.parse(row.cautions) as Modification['cautions'],
   }
 }
 
@@ -66,16 +69,23 @@ export class ModificationService {
   }
 
   async list(): Promise<Modification[]> {
-    const all = await this.dataSource.getRepository(ModificationEntity).find({ order: { name: 'ASC' } })
-    return all.map(toModification)
+    const rows = await databaseOf(this.dataSource).all<ModificationRow>(`SELECT ${COLUMNS} FROM modification ORDER BY "name"`)
+    return rows.map(fromRow)
   }
 
   /** The named modifications, in the order asked, with stand-ins for unknown names. */
   async byNames(names: string[]): Promise<Map<string, Modification>> {
     const unique = [...new Set(names)]
     if (unique.length === 0) return new Map()
-    const found = await this.dataSource.getRepository(ModificationEntity).findBy({ name: In(unique) })
-    const byName = new Map(found.map((entity) => [entity.name, toModification(entity)]))
+    const db = databaseOf(this.dataSource)
+    const byName = new Map<string, Modification>()
+    for (const chunk of chunks(unique)) {
+      const rows = await db.all<ModificationRow>(
+        `SELECT ${COLUMNS} FROM modification WHERE "name" IN (${placeholders(chunk.length)})`,
+        chunk,
+      )
+      for (const row of rows) byName.set(row.name, fromRow(row))
+    }
     return new Map(unique.map((name) => [name, byName.get(name) ?? unknownModification(name)]))
   }
 }
