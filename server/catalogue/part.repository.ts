@@ -29,6 +29,9 @@ function sortMarks(marks: { type: MarkType; value: string }[]) {
 }
 
 /** The part and part_mark tables: every read of a whole part goes through here. */
+/** A part as a graph node is labelled. */
+export type PartLabel = { name: string; family: string }
+
 export class PartRepository {
   constructor(private readonly db: Database) {}
 
@@ -64,6 +67,19 @@ export class PartRepository {
       const part = byId.get(id)
       return part ? [part] : []
     })
+  }
+
+  /** Name and family by part id: what a graph view labels its nodes with, without attributes or marks. */
+  async labelsByIds(ids: readonly number[]): Promise<Map<number, PartLabel>> {
+    const labels = new Map<number, PartLabel>()
+    for (const list of chunks([...new Set(ids)])) {
+      const rows = await this.db.all<PartLabel & { id: number }>(
+        `SELECT "id", "name", "family" FROM part WHERE "id" IN (${placeholders(list.length)})`,
+        list,
+      )
+      for (const { id, name, family } of rows) labels.set(id, { name, family })
+    }
+    return labels
   }
 
   async byNumber(partNumber: string): Promise<PartRecord | undefined> {

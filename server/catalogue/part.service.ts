@@ -4,7 +4,7 @@ import { normalisePartCode } from '../../shared/schemas/part'
 import type { ResolvedFrom } from '../../shared/schemas/part-lookup'
 import { databaseOf } from '../db/sqlite-connection'
 import { AppError } from '../errors/app-error'
-import { PartRepository, toPart, type PartRecord } from './part.repository'
+import { PartRepository, toPart, type PartLabel, type PartRecord } from './part.repository'
 import { PartSearchRepository } from './part-search.repository'
 import { wordsOf } from './part-words'
 import { pageOfHits, type PartDirectory } from './search-order'
@@ -44,6 +44,11 @@ export class PartService {
   /** Parts by id, with their marks, in the order of the ids given. */
   async byIds(ids: number[]): Promise<Part[]> {
     return (await this.repository.byIds(ids)).map(toPart)
+  }
+
+  /** Name and family by part id, for labelling graph nodes. */
+  async labels(ids: number[]): Promise<Map<number, PartLabel>> {
+    return this.repository.labelsByIds(ids)
   }
 
   /** Parts by id with their row ids, in the order of the ids given. */

@@ -53,12 +53,11 @@ export class GraphService {
 
   /** Name and family come from the catalogue rows, for the nodes shown only. */
   private async nodes(graph: FitGraph, distances: [number, number][]): Promise<GraphNode[]> {
-    const found = await this.parts.byIds(distances.map(([id]) => id))
-    const byNumber = new Map(found.map((part) => [part.partNumber, part]))
+    const labels = await this.parts.labels(distances.map(([id]) => id))
     return distances.map(([id, distance]) => {
       const partNumber = graph.partNumberOf(id)
-      const part = byNumber.get(partNumber)
-      return { id: partNumber, partNumber, name: part?.name ?? partNumber, kind: graph.kindOf(id), family: part?.family ?? '', distance }
+      const label = labels.get(id)
+      return { id: partNumber, partNumber, name: label?.name ?? partNumber, kind: graph.kindOf(id), family: label?.family ?? '', distance }
     })
   }
 
