@@ -17,6 +17,10 @@ export type InferredAnswer = { found: Found[]; groups: { kind: SlotId; relation:
 
 /** Judgements kept across requests, by the two rule classes: enough for every pair a busy counter asks about. */
 const JUDGED_LIMIT = 200_000
+/** Sides whose decided parts are kept (a list of part ids each). */
+const DECIDED_LIMIT = 2_000
+
+type Decided = { graph: FitGraph; revision: number; parts: number[]; summaries: RuleSummary[] }
 
 /** Fits the rules infer from attributes, among the parts of the kinds a part mates with. */
 export class InferredFits {
@@ -28,6 +32,8 @@ export class InferredFits {
    */
   private readonly judged = new Map<string, Map<number, RuleSummary>>()
   private judgedCount = 0
+  /** Per side, the parts the rules decide, so a request walks those rather than every part of the kind. */
+  private readonly decided = new Map<string, Decided>()
 
   constructor(private readonly rules: RuleBook) {}
 
@@ -46,29 +52,58 @@ export class InferredFits {
     const groups: InferredAnswer['groups'] = []
     for (const otherKind of kinds) {
       const counts = new Map<Relation, number>()
-      const side = this.sideOf(graph, kind, selfClass, otherKind)
-      for (const candidate of graph.partsOfKind(otherKind)) {
+      const decided = await this.decidedFor(graph, kind, selfClass, otherKind)
+      for (let i = 0; i < decided.parts.length; i++) {
+        const candidate = decided.parts[i]!
         if (exclude.has(candidate) || (query.only && !query.only(candidate))) continue
-        const otherClass = classes.classOf(candidate)
-        // Most candidates share a class judged before: no promise for those.
-        const summary =
-          side.get(otherClass) ??
-          this.judge(graph, side, kind, selfClass, otherKind, otherClass) ??
-          (await this.judgeByRules(graph, side, kind, selfClass, otherKind, otherClass))
-        if (!summary.relation || (query.relation && summary.relation !== query.relation)) continue
-        const count = (counts.get(summary.relation) ?? 0) + 1
-        counts.set(summary.relation, count)
+        const summary = decided.summaries[i]!
+        const relation = summary.relation!
+        if (query.relation && relation !== query.relation) continue
+        const count = (counts.get(relation) ?? 0) + 1
+        counts.set(relation, count)
         if (count <= query.offset || count > query.offset + query.limit) continue
-        found.push(inferredFound(candidate, summary.relation, summary))
+        found.push(inferredFound(candidate, relation, summary))
       }
       for (const [relation, total] of counts) groups.push({ kind: otherKind, relation, total })
     }
     return { found, groups }
   }
 
-  private sideOf(graph: FitGraph, kind: SlotId, selfClass: number, otherKind: SlotId): Map<number, RuleSummary> {
+  /**
+   * The parts of `otherKind` in part-number order whose pair with the class the
+   * rules decide, with the rules' summary: one pass over the kind, kept until
+   * a part of that kind changes (its revision) or the graph is reloaded.
+   */
+  private async decidedFor(graph: FitGraph, kind: SlotId, selfClass: number, otherKind: SlotId): Promise<Decided> {
+    const key = this.keyOf(graph, kind, selfClass, otherKind)
+    const revision = graph.revisionOfKind(otherKind)
+    const known = this.decided.get(key)
+    if (known && known.graph === graph && known.revision === revision) return known
+    const side = this.sideOf(key)
+    const classes = graph.ruleClasses
+    const decided: Decided = { graph, revision, parts: [], summaries: [] }
+    for (const candidate of graph.partsOfKind(otherKind)) {
+      const otherClass = classes.classOf(candidate)
+      // Most candidates share a class judged before: no promise for those.
+      const summary =
+        side.get(otherClass) ??
+        this.judge(graph, side, kind, selfClass, otherKind, otherClass) ??
+        (await this.judgeByRules(graph, side, kind, selfClass, otherKind, otherClass))
+      if (!summary.relation) continue
+      decided.parts.push(candidate)
+      decided.summaries.push(summary)
+    }
+    if (this.decided.size >= DECIDED_LIMIT) this.decided.clear()
+    this.decided.set(key, decided)
+    return decided
+  }
+
+  private keyOf(graph: FitGraph, kind: SlotId, selfClass: number, otherKind: SlotId): string {
     const readsCompanions = (kind === 'head' && otherKind === 'distributor') || (kind === 'distributor' && otherKind === 'head')
-    const key = `${kind}:${selfClass}|${otherKind}${readsCompanions ? `@${companionsRevision(graph)}` : ''}`
+    return `${kind}:${selfClass}|${otherKind}${readsCompanions ? `@${companionsRevision(graph)}` : ''}`
+  }
+
+  private sideOf(key: string): Map<number, RuleSummary> {
     let side = this.judged.get(key)
     if (!side) {
       side = new Map()
