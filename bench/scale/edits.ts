@@ -14,7 +14,7 @@ const fitsAnswer = z.object({
     }),
   ),
 })
-const EDITS = 5
+const EDITS = 20
 const PAGE_SIZE = 200
 
 type Edit = { linkId: number; part: string; other: string; otherKind: string }
