@@ -1,7 +1,7 @@
 import { PART_KINDS, type PartKind } from '../../../shared/schemas/part-kinds'
 import { RELATIONS, REVIEW_STATUSES, type Relation, type ReviewStatus } from '../../../shared/schemas/fitment'
-import { AdjacencyArena } from './adjacency-arena'
 import { EdgeStore, resized } from './edge-store'
+import { APPROVED, DOES_NOT_FIT, LinkStore, REJECTED, RELATION_CODE, STATUS_CODE } from './link-store'
 import { AttributeClasses } from './attribute-classes'
 import { IdentityClasses } from './identity-classes'
 import type { FitDetails } from './fit-details'
@@ -13,52 +13,7 @@ export type GraphLink = { id: number; a: number; b: number; relation: Relation; 
 export type GraphIdentity = { id: number; a: number; b: number }
 
 const KIND_CODE = new Map<string, number>(PART_KINDS.map((kind, index) => [kind, index]))
-const RELATION_CODE = new Map<string, number>(RELATIONS.map((relation, index) => [relation, index]))
-const STATUS_CODE = new Map<string, number>(REVIEW_STATUSES.map((status, index) => [status, index]))
-export const APPROVED = STATUS_CODE.get('approved')!
-export const REJECTED = STATUS_CODE.get('rejected')!
-export const DOES_NOT_FIT = RELATION_CODE.get('does-not-fit')!
-
-class LinkStore extends EdgeStore {
-  relation = new Uint8Array(16)
-  status = new Uint8Array(16)
-  /** The approved fit links alone, laid out for path searches (1 where a slot is in it). */
-  readonly paths = new AdjacencyArena()
-  private inPaths = new Uint8Array(16)
-
-  protected override grow(capacity: number) {
-    super.grow(capacity)
-    this.relation = resized(this.relation, capacity)
-    this.status = resized(this.status, capacity)
-    this.inPaths = resized(this.inPaths, capacity)
-  }
-
-  review(slot: number, relation: number, status: number) {
-    this.relation[slot] = relation
-    this.status[slot] = status
-    const carries = status === APPROVED && relation !== DOES_NOT_FIT
-    if (carries === (this.inPaths[slot] === 1)) return
-    if (carries) {
-      this.paths.attach(this.a[slot]!, this.b[slot]!, slot)
-      this.paths.attach(this.b[slot]!, this.a[slot]!, slot)
-    } else this.leavePaths(slot)
-    this.inPaths[slot] = carries ? 1 : 0
-  }
-
-  override remove(id: number): number {
-    const slot = this.slotOf(id)
-    if (slot >= 0 && this.inPaths[slot] === 1) {
-      this.leavePaths(slot)
-      this.inPaths[slot] = 0
-    }
-    return super.remove(id)
-  }
-
-  private leavePaths(slot: number) {
-    this.paths.detach(this.a[slot]!, slot)
-    this.paths.detach(this.b[slot]!, slot)
-  }
-}
+export { APPROVED, DOES_NOT_FIT, REJECTED }
 
 /**
  * The fitment graph in memory, kept up to date by deltas (FitGraphIndex):
