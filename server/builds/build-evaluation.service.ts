@@ -95,8 +95,8 @@ export class BuildEvaluationService {
     for (const { slots } of MATING_PAIRS) {
       const [a, b] = slots
       if ((a !== slot && b !== slot) || build.ids[a] === undefined || build.ids[b] === undefined) continue
-      const outcomes = this.rules.cachedPair(a, b, facts) ?? (await this.rules.evaluatePair(a, b, facts))
-      const { relation } = summariseOutcomes(outcomes)
+      const outcomes = this.rules.pairOutcomes(a, b, facts)
+      const { relation } = summariseOutcomes(Array.isArray(outcomes) ? outcomes : await outcomes)
       if (!relation || relation === 'does-not-fit') return true
     }
     return false

@@ -3,7 +3,7 @@ import type { ExplanationStep, Relation } from '../../shared/schemas/fitment'
 import type { PartKind } from '../../shared/schemas/part-kinds'
 import { buildFacts } from '../reasoning/facts'
 import { computeFigures } from '../reasoning/figure-facts'
-import type { RuleBook } from '../reasoning/rule-book'
+import type { RuleBook, RuleOutcome } from '../reasoning/rule-book'
 import { summariseOutcomes, type RuleSummary } from '../reasoning/rule-summary'
 import type { Found } from './found'
 import type { FitGraph } from './graph/fit-graph'
@@ -85,10 +85,8 @@ export class InferredFits {
     for (const candidate of graph.partsOfKind(otherKind)) {
       const otherClass = classes.classOf(candidate)
       // Most candidates share a class judged before: no promise for those.
-      const summary =
-        side.get(otherClass) ??
-        this.judge(graph, side, kind, selfClass, otherKind, otherClass) ??
-        (await this.judgeByRules(graph, side, kind, selfClass, otherKind, otherClass))
+      let summary = side.get(otherClass) ?? this.judge(graph, side, kind, selfClass, otherKind, otherClass)
+      if (summary instanceof Promise) summary = await summary
       if (!summary.relation) continue
       decided.parts.push(candidate)
       decided.summaries.push(summary)
@@ -112,22 +110,18 @@ export class InferredFits {
     return side
   }
 
-  /** A judgement from the rule book's answers so far, without a promise; undefined when the rules must run. */
-  private judge(graph: FitGraph, side: Map<number, RuleSummary>, kind: SlotId, selfClass: number, otherKind: SlotId, otherClass: number) {
-    const outcomes = this.rules.cachedPair(kind, otherKind, this.factsOf(graph, kind, selfClass, otherKind, otherClass))
-    return outcomes && this.keep(side, otherClass, summariseOutcomes(outcomes))
-  }
-
-  private async judgeByRules(
+  /** A class judged and kept: at once when the rule book has these values, a promise only when the rules must run. */
+  private judge(
     graph: FitGraph,
     side: Map<number, RuleSummary>,
     kind: SlotId,
     selfClass: number,
     otherKind: SlotId,
     otherClass: number,
-  ) {
-    const facts = this.factsOf(graph, kind, selfClass, otherKind, otherClass)
-    return this.keep(side, otherClass, summariseOutcomes(await this.rules.evaluatePair(kind, otherKind, facts)))
+  ): RuleSummary | Promise<RuleSummary> {
+    const outcomes = this.rules.pairOutcomes(kind, otherKind, this.factsOf(graph, kind, selfClass, otherKind, otherClass))
+    const kept = (found: RuleOutcome[]) => this.keep(side, otherClass, summariseOutcomes(found))
+    return Array.isArray(outcomes) ? kept(outcomes) : outcomes.then(kept)
   }
 
   private factsOf(graph: FitGraph, kind: SlotId, selfClass: number, otherKind: SlotId, otherClass: number) {

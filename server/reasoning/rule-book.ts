@@ -119,20 +119,19 @@ export class RuleBook {
 
   /** Rules for one mating pair; answers are cached by the values the rules read. */
   async evaluatePair(kindA: string, kindB: string, facts: Facts): Promise<RuleOutcome[]> {
-    const compiled = this.pairEngines.get(pairKey(kindA, kindB))
-    if (!compiled) return NO_OUTCOMES
-    return this.run(`${pairKey(kindA, kindB)}`, compiled, facts)
+    return this.pairOutcomes(kindA, kindB, facts)
   }
 
   /**
-   * A pair's outcomes when the rules have judged these values before, without
-   * a promise (thousands of candidates a request share a few answers); else
-   * undefined, and evaluatePair runs the rules.
+   * The same, answered without a promise when the rules have judged these
+   * values before (thousands of candidates in a request share a few answers):
+   * an array then, a promise only when the rules must run.
    */
-  cachedPair(kindA: string, kindB: string, facts: Facts): RuleOutcome[] | undefined {
+  pairOutcomes(kindA: string, kindB: string, facts: Facts): RuleOutcome[] | Promise<RuleOutcome[]> {
     const compiled = this.pairEngines.get(pairKey(kindA, kindB))
     if (!compiled) return NO_OUTCOMES
-    return this.cache.get(this.keyOf(pairKey(kindA, kindB), compiled, facts))
+    const key = this.keyOf(pairKey(kindA, kindB), compiled, facts)
+    return this.cache.get(key) ?? this.runKeyed(key, compiled, facts)
   }
 
   async evaluateBuild(facts: Facts): Promise<RuleOutcome[]> {
@@ -145,8 +144,10 @@ export class RuleBook {
 
   private async run(scope: string, compiled: CompiledEngine, facts: Facts): Promise<RuleOutcome[]> {
     const key = this.keyOf(scope, compiled, facts)
-    const cached = this.cache.get(key)
-    if (cached) return cached
+    return this.cache.get(key) ?? this.runKeyed(key, compiled, facts)
+  }
+
+  private async runKeyed(key: string, compiled: CompiledEngine, facts: Facts): Promise<RuleOutcome[]> {
     const { results } = await compiled.engine.run(facts)
     const outcomes = results
       .map((result) => {
