@@ -5,10 +5,12 @@ import type { DataSource } from 'typeorm'
 import type { AppConfig } from './config/env'
 import { openDatabase } from './db/data-source'
 import { DEMO_PASSWORD, DEMO_USERS, seedDemo } from './demo/seed'
+import { seedDemoOnPostgres } from './demo/seed-postgres'
 import { UserService } from './users/user.service'
 import { createServices, type Services } from './services'
 import { RuleBook } from './reasoning/rule-book'
 import { loadRules } from './reasoning/rule-loader'
+import { followOtherServers, type ChangeFollower } from './follow-changes'
 
 export const projectRoot = path.resolve(path.dirname(fileURLToPath(import.meta.url)), '..')
 
@@ -17,7 +19,14 @@ export function readVersion(): string {
   return pkg.version
 }
 
-export type Prepared = { dataSource: DataSource; rules: RuleBook; services: Services; seeded: boolean }
+export type Prepared = {
+  dataSource: DataSource
+  rules: RuleBook
+  services: Services
+  seeded: boolean
+  /** Other servers' writes on a shared PostgreSQL database, followed as deltas (null on SQLite). */
+  changes: ChangeFollower | null
+}
 
 /** Accounts that still sign in with the published demo password (start-up warns about them). */
 export async function demoAccountsLeft(dataSource: DataSource): Promise<string[]> {
@@ -40,16 +49,19 @@ export async function prepareDatabase(config: AppConfig): Promise<Prepared> {
   const dataSource = await openDatabase(
     config.databaseUrl ? { type: 'postgres', url: config.databaseUrl } : { type: 'sqlite', path: dbPath },
   )
-  const services = createServices(
-    dataSource,
-    { ...config, uploadDir: path.resolve(projectRoot, config.uploadDir), mailDir: path.resolve(projectRoot, config.mailDir) },
-    rules,
-  )
+  const serviceConfig = {
+    ...config,
+    uploadDir: path.resolve(projectRoot, config.uploadDir),
+    mailDir: path.resolve(projectRoot, config.mailDir),
+  }
+  const services = createServices(dataSource, serviceConfig, rules)
   await services.modifications.syncShipped(rules.loaded.modifications)
-  // The demo seed writes through imports, which still need SQLite.
-  if (config.demo && config.databaseUrl)
-    console.warn('The demo scenario is seeded only into the embedded SQLite database; skipped on PostgreSQL.')
-  const seeded = config.demo && !config.databaseUrl ? await seedDemo(dataSource, services, path.join(projectRoot, 'data', 'demo')) : false
+  const demoDir = path.join(projectRoot, 'data', 'demo')
+  const seeded = !config.demo
+    ? false
+    : config.databaseUrl
+      ? await seedDemoOnPostgres(dataSource, services.users, serviceConfig, rules, demoDir)
+      : await seedDemo(dataSource, services, demoDir)
   if (config.firstAdmin && (await services.users.count()) === 0) {
     await services.users.create({ ...config.firstAdmin, name: 'Administrator', role: 'admin' })
   }
@@ -58,5 +70,6 @@ export async function prepareDatabase(config: AppConfig): Promise<Prepared> {
   // The fit graph is read once, here, before the app answers; writes then apply to it as deltas.
   await services.graphIndex.load()
   await services.stockIndex.load()
-  return { dataSource, rules, services, seeded }
+  const changes = config.databaseUrl ? await followOtherServers(config.databaseUrl, services) : null
+  return { dataSource, rules, services, seeded, changes }
 }

@@ -5,7 +5,7 @@ import { demoAccountsLeft, prepareDatabase, projectRoot, readVersion } from './b
 import { loadConfig } from './config/env'
 
 const config = loadConfig()
-const { dataSource, services, seeded } = await prepareDatabase(config)
+const { dataSource, services, seeded, changes } = await prepareDatabase(config)
 const demoAccounts = await demoAccountsLeft(dataSource)
 if (seeded) console.log('Seeded the demo scenario into the empty database.')
 if (demoAccounts.length > 0) {
@@ -39,6 +39,7 @@ function shutdown() {
     void services.accounts
       .resetsQueued()
       .then(() => services.outbox.stop())
+      .then(() => changes?.close())
       .then(() => services.imports.close())
       .then(() => dataSource.destroy())
       .finally(() => process.exit(0))

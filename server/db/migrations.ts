@@ -4,6 +4,7 @@ import { FaceFinish1796279666605 } from '../migrations/1796279666605-FaceFinish'
 import { WordPartIndex1796291212029 } from '../migrations/1796291212029-WordPartIndex'
 import { FaceFinish1796279676351 as PostgresFaceFinish1796279676351 } from '../migrations/postgres/1796279676351-FaceFinish'
 import { WordPartIndex1796291213360 as PostgresWordPartIndex1796291213360 } from '../migrations/postgres/1796291213360-WordPartIndex'
+import { StockChangeFeed1796300000000 } from '../migrations/postgres/1796300000000-StockChangeFeed'
 import { StockPhotos1796229013832 as PostgresStockPhotos1796229013832 } from '../migrations/postgres/1796229013832-StockPhotos'
 import { CounterFinish1796235252157 as PostgresCounterFinish1796235252157 } from '../migrations/postgres/1796235252157-CounterFinish'
 import { AccountTokens1796223315452 } from '../migrations/1796223315452-AccountTokens'
@@ -85,4 +86,5 @@ export const postgresMigrations = [
   PostgresCounterFinish1796235252157,
   PostgresFaceFinish1796279676351,
   PostgresWordPartIndex1796291213360,
+  StockChangeFeed1796300000000,
 ]

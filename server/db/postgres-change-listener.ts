@@ -1,7 +1,9 @@
 import pg from 'pg'
 
 /** Row ids a committed change touched, as the graph index takes them. */
-export type TouchedIds = { parts?: number[]; links?: number[]; identities?: number[] }
+export type TouchedIds = { parts?: number[]; links?: number[]; identities?: number[]; stockParts?: number[]; sites?: number[] }
+
+const KEYS = ['parts', 'links', 'identities', 'stockParts', 'sites'] as const
 
 type ChangeRow = { id: number; touched: TouchedIds }
 
@@ -10,11 +12,9 @@ const CHANNEL = 'fitwright_catalogue'
 const POLL_MS = 5_000
 
 function merge(rows: ChangeRow[]): TouchedIds {
-  const merged = { parts: new Set<number>(), links: new Set<number>(), identities: new Set<number>() }
-  for (const { touched } of rows) {
-    for (const key of ['parts', 'links', 'identities'] as const) for (const id of touched[key] ?? []) merged[key].add(id)
-  }
-  return { parts: [...merged.parts], links: [...merged.links], identities: [...merged.identities] }
+  const merged = new Map(KEYS.map((key) => [key, new Set<number>()]))
+  for (const { touched } of rows) for (const key of KEYS) for (const id of touched[key] ?? []) merged.get(key)!.add(id)
+  return Object.fromEntries(KEYS.map((key) => [key, [...merged.get(key)!]])) as TouchedIds
 }
 
 /**

@@ -82,12 +82,6 @@ async function seedBuilds(sheets: Services['sheets'], file: string, owner: User)
 
 const SEEDED_KEY = 'demo-seeded'
 
-/**
- * Seeds the invented demo scenario into an empty database (no users, no parts)
- * and marks it done. A seed cut short (a bad demo row, a killed process) is
- * reported at the next start rather than silently left half-filled.
- * Returns whether it seeded.
- */
 /** The demo sites and units on their shelves: every condition and status appears. */
 async function seedStock(stock: Services['stock'], file: string) {
   const demo = JSON.parse(readFileSync(file, 'utf8')) as { sites: unknown[]; units: unknown[] }
@@ -95,35 +89,46 @@ async function seedStock(stock: Services['stock'], file: string) {
   for (const unit of demo.units) await stock.create(stockInputSchema.parse(unit))
 }
 
-export async function seedDemo(
-  dataSource: DataSource,
-  services: Pick<Services, 'users' | 'imports' | 'graphIndex' | 'stock' | 'vehicles' | 'sheets'>,
-  demoDir: string,
-): Promise<boolean> {
-  const { users, imports } = services
+/**
+ * Whether the demo scenario should be seeded: the database is empty (no users,
+ * no parts) and was never seeded. A seed cut short is reported instead.
+ */
+export async function demoSeedDue(dataSource: DataSource, users: Services['users']): Promise<boolean> {
   const settings = dataSource.getRepository(AppSettingEntity)
   if (await settings.existsBy({ key: SEEDED_KEY })) return false
   const [userCount, partCount] = await Promise.all([
     dataSource.getRepository(UserEntity).count(),
     dataSource.getRepository(PartEntity).count(),
   ])
-  if (userCount > 0 || partCount > 0) {
-    const [{ sheets }] = (await dataSource.query('SELECT COUNT(*) AS sheets FROM build_sheet')) as [{ sheets: number }]
-    if (
-      sheets === 0 &&
-      (
-        await users.withPassword(
-          DEMO_USERS.map((u) => u.email),
-          DEMO_PASSWORD,
-        )
-      ).length > 0
-    ) {
-      console.warn(
-        'WARNING: the demo scenario looks only partly seeded (a start was cut short). Delete the database file to seed it again.',
+  if (userCount === 0 && partCount === 0) return true
+  const [{ sheets }] = (await dataSource.query('SELECT CAST(COUNT(*) AS INTEGER) AS sheets FROM build_sheet')) as [{ sheets: number }]
+  if (
+    sheets === 0 &&
+    (
+      await users.withPassword(
+        DEMO_USERS.map((u) => u.email),
+        DEMO_PASSWORD,
       )
-    }
-    return false
+    ).length > 0
+  ) {
+    console.warn('WARNING: the demo scenario looks only partly seeded (a start was cut short). Delete the database file to seed it again.')
   }
+  return false
+}
+
+/**
+ * Seeds the invented demo scenario into an empty database (no users, no parts)
+ * and marks it done. A seed cut short (a bad demo row, a killed process) is
+ * reported at the next start rather than silently left half-filled.
+ * Returns whether it seeded.
+ */
+export async function seedDemo(
+  dataSource: DataSource,
+  services: Pick<Services, 'users' | 'imports' | 'graphIndex' | 'stock' | 'vehicles' | 'sheets'>,
+  demoDir: string,
+): Promise<boolean> {
+  const { users, imports } = services
+  if (!(await demoSeedDue(dataSource, users))) return false
   const created = []
   for (const user of DEMO_USERS) created.push(await users.createDemo({ ...user, password: DEMO_PASSWORD }))
   const editor = created.find((user) => user.role === 'editor')!
@@ -141,6 +146,6 @@ export async function seedDemo(
   services.graphIndex.invalidate()
   await seedBuilds(services.sheets, path.join(demoDir, 'builds.json'), tech)
   // Written last: a start cut short before here is reported at the next start.
-  await settings.insert({ key: SEEDED_KEY, value: new Date().toISOString() })
+  await dataSource.getRepository(AppSettingEntity).insert({ key: SEEDED_KEY, value: new Date().toISOString() })
   return true
 }

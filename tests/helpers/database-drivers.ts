@@ -6,6 +6,8 @@ import type { DataSource } from 'typeorm'
 import { openDatabase } from '../../server/db/data-source'
 import { createPostgresDatabase, postgresServerUrl } from './postgres'
 
+if (!postgresServerUrl) console.warn('PostgreSQL tests skipped: set FITWRIGHT_TEST_PG_URL (bash .ci/run starts a server).')
+
 export type OpenedDatabase = { dataSource: DataSource; close: () => Promise<void> }
 export type DatabaseDriver = { name: 'sqlite' | 'postgres'; open: () => Promise<OpenedDatabase> }
 

@@ -11,18 +11,24 @@ export const postgresServerUrl = process.env.FITWRIGHT_TEST_PG_URL
 if (!postgresServerUrl && process.env.FITWRIGHT_PG === 'required') {
   throw new Error('FITWRIGHT_PG=required but FITWRIGHT_TEST_PG_URL is not set.')
 }
-if (!postgresServerUrl) console.warn('PostgreSQL tests skipped: set FITWRIGHT_TEST_PG_URL (bash .ci/run starts a server).')
 
-export async function createPostgresDatabase(): Promise<{ url: string; drop: () => Promise<void> }> {
+export type TestDatabase = { name: string; url: string; drop: () => Promise<void> }
+
+/** A new empty database, or a copy of `template` (a database no one is connected to). */
+export async function createPostgresDatabase(template?: string): Promise<TestDatabase> {
   if (!postgresServerUrl) throw new Error('No PostgreSQL server for tests.')
   const name = `fitwright_test_${randomBytes(6).toString('hex')}`
   const admin = new pg.Client({ connectionString: postgresServerUrl })
   await admin.connect()
-  await admin.query(`CREATE DATABASE ${name}`)
-  await admin.end()
+  try {
+    await admin.query(`CREATE DATABASE ${name}${template ? ` TEMPLATE ${template}` : ''}`)
+  } finally {
+    await admin.end()
+  }
   const url = new URL(postgresServerUrl)
   url.pathname = `/${name}`
   return {
+    name,
     url: url.toString(),
     async drop() {
       const client = new pg.Client({ connectionString: postgresServerUrl })
@@ -31,4 +37,15 @@ export async function createPostgresDatabase(): Promise<{ url: string; drop: () 
       await client.end()
     },
   }
+}
+
+const leftForLater: TestDatabase[] = []
+
+/** Drops `database` when the test file ends (see server-setup.ts): for templates shared by the file's tests. */
+export function dropWhenFileEnds(database: TestDatabase) {
+  leftForLater.push(database)
+}
+
+export async function dropLeftDatabases() {
+  for (const database of leftForLater.splice(0)) await database.drop()
 }
