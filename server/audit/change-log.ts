@@ -1,10 +1,6 @@
-import type Database from 'better-sqlite3'
 import type { Database as Port } from '../db/database'
 import type { ImportCounts, ImportType } from '../../shared/schemas/imports'
 import type { ImportRecordType } from './import-change.entity'
-
-/** The time as TypeORM writes it into SQLite, so raw and TypeORM writes sort together. */
-export const SQL_NOW = "strftime('%Y-%m-%d %H:%M:%f', 'now')"
 
 export type BatchRecord = {
   type: ImportType
@@ -22,19 +18,12 @@ function batchValues(batch: BatchRecord) {
   return [batch.type, batch.fileName, batch.fileHash, batch.user.id, batch.user.name, created, updated, unchanged, rejected] as const
 }
 
-export function insertBatch(db: Database.Database, batch: BatchRecord): number {
-  const result = db
-    .prepare(`INSERT INTO import_batch (${BATCH_COLUMNS}) VALUES (?, ?, ?, ?, ?, ?, ?, ?, ?, ?, 'committed', ${SQL_NOW})`)
-    .run(...batchValues(batch), batch.validRowsOnly ? 1 : 0)
-  return Number(result.lastInsertRowid)
-}
-
-/** The same record through the data port, on either database (hand edits and reviews). */
-export function recordBatch(db: Port, batch: BatchRecord): Promise<number> {
+/** Records a batch (an import, a hand edit, a review) and answers its id; `now` is its time, which its writes share. */
+export function recordBatch(db: Port, batch: BatchRecord, now = new Date()): Promise<number> {
   return db.insert(`INSERT INTO import_batch (${BATCH_COLUMNS}) VALUES (?, ?, ?, ?, ?, ?, ?, ?, ?, ?, 'committed', ?) RETURNING "id"`, [
     ...batchValues(batch),
     batch.validRowsOnly,
-    new Date(),
+    now,
   ])
 }
 
@@ -58,15 +47,8 @@ type ChangeArgs = [
 const changeValues = (batchId: number, [recordType, recordId, action, previousBatchId, previous]: ChangeArgs) =>
   [batchId, recordType, recordId, action, previousBatchId, JSON.stringify(previous)] as const
 
-export function changeRecorder(db: Database.Database, batchId: number) {
-  const insert = db.prepare(INSERT_CHANGE)
-  return (...change: ChangeArgs) => {
-    insert.run(...changeValues(batchId, change))
-  }
-}
-
-/** changeRecorder through the data port. */
-export function portChangeRecorder(db: Port, batchId: number) {
+/** Records, for a revert, what each record a batch changed looked like before. */
+export function changeRecorder(db: Port, batchId: number) {
   return async (...change: ChangeArgs) => {
     await db.run(INSERT_CHANGE, changeValues(batchId, change))
   }

@@ -1,5 +1,5 @@
 import type { Database } from '../db/database'
-import { portChangeRecorder, recordBatch, type PreviousRows } from './change-log'
+import { changeRecorder, recordBatch, type PreviousRows } from './change-log'
 import { modificationIds, setLinkModifications } from '../fitment/link-rows'
 
 export type Editor = { id: number; name: string }
@@ -25,7 +25,7 @@ export async function handEdit(
     counts: { ...counts, unchanged: 0, rejected: 0 },
     validRowsOnly: false,
   })
-  const record = portChangeRecorder(db, batchId)
+  const record = changeRecorder(db, batchId)
   return {
     batchId,
     /** Keeps the link's rows as they were, before it is updated or deleted. */

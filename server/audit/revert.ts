@@ -1,8 +1,8 @@
-import type Database from 'better-sqlite3'
+import type { Database, SqlValue } from '../db/database'
 import type { FieldError } from '../../shared/schemas/errors'
 import { AppError } from '../errors/app-error'
 import type { ImportRecordType } from './import-change.entity'
-import { SQL_NOW, type PreviousRows } from './change-log'
+import type { PreviousRows } from './change-log'
 import { rewritePartWords } from '../catalogue/part-word-writer'
 import type { Touched } from '../imports/import-jobs'
 import { findBlockers, findQuoteBlockers } from './revert-blockers'
@@ -21,9 +21,9 @@ const TABLES: Record<ImportRecordType, { table: string; children: Record<string,
 const COLUMN = /^[A-Za-z]+$/
 
 /** Rows a revert would write back that point at a part or modification gone since (its batch was reverted). */
-function missingReferences(db: Database.Database, changes: { type: ImportRecordType; rows: PreviousRows }[]): string[] {
-  const partExists = db.prepare('SELECT 1 FROM part WHERE id = ?')
-  const modificationExists = db.prepare('SELECT 1 FROM modification WHERE id = ?')
+async function missingReferences(db: Database, changes: { type: ImportRecordType; rows: PreviousRows }[]): Promise<string[]> {
+  const partExists = (id: unknown) => db.get('SELECT 1 AS "found" FROM part WHERE "id" = ?', [Number(id)])
+  const modificationExists = (id: unknown) => db.get('SELECT 1 AS "found" FROM modification WHERE "id" = ?', [Number(id)])
   const missing: string[] = []
   for (const { type, rows } of changes) {
     if (type === 'part') continue
@@ -31,57 +31,57 @@ function missingReferences(db: Database.Database, changes: { type: ImportRecordT
     const partColumns = type === 'stock' ? ['partId'] : type === 'vehicle' ? [] : ['partAId', 'partBId']
     const partIds = [...partColumns.map((column) => main[column]), ...(rows.vehicle_original ?? []).map((original) => original.partId)]
     for (const id of partIds) {
-      if (!partExists.get(id)) missing.push(`part id ${String(id)}`)
+      if (!(await partExists(id))) missing.push(`part id ${String(id)}`)
     }
     for (const mod of rows.link_modification ?? []) {
-      if (!modificationExists.get(mod.modificationId)) missing.push(`modification id ${String(mod.modificationId)}`)
+      if (!(await modificationExists(mod.modificationId))) missing.push(`modification id ${String(mod.modificationId)}`)
     }
   }
   return [...new Set(missing)]
 }
 
-function restorer(db: Database.Database) {
-  const statements = new Map<string, Database.Statement>()
-  const run = (sql: string, values: unknown[]) => {
-    let statement = statements.get(sql)
-    if (!statement) statements.set(sql, (statement = db.prepare(sql)))
-    statement.run(...values)
+function restorer(db: Database) {
+  const run = async (sql: string, values: unknown[]) => {
+    await db.run(sql, values as SqlValue[])
   }
   const insert = (table: string, row: Record<string, unknown>) => {
     const columns = Object.keys(row).filter((column) => COLUMN.test(column))
-    run(
+    return run(
       `INSERT INTO ${table} (${columns.map((c) => `"${c}"`).join(', ')}) VALUES (${columns.map(() => '?').join(', ')})`,
       columns.map((c) => row[c]),
     )
   }
-  return (type: ImportRecordType, recordId: number, action: 'updated' | 'deleted', previous: PreviousRows) => {
+  return async (type: ImportRecordType, recordId: number, action: 'updated' | 'deleted', previous: PreviousRows) => {
     const { table, children } = TABLES[type]
     const main = previous[table]?.[0]
     if (!main) throw new Error(`Change of ${type} ${recordId} has no previous row`)
     if (action === 'updated') {
       const columns = Object.keys(main).filter((column) => COLUMN.test(column) && column !== 'id')
-      run(`UPDATE ${table} SET ${columns.map((c) => `"${c}" = ?`).join(', ')} WHERE id = ?`, [...columns.map((c) => main[c]), recordId])
-      for (const [child, key] of Object.entries(children)) run(`DELETE FROM ${child} WHERE ${key} = ?`, [recordId])
+      await run(`UPDATE ${table} SET ${columns.map((c) => `"${c}" = ?`).join(', ')} WHERE "id" = ?`, [
+        ...columns.map((c) => main[c]),
+        recordId,
+      ])
+      for (const [child, key] of Object.entries(children)) await run(`DELETE FROM ${child} WHERE "${key}" = ?`, [recordId])
     } else {
-      insert(table, main)
+      await insert(table, main)
     }
-    for (const child of Object.keys(children)) for (const row of previous[child] ?? []) insert(child, row)
+    for (const child of Object.keys(children)) for (const row of previous[child] ?? []) await insert(child, row)
   }
 }
 
 /**
  * Puts back the catalogue as it was before the batch: records it updated get
  * their previous rows, records it created go, records it deleted return (with
- * their ids). Synchronous, for the caller's transaction. Answers the parts,
+ * their ids). Inside the caller's transaction. Answers the parts,
  * links and identities it touched, for the fit graph index, and the parts
  * whose shelves it changed, for the stock index.
  */
-export function revertBatch(db: Database.Database, batchId: number, userName: string): Touched {
-  const batch = db.prepare('SELECT status FROM import_batch WHERE id = ?').get(batchId) as { status: string } | undefined
+export async function revertBatch(db: Database, batchId: number, userName: string): Promise<Touched> {
+  const batch = await db.get<{ status: string }>('SELECT "status" FROM import_batch WHERE "id" = ?', [batchId])
   if (!batch) throw AppError.notFound(`No import batch ${batchId}.`)
   if (batch.status === 'reverted') throw new AppError(409, 'already_reverted', `Batch ${batchId} is already reverted.`)
 
-  const quoted = findQuoteBlockers(db, batchId)
+  const quoted = await findQuoteBlockers(db, batchId)
   if (quoted.length) {
     const details: FieldError[] = quoted.map((quote) => {
       const job = jobNumber({ id: quote.quoteId, createdAt: toIsoTime(quote.createdAt) })
@@ -99,7 +99,7 @@ export function revertBatch(db: Database.Database, batchId: number, userName: st
     )
   }
 
-  const blockers = findBlockers(db, batchId)
+  const blockers = await findBlockers(db, batchId)
   if (blockers.length) {
     const details: FieldError[] = blockers.map((b) => ({
       path: b.batchId ? `batch ${b.batchId}` : 'outside imports',
@@ -113,11 +113,12 @@ export function revertBatch(db: Database.Database, batchId: number, userName: st
   }
 
   const changes = (
-    db
-      .prepare('SELECT recordType, recordId, action, previousValues FROM import_change WHERE batchId = ? ORDER BY id')
-      .all(batchId) as ChangeRow[]
+    await db.all<ChangeRow>(
+      'SELECT "recordType", "recordId", "action", "previousValues" FROM import_change WHERE "batchId" = ? ORDER BY "id"',
+      [batchId],
+    )
   ).map((change) => ({ ...change, type: change.recordType, rows: JSON.parse(change.previousValues) as PreviousRows }))
-  const missing = missingReferences(db, changes)
+  const missing = await missingReferences(db, changes)
   if (missing.length) {
     throw new AppError(
       409,
@@ -125,30 +126,32 @@ export function revertBatch(db: Database.Database, batchId: number, userName: st
       `The records this batch replaced point at ${missing.join(', ')}, removed since by another revert, so they cannot be put back exactly.`,
     )
   }
-  const ids = (table: string) =>
-    (db.prepare(`SELECT id FROM ${table} WHERE batchId = ?`).all(batchId) as { id: number }[]).map((row) => row.id)
+  const ids = (table: string) => db.column(`SELECT "id" FROM ${table} WHERE "batchId" = ?`, [batchId])
   const changed = (type: ImportRecordType) => changes.filter((change) => change.type === type).map((change) => change.recordId)
   const catalogue = {
-    parts: [...ids('part'), ...changed('part')],
-    links: [...ids('link'), ...changed('link')],
-    identities: [...ids('part_identity'), ...changed('identity')],
+    parts: [...(await ids('part')), ...changed('part')],
+    links: [...(await ids('link')), ...changed('link')],
+    identities: [...(await ids('part_identity')), ...changed('identity')],
   }
-  const stockParts = new Set(
-    (db.prepare('SELECT "partId" FROM stock_item WHERE "batchId" = ?').all(batchId) as { partId: number }[]).map((row) => row.partId),
-  )
+  const stockParts = new Set(await db.column('SELECT "partId" FROM stock_item WHERE "batchId" = ?', [batchId]))
   for (const change of changes) if (change.type === 'stock') stockParts.add(Number(change.rows.stock_item?.[0]?.partId))
   const restore = restorer(db)
-  for (const change of changes) if (change.action === 'updated') restore(change.type, change.recordId, 'updated', change.rows)
+  for (const change of changes) if (change.action === 'updated') await restore(change.type, change.recordId, 'updated', change.rows)
   // A field report's approval goes back to the queue with the links it wrote or confirmed.
-  db.prepare('DELETE FROM field_report_link WHERE "batchId" = ?').run(batchId)
-  db.prepare(
+  await db.run('DELETE FROM field_report_link WHERE "batchId" = ?', [batchId])
+  await db.run(
     `UPDATE field_report SET "status" = 'submitted', "batchId" = NULL, "decidedByName" = NULL, "decidedAt" = NULL, "decisionNote" = '' WHERE "batchId" = ?`,
-  ).run(batchId)
-  db.prepare('DELETE FROM vehicle_original WHERE "vehicleId" IN (SELECT "id" FROM vehicle_application WHERE "batchId" = ?)').run(batchId)
+    [batchId],
+  )
+  await db.run('DELETE FROM vehicle_original WHERE "vehicleId" IN (SELECT "id" FROM vehicle_application WHERE "batchId" = ?)', [batchId])
   for (const table of ['stock_item', 'vehicle_application', 'link', 'part_identity', 'part', 'modification'])
-    db.prepare(`DELETE FROM ${table} WHERE "batchId" = ?`).run(batchId)
-  for (const change of changes) if (change.action === 'deleted') restore(change.type, change.recordId, 'deleted', change.rows)
-  rewritePartWords(db, changed('part'))
-  db.prepare(`UPDATE import_batch SET status = 'reverted', revertedAt = ${SQL_NOW}, revertedByName = ? WHERE id = ?`).run(userName, batchId)
+    await db.run(`DELETE FROM ${table} WHERE "batchId" = ?`, [batchId])
+  for (const change of changes) if (change.action === 'deleted') await restore(change.type, change.recordId, 'deleted', change.rows)
+  await rewritePartWords(db, changed('part'))
+  await db.run(`UPDATE import_batch SET "status" = 'reverted', "revertedAt" = ?, "revertedByName" = ? WHERE "id" = ?`, [
+    new Date(),
+    userName,
+    batchId,
+  ])
   return { catalogue, stockParts: [...stockParts] }
 }

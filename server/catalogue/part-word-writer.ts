@@ -1,18 +1,16 @@
-import type BetterSqlite3 from 'better-sqlite3'
+import type { Database } from '../db/database'
 import { wordsOf } from './part-words'
 
 /**
  * Writes the search words of parts again from their rows, inside the
- * caller's transaction on the raw connection (the importer's and the demo's
- * bulk writers); call it with every part id a write created or changed.
+ * caller's transaction (the importer's and reverts' bulk writers); call it
+ * with every part id a write created or changed.
  */
-export function rewritePartWords(db: BetterSqlite3.Database, partIds: Iterable<number>) {
-  const read = db.prepare('SELECT "name", "family" FROM part WHERE "id" = ?')
-  const clear = db.prepare('DELETE FROM part_word WHERE "partId" = ?')
-  const insert = db.prepare('INSERT INTO part_word ("partId", "word") VALUES (?, ?)')
+export async function rewritePartWords(db: Database, partIds: Iterable<number>): Promise<void> {
   for (const id of partIds) {
-    clear.run(id)
-    const row = read.get(id) as { name: string; family: string } | undefined
-    if (row) for (const word of wordsOf(row.name, row.family)) insert.run(id, word)
+    await db.run('DELETE FROM part_word WHERE "partId" = ?', [id])
+    const row = await db.get<{ name: string; family: string }>('SELECT "name", "family" FROM part WHERE "id" = ?', [id])
+    if (row)
+      for (const word of wordsOf(row.name, row.family)) await db.run('INSERT INTO part_word ("partId", "word") VALUES (?, ?)', [id, word])
   }
 }

@@ -1,4 +1,4 @@
-import type Database from 'better-sqlite3'
+import type { Database } from '../db/database'
 import type { PartInput } from '../../shared/schemas/part-input'
 import { normalisePartCode } from '../../shared/schemas/part'
 import { rewritePartWords } from './part-word-writer'
@@ -23,18 +23,41 @@ export function markRows(partId: number, part: PartInput) {
 }
 
 /** Inserts new parts with their marks, inside the caller's transaction; their ids by part number. */
-export function insertPartRows(db: Database.Database, parts: PartInput[]): Map<string, number> {
-  const insertPart = db.prepare(
-    'INSERT INTO part (partNumber, partKey, kind, name, family, yearFrom, yearTo, notes, attributes, listPriceCents) VALUES (@partNumber, @partKey, @kind, @name, @family, @yearFrom, @yearTo, @notes, @attributes, @listPriceCents)',
-  )
-  const insertMark = db.prepare('INSERT INTO part_mark (partId, type, value, valueKey) VALUES (@partId, @type, @value, @valueKey)')
+export async function insertPartRows(db: Database, parts: PartInput[], batchId: number | null = null): Promise<Map<string, number>> {
   const ids = new Map<string, number>()
   for (const part of parts) {
-    const columns = partColumns(part)
-    const id = Number(insertPart.run({ ...columns, attributes: JSON.stringify(columns.attributes) }).lastInsertRowid)
+    const c = partColumns(part)
+    const id = await db.insert(
+      `INSERT INTO part ("partNumber", "partKey", "kind", "name", "family", "yearFrom", "yearTo", "notes", "attributes", "listPriceCents", "batchId")
+       VALUES (?, ?, ?, ?, ?, ?, ?, ?, ?, ?, ?) RETURNING "id"`,
+      [
+        c.partNumber,
+        c.partKey,
+        c.kind,
+        c.name,
+        c.family,
+        c.yearFrom,
+        c.yearTo,
+        c.notes,
+        JSON.stringify(c.attributes),
+        c.listPriceCents,
+        batchId,
+      ],
+    )
     ids.set(part.partNumber, id)
-    for (const mark of markRows(id, part)) insertMark.run(mark)
+    await insertMarks(db, id, part)
   }
-  rewritePartWords(db, ids.values())
+  await rewritePartWords(db, ids.values())
   return ids
+}
+
+export async function insertMarks(db: Database, partId: number, part: PartInput): Promise<void> {
+  for (const mark of markRows(partId, part)) {
+    await db.run('INSERT INTO part_mark ("partId", "type", "value", "valueKey") VALUES (?, ?, ?, ?)', [
+      partId,
+      mark.type,
+      mark.value,
+      mark.valueKey,
+    ])
+  }
 }

@@ -28,6 +28,8 @@ export interface Database {
    * other requests wait until it ends, so keep slow work (hashing, files) out.
    */
   transaction<T>(work: (tx: Database) => Promise<T>): Promise<T>
+  /** Runs `work` reading one moment of the database, however long it takes and whoever writes meanwhile (long exports). */
+  snapshot<T>(work: (tx: Database) => Promise<T>): Promise<T>
 }
 
 /** `?, ?, ?` for a list of values. */
@@ -46,3 +48,21 @@ export function toIsoTime(value: unknown): string {
   const text = String(value)
   return new Date(/[zZ]|[+-]\d\d:?\d\d$/.test(text) ? text : `${text.replace(' ', 'T')}Z`).toISOString()
 }
+
+/**
+ * A `WHERE` condition matching rows of `alias` that hold one of `pairCount`
+ * id pairs: an OR of the pairs, which both drivers answer through the
+ * (partAId, partBId) index (a row-value `IN` scans the table on SQLite, and a
+ * join to a VALUES list lets its planner start from the table). Bind the pairs
+ * flattened, two parameters each.
+ */
+export function pairCondition(alias: string, pairCount: number): string {
+  const key = `${alias}:${pairCount}`
+  let text = pairConditions.get(key)
+  if (text === undefined) {
+    text = Array.from({ length: pairCount }, () => `(${alias}."partAId" = ? AND ${alias}."partBId" = ?)`).join(' OR ')
+    pairConditions.set(key, text)
+  }
+  return text
+}
+const pairConditions = new Map<string, string>()

@@ -87,11 +87,19 @@ export class PostgresDatabase implements Database {
     return row.id
   }
 
-  async transaction<T>(work: (tx: Database) => Promise<T>): Promise<T> {
+  transaction<T>(work: (tx: Database) => Promise<T>): Promise<T> {
+    return this.within('BEGIN', work)
+  }
+
+  snapshot<T>(work: (tx: Database) => Promise<T>): Promise<T> {
+    return this.within('BEGIN ISOLATION LEVEL REPEATABLE READ READ ONLY', work)
+  }
+
+  private async within<T>(begin: string, work: (tx: Database) => Promise<T>): Promise<T> {
     if (this.context.getStore()) return work(this)
     const client = await this.pool.connect()
     try {
-      await client.query('BEGIN')
+      await client.query(begin)
       const result = await this.context.run(client, () => work(this))
       await client.query('COMMIT')
       return result

@@ -4,7 +4,6 @@ import type pg from 'pg'
 import type { Database } from './database'
 import { PostgresDatabase } from './postgres-database'
 import { SqliteDatabase } from './sqlite-database'
-import { AppError } from '../errors/app-error'
 
 function isDatabase(value: unknown): value is BetterSqlite3.Database {
   return (
@@ -44,22 +43,4 @@ export function databaseOf(dataSource: DataSource): Database {
     ports.set(dataSource, port)
   }
   return port
-}
-
-function sqlitePort(dataSource: DataSource): SqliteDatabase {
-  const port = databaseOf(dataSource)
-  if (!(port instanceof SqliteDatabase)) {
-    // Imports, reverts and exports still run on the SQLite connection: say so instead of failing obscurely.
-    throw new AppError(501, 'needs_sqlite', 'This change still needs the embedded SQLite database; on PostgreSQL it is not available yet.')
-  }
-  return port
-}
-
-/**
- * Runs synchronous `work` in one transaction on the raw connection, taking its
- * turn with the port's other transactions. `work` is synchronous on purpose:
- * nothing else can run on the shared connection while it holds it.
- */
-export async function inTransaction<T>(dataSource: DataSource, work: (db: BetterSqlite3.Database) => T): Promise<T> {
-  return sqlitePort(dataSource).transactionSync(work)
 }

@@ -9,8 +9,13 @@ const BUSY_GIVE_UP_MS = 60_000
 
 /** SQLite's own text form of a UTC time, as TypeORM writes it, so every timestamp sorts together. */
 export function sqliteTime(date: Date): string {
-  return date.toISOString().replace('T', ' ').replace('Z', '')
+  // A batch writes one time on every row: convert it once.
+  if (date.getTime() === lastTime.ms) return lastTime.text
+  const text = date.toISOString().replace('T', ' ').replace('Z', '')
+  lastTime = { ms: date.getTime(), text }
+  return text
 }
+let lastTime = { ms: Number.NaN, text: '' }
 
 function bind(params: readonly SqlValue[]): unknown[] {
   return params.map((value) => {
@@ -41,7 +46,11 @@ export class SqliteDatabase implements Database {
   private queue: Promise<void> = Promise.resolve()
   private waiting = 0
 
-  constructor(readonly handle: BetterSqlite3.Database) {
+  /** `busyGiveUpMs`: how long a statement retries while another connection holds the write lock. */
+  constructor(
+    readonly handle: BetterSqlite3.Database,
+    private readonly busyGiveUpMs = BUSY_GIVE_UP_MS,
+  ) {
     handle.pragma('busy_timeout = 0')
   }
 
@@ -70,7 +79,7 @@ export class SqliteDatabase implements Database {
       try {
         return work()
       } catch (error) {
-        if (!isBusy(error) || Date.now() - started > BUSY_GIVE_UP_MS) throw error
+        if (!isBusy(error) || Date.now() - started > this.busyGiveUpMs) throw error
         await sleep(wait)
       }
     }
@@ -102,7 +111,16 @@ export class SqliteDatabase implements Database {
     return row.id
   }
 
-  async transaction<T>(work: (tx: Database) => Promise<T>): Promise<T> {
+  transaction<T>(work: (tx: Database) => Promise<T>): Promise<T> {
+    return this.within('BEGIN IMMEDIATE', work)
+  }
+
+  /** WAL: a deferred transaction reads one snapshot while other connections write. */
+  snapshot<T>(work: (tx: Database) => Promise<T>): Promise<T> {
+    return this.within('BEGIN DEFERRED', work)
+  }
+
+  private async within<T>(begin: string, work: (tx: Database) => Promise<T>): Promise<T> {
     if (this.context.getStore() === this) return work(this)
     // Take a place in line synchronously, so nothing that starts after this call can slip in ahead.
     const ahead = this.queue
@@ -111,7 +129,7 @@ export class SqliteDatabase implements Database {
     this.waiting++
     await ahead
     try {
-      await this.retrying(() => this.handle.exec('BEGIN IMMEDIATE'))
+      await this.retrying(() => this.handle.exec(begin))
       return await this.context.run(this, async () => {
         try {
           const result = await work(this)
@@ -126,14 +144,5 @@ export class SqliteDatabase implements Database {
       this.waiting--
       release()
     }
-  }
-
-  /**
-   * A synchronous transaction on the raw connection, for bulk work where
-   * per-statement awaits would cost too much (imports, the demo seed). It
-   * still takes its turn with the port's other transactions.
-   */
-  async transactionSync<T>(work: (handle: BetterSqlite3.Database) => T): Promise<T> {
-    return this.transaction(async () => work(this.handle))
   }
 }

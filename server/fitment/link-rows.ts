@@ -1,4 +1,3 @@
-import type BetterSqlite3 from 'better-sqlite3'
 import type { LinkSource, Relation, ReviewStatus } from '../../shared/schemas/fitment'
 import { unknownModification } from '../catalogue/unknown-modification'
 import type { Database } from '../db/database'
@@ -6,8 +5,7 @@ import type { Database } from '../db/database'
 /*
  * Writes of links, identities and the modifications they name through the
  * data port, inside the caller's transaction (hand edits, reviews of field
- * reports, the demo seed), on SQLite or PostgreSQL. The import's writer, which
- * runs synchronously on the SQLite connection, shares the proposed-modification insert.
+ * reports, the demo seed, imports), on SQLite or PostgreSQL.
  */
 
 /** Fit is mutual: a pair is stored once, lower id first. */
@@ -24,9 +22,13 @@ function proposedValues(name: string, source: 'import' | 'editor', batchId: numb
 }
 
 /** A modification an import or an editor named before anyone described it: proposed, for an editor to complete. */
-export function proposedModificationInserter(db: BetterSqlite3.Database, source: 'import' | 'editor') {
-  const insert = db.prepare(INSERT_PROPOSED_MODIFICATION)
-  return (name: string, batchId: number | null) => Number(insert.run(...proposedValues(name, source, batchId)).lastInsertRowid)
+export function insertProposedModification(
+  db: Database,
+  name: string,
+  source: 'import' | 'editor',
+  batchId: number | null,
+): Promise<number> {
+  return db.insert(`${INSERT_PROPOSED_MODIFICATION} RETURNING "id"`, proposedValues(name, source, batchId))
 }
 
 /** Modification ids by name, creating a proposed entry for a name the catalogue does not know. */
@@ -39,9 +41,7 @@ export async function modificationIds(
   const ids: number[] = []
   for (const name of names) {
     const found = await db.get<{ id: number }>('SELECT "id" FROM modification WHERE "name" = ?', [name])
-    ids.push(
-      found ? Number(found.id) : await db.insert(`${INSERT_PROPOSED_MODIFICATION} RETURNING "id"`, proposedValues(name, source, batchId)),
-    )
+    ids.push(found ? Number(found.id) : await insertProposedModification(db, name, source, batchId))
   }
   return ids
 }

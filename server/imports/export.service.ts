@@ -1,4 +1,4 @@
-import type BetterSqlite3 from 'better-sqlite3'
+import type { Database } from '../db/database'
 import type { ExportFile } from '../../shared/schemas/imports'
 import type { PartInput } from '../../shared/schemas/part-input'
 import { MARK_TYPES, type MarkType } from '../../shared/schemas/part'
@@ -21,7 +21,7 @@ const KNOWN_COLUMN_ORDER = [...new Set(PART_KINDS.flatMap((kind) => knownAttribu
  * changes nothing. Links are the approved ones plus identities: proposed and
  * rejected links are review items, and an import would approve them.
  */
-export function exportCsv(db: BetterSqlite3.Database, file: ExportFile): string {
+export function exportCsv(db: Database, file: ExportFile): Promise<string> {
   switch (file) {
     case 'parts.csv':
       return partsCsv(db)
@@ -43,16 +43,14 @@ export class ExportService {
   }
 }
 
-export function partsCsv(db: BetterSqlite3.Database): string {
-  const rows = db
-    .prepare('SELECT id, partNumber, kind, name, family, yearFrom, yearTo, notes, attributes, listPriceCents FROM part ORDER BY partNumber')
-    .all() as PartRow[]
+export async function partsCsv(db: Database): Promise<string> {
+  const rows = await db.all<PartRow>(
+    'SELECT "id", "partNumber", "kind", "name", "family", "yearFrom", "yearTo", "notes", "attributes", "listPriceCents" FROM part ORDER BY "partNumber"',
+  )
   const marks = new Map<number, { type: MarkType; value: string }[]>()
-  const markRows = db.prepare('SELECT partId, type, value FROM part_mark ORDER BY value').all() as {
-    partId: number
-    type: MarkType
-    value: string
-  }[]
+  const markRows = await db.all<{ partId: number; type: MarkType; value: string }>(
+    'SELECT "partId", "type", "value" FROM part_mark ORDER BY "value"',
+  )
   for (const { partId, type, value } of markRows) pushTo(marks, partId, { type, value })
   const cells = rows.map((row) => {
     const partMarks = (marks.get(row.id) ?? []).sort((a, b) => MARK_TYPES.indexOf(a.type) - MARK_TYPES.indexOf(b.type))
@@ -78,24 +76,20 @@ export function partsCsv(db: BetterSqlite3.Database): string {
   return toCsv([header, ...cells.map((row) => header.map((column) => row[column] ?? ''))])
 }
 
-export function linksCsv(db: BetterSqlite3.Database): string {
-  const links = db
-    .prepare(
-      `SELECT l.id, a.partNumber AS fromPart, b.partNumber AS toPart, l.relation, l.note, l.source FROM link l
-         JOIN part a ON a.id = l.partAId JOIN part b ON b.id = l.partBId WHERE l.status = 'approved' ORDER BY l.id`,
-    )
-    .all() as { id: number; fromPart: string; toPart: string; relation: string; note: string; source: string }[]
+export async function linksCsv(db: Database): Promise<string> {
+  const links = await db.all<{ id: number; fromPart: string; toPart: string; relation: string; note: string; source: string }>(
+    `SELECT l."id", a."partNumber" AS "fromPart", b."partNumber" AS "toPart", l."relation", l."note", l."source" FROM link l
+       JOIN part a ON a."id" = l."partAId" JOIN part b ON b."id" = l."partBId" WHERE l."status" = 'approved' ORDER BY l."id"`,
+  )
   const mods = new Map<number, string[]>()
-  const modRows = db
-    .prepare('SELECT lm.linkId, m.name FROM link_modification lm JOIN modification m ON m.id = lm.modificationId ORDER BY m.name')
-    .all() as { linkId: number; name: string }[]
+  const modRows = await db.all<{ linkId: number; name: string }>(
+    'SELECT lm."linkId", m."name" FROM link_modification lm JOIN modification m ON m."id" = lm."modificationId" ORDER BY m."name"',
+  )
   for (const { linkId, name } of modRows) pushTo(mods, linkId, name)
-  const identities = db
-    .prepare(
-      `SELECT a.partNumber AS fromPart, b.partNumber AS toPart, i.note, i.source FROM part_identity i
-         JOIN part a ON a.id = i.partAId JOIN part b ON b.id = i.partBId ORDER BY i.id`,
-    )
-    .all() as { fromPart: string; toPart: string; note: string; source: string }[]
+  const identities = await db.all<{ fromPart: string; toPart: string; note: string; source: string }>(
+    `SELECT a."partNumber" AS "fromPart", b."partNumber" AS "toPart", i."note", i."source" FROM part_identity i
+       JOIN part a ON a."id" = i."partAId" JOIN part b ON b."id" = i."partBId" ORDER BY i."id"`,
+  )
   return toCsv([
     [...LINK_COLUMNS],
     ...links.map((l) => [l.fromPart, l.toPart, l.relation, (mods.get(l.id) ?? []).join('; '), l.note, l.source]),

@@ -1,10 +1,10 @@
 import { createReadStream } from 'node:fs'
-import type Database from 'better-sqlite3'
+import type { Database } from '../db/database'
 import type { ImportMode, ImportPhase, ImportResult, ImportType } from '../../shared/schemas/imports'
 import { CsvFileError, readCsvStream, type CsvReadSummary } from './csv/csv-stream'
 import { AppError } from '../errors/app-error'
 import { importWork, type Planned, type Touched, type Work } from './import-jobs'
-import { insertBatch } from '../audit/change-log'
+import { recordBatch } from '../audit/change-log'
 import { LISTED } from './import-change-list'
 import { issueDetails } from './import-issues'
 import { PreviewCache } from './import-preview-cache'
@@ -27,9 +27,6 @@ export type Report = (phase: ImportPhase, done: number, total: number) => void
 
 /** What an import job answers: the result, and on commit what it touched, for the indexes on the main thread. */
 export type ImportJobResult = { answer: ImportResult; touched?: Touched; written?: number }
-
-/** Runs synchronous work in one write transaction on the job's connection. */
-export type Transact = <T>(work: (db: Database.Database) => T) => Promise<T>
 
 function fileError(error: unknown): unknown {
   if (!(error instanceof CsvFileError)) return error
@@ -76,10 +73,8 @@ function writeReporter(report: Report, total: number) {
 export class ImportJobs {
   private readonly previews = new PreviewCache<Work>()
 
-  constructor(
-    private readonly reader: () => Database.Database,
-    private readonly transact: Transact,
-  ) {}
+  /** `db`: the import worker's own SQLite connection, or the main thread's port (in-memory SQLite, PostgreSQL). */
+  constructor(private readonly db: Database) {}
 
   private async read(input: ImportJobInput, maxRows: number, report: Report) {
     const work = importWork(input.type)
@@ -100,14 +95,14 @@ export class ImportJobs {
       const { work, summary } = await this.read(input, maxRows, report)
       this.previews.put(userId, input.type, work, summary)
       report('check', 0, summary.rows)
-      return { answer: result(work.plan(this.reader())) }
+      return { answer: result(await work.plan(this.db)) }
     }
     const cached = await this.previews.match(userId, input.type, input.filePath, input.fileSize)
     const { work, summary }: { work: Work; summary: CsvReadSummary } = cached ?? (await this.read(input, maxRows, report))
     report('read', input.fileSize, input.fileSize)
     report('check', 0, summary.rows)
-    const committed = await this.transact((db) => {
-      const planned = work.plan(db)
+    const committed = await this.db.transaction(async (db) => {
+      const planned = await work.plan(db)
       const { counts } = planned.changes
       const { created, updated, unchanged, rejected } = counts
       if (rejected > 0 && !input.validRowsOnly) {
@@ -119,16 +114,21 @@ export class ImportJobs {
         )
       }
       if (created + updated + unchanged === 0) throw new AppError(422, 'nothing_valid', 'No row of the file is valid; nothing was written.')
-      const batchId = insertBatch(db, {
-        type: input.type,
-        fileName: input.fileName,
-        fileHash: summary.sha256,
-        user: input.user,
-        counts,
-        validRowsOnly: rejected > 0,
-      })
+      const now = new Date()
+      const batchId = await recordBatch(
+        db,
+        {
+          type: input.type,
+          fileName: input.fileName,
+          fileHash: summary.sha256,
+          user: input.user,
+          counts,
+          validRowsOnly: rejected > 0,
+        },
+        now,
+      )
       report('write', 0, planned.writes)
-      const touched = planned.write(batchId, writeReporter(report, planned.writes))
+      const touched = await planned.write(batchId, now, writeReporter(report, planned.writes))
       return { answer: result(planned, batchId), touched, written: planned.writes }
     })
     this.previews.drop(userId, input.type)

@@ -1,4 +1,4 @@
-import type Database from 'better-sqlite3'
+import type { Database } from '../db/database'
 import type { ImportIssue, ImportType } from '../../shared/schemas/imports'
 import type { CatalogueChanges } from '../fitment/fit-graph'
 import type { ChangeList } from './import-change-list'
@@ -26,31 +26,32 @@ export type Planned = {
   errors: ImportIssue[]
   /** How many records the write will write, for a determinate progress bar. */
   writes: number
-  write: (batchId: number, tick?: Tick) => Touched
+  /** Writes the plan as batch `batchId`; `now` is the batch's time, which its records carry. */
+  write: (batchId: number, now: Date, tick?: Tick) => Promise<Touched>
 }
 
 type Rows = { onHeader: (cells: string[], row: number) => void; onRow: (cells: string[], row: number) => void }
 
 /** The checked rows of one file, and how to weigh them against the database (at preview and again at commit). */
-export type Work = { rows: Rows; plan: (db: Database.Database) => Planned }
+export type Work = { rows: Rows; plan: (db: Database) => Promise<Planned> }
 
 type Plan = { changes: ChangeList; issues: ImportIssue[] }
 
 function work<R extends Rows, P extends Plan>(
   rows: R,
-  plan: (db: Database.Database, rows: R) => P,
+  plan: (db: Database, rows: R) => Promise<P>,
   writes: (plan: P) => number,
-  write: (db: Database.Database, plan: P, batchId: number, tick: Tick) => Touched,
+  write: (db: Database, plan: P, batchId: number, now: Date, tick: Tick) => Promise<Touched>,
 ): Work {
   return {
     rows,
-    plan: (db) => {
-      const planned = plan(db, rows)
+    plan: async (db) => {
+      const planned = await plan(db, rows)
       return {
         changes: planned.changes,
         errors: planned.issues,
         writes: writes(planned),
-        write: (batchId, tick = () => {}) => write(db, planned, batchId, tick),
+        write: (batchId, now, tick = () => {}) => write(db, planned, batchId, now, tick),
       }
     },
   }
@@ -61,8 +62,8 @@ const createsAndUpdates = (plan: { creates: unknown[]; updates: unknown[] }) => 
 export function importWork(type: ImportType): Work {
   switch (type) {
     case 'parts':
-      return work(new PartRows(), planParts, createsAndUpdates, (db, plan, batchId, tick) => ({
-        catalogue: { parts: writeParts(db, plan, batchId, tick) },
+      return work(new PartRows(), planParts, createsAndUpdates, async (db, plan, batchId, now, tick) => ({
+        catalogue: { parts: await writeParts(db, plan, batchId, now, tick) },
         stockParts: [],
       }))
     case 'links':
@@ -76,17 +77,17 @@ export function importWork(type: ImportType): Work {
           plan.identityUpdates.length +
           plan.linkCreates.length +
           plan.identityCreates.length,
-        (db, plan, batchId, tick) => ({ catalogue: writeLinks(db, plan, batchId, tick), stockParts: [] }),
+        async (db, plan, batchId, now, tick) => ({ catalogue: await writeLinks(db, plan, batchId, now, tick), stockParts: [] }),
       )
     case 'vehicles':
-      return work(new VehicleRows(), planVehicles, createsAndUpdates, (db, plan, batchId, tick) => {
-        writeVehicles(db, plan, batchId, tick)
+      return work(new VehicleRows(), planVehicles, createsAndUpdates, async (db, plan, batchId, _now, tick) => {
+        await writeVehicles(db, plan, batchId, tick)
         return { catalogue: {}, stockParts: [] }
       })
     case 'stock':
-      return work(new StockRows(), planStock, createsAndUpdates, (db, plan, batchId, tick) => ({
+      return work(new StockRows(), planStock, createsAndUpdates, async (db, plan, batchId, now, tick) => ({
         catalogue: {},
-        stockParts: writeStock(db, plan, batchId, tick),
+        stockParts: await writeStock(db, plan, batchId, now, tick),
       }))
   }
 }

@@ -17,8 +17,9 @@ export type OutboxRow = {
 }
 export type NewMessage = { kind: string; recipient: string; subject: string; text: string; html: string }
 
-const COLUMNS =
-  'SELECT "id", "kind", "recipient", "subject", "text", "html", "status", "attempts", "lastError", "nextAttemptAt", "sentAt", "createdAt" FROM mail_outbox'
+const FIELDS =
+  '"id", "kind", "recipient", "subject", "text", "html", "status", "attempts", "lastError", "nextAttemptAt", "sentAt", "createdAt"'
+const COLUMNS = `SELECT ${FIELDS} FROM mail_outbox`
 
 /** The mail_outbox table. */
 export class OutboxRepository {
@@ -31,8 +32,21 @@ export class OutboxRepository {
     )
   }
 
-  due(now: Date, limit: number): Promise<OutboxRow[]> {
-    return this.db.all<OutboxRow>(`${COLUMNS} WHERE "status" = 'queued' AND "nextAttemptAt" <= ? ORDER BY "id" LIMIT ?`, [now, limit])
+  /**
+   * Takes up to `limit` messages that are due and holds them until `heldUntil`,
+   * in one statement, so two servers on one database never send the same
+   * message (the second one's update finds them no longer due). A server that
+   * dies mid-send leaves its messages to be sent again once the hold runs out.
+   */
+  async claimDue(now: Date, limit: number, heldUntil: Date): Promise<OutboxRow[]> {
+    const rows = await this.db.all<OutboxRow>(
+      `UPDATE mail_outbox SET "nextAttemptAt" = ?
+         WHERE "id" IN (SELECT "id" FROM mail_outbox WHERE "status" = 'queued' AND "nextAttemptAt" <= ? ORDER BY "id" LIMIT ?)
+           AND "status" = 'queued' AND "nextAttemptAt" <= ?
+         RETURNING ${FIELDS}`,
+      [heldUntil, now, limit, now],
+    )
+    return rows.sort((a, b) => a.id - b.id)
   }
 
   async markSent(id: number, now: Date): Promise<void> {

@@ -29,6 +29,9 @@ export type OutboxMessage = Omit<OutboxRow, 'nextAttemptAt' | 'sentAt' | 'create
  * apart from requests, with retries, so a slow or refusing SMTP server never
  * holds anyone up and no message is lost.
  */
+/** How long a server holds the messages it took to send; past that another server may send them. */
+const HOLD_MS = 10 * 60_000
+
 export class OutboxService {
   private timer: NodeJS.Timeout | null = null
   private running: Promise<number> | null = null
@@ -84,7 +87,8 @@ export class OutboxService {
 
   private async deliver(): Promise<number> {
     let sent = 0
-    for (const row of await this.repository.due(this.clock(), BATCH)) {
+    const now = this.clock()
+    for (const row of await this.repository.claimDue(now, BATCH, new Date(now.getTime() + HOLD_MS))) {
       try {
         await this.mailer.send({ to: row.recipient, subject: row.subject, text: row.text, html: row.html })
         await this.repository.markSent(row.id, this.clock())

@@ -11,6 +11,8 @@ import { DEMO_PASSWORD } from '../../server/demo/seed'
 import type { Role } from '../../shared/schemas/auth'
 import type { Services } from '../../server/services'
 import type { ChangeFollower } from '../../server/follow-changes'
+import type { Database } from '../../server/db/database'
+import { databaseOf } from '../../server/db/sqlite-connection'
 import { createPostgresDatabase, dropWhenFileEnds, postgresServerUrl, type TestDatabase } from './postgres'
 
 /**
@@ -23,6 +25,8 @@ if (testOnPostgres && !postgresServerUrl) throw new Error('FITWRIGHT_TEST_DB=pos
 export type TestApp = {
   app: Express
   dataSource: DataSource
+  /** The data port, for SQL written behind the API (it runs on either database). */
+  db: Database
   config: AppConfig
   /** The app's services, for tests that write behind the API and report it as writers do. */
   services: Services
@@ -124,6 +128,7 @@ export async function createTestApp(
   return {
     app,
     dataSource,
+    db: databaseOf(dataSource),
     config,
     services,
     changes,

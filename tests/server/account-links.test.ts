@@ -66,7 +66,7 @@ describe('inviting a user, who chooses a password from the mailed link', { timeo
     const admin = await t.signIn('admin')
     await admin.post('/api/users/invite').send({ email: 'late@shop.test', name: 'Late Comer', role: 'counter' })
     const { token } = passwordLink((await deliveredTo('late@shop.test'))[0]!)
-    await t.dataSource.query('UPDATE "account_token" SET "expiresAt" = ?', ['2000-01-01 00:00:00.000'])
+    await t.db.run('UPDATE "account_token" SET "expiresAt" = ?', [new Date('2000-01-01T00:00:00Z')])
     const visitor = await anonymous(t.app)
     const info = await visitor.post('/api/auth/password-link').send({ token })
     expect(info.status).toBe(400)

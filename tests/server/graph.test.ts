@@ -1,6 +1,6 @@
 import { afterAll, beforeAll, describe, expect, it } from 'vitest'
 import { MAX_NEIGHBOURHOOD_EDGES, MAX_NEIGHBOURHOOD_NODES } from '../../shared/schemas/graph'
-import { databaseOf, inTransaction } from '../../server/db/sqlite-connection'
+import { databaseOf } from '../../server/db/sqlite-connection'
 import { insertLinkRow } from '../../server/fitment/link-rows'
 import { insertPartRows } from '../../server/catalogue/part-writer'
 import { expectBadRequest } from '../helpers/expect-error'
@@ -74,41 +74,43 @@ describe('GET /api/graph/neighbourhood/:partNumber', () => {
     // Written behind the API, then reported to the graph index as every writer does.
     const own = await createTestApp()
     const hubNumber = 'TEST-HUB'
-    const written = await inTransaction(own.dataSource, (db) => {
-      const spokes = Array.from({ length: MAX_NEIGHBOURHOOD_NODES + 50 }, (_, i) => ({
-        partNumber: `TEST-SPOKE-${i}`,
-        kind: 'other' as const,
-        name: 'Spoke',
-        family: '',
-        yearFrom: null,
-        yearTo: null,
-        notes: '',
-        attributes: {},
-        marks: [],
-        listPriceCents: null,
-      }))
-      return { spokes, ids: insertPartRows(db, [{ ...spokes[0]!, partNumber: hubNumber }, ...spokes]) }
-    }).then(({ spokes, ids }) =>
-      databaseOf(own.dataSource).transaction(async (db) => {
-        const hub = ids.get(hubNumber)!
-        const links: number[] = []
-        for (const spoke of spokes) {
-          const partIds: [number, number] = [hub, ids.get(spoke.partNumber)!]
-          links.push(
-            await insertLinkRow(db, {
-              partIds,
-              relation: 'fits',
-              modifications: [],
-              note: '',
-              source: 'editor',
-              status: 'approved',
-              batchId: null,
-            }),
-          )
-        }
-        return { parts: [...ids.values()], links }
-      }),
-    )
+    const written = await databaseOf(own.dataSource)
+      .transaction(async (db) => {
+        const spokes = Array.from({ length: MAX_NEIGHBOURHOOD_NODES + 50 }, (_, i) => ({
+          partNumber: `TEST-SPOKE-${i}`,
+          kind: 'other' as const,
+          name: 'Spoke',
+          family: '',
+          yearFrom: null,
+          yearTo: null,
+          notes: '',
+          attributes: {},
+          marks: [],
+          listPriceCents: null,
+        }))
+        return { spokes, ids: await insertPartRows(db, [{ ...spokes[0]!, partNumber: hubNumber }, ...spokes]) }
+      })
+      .then(({ spokes, ids }) =>
+        databaseOf(own.dataSource).transaction(async (db) => {
+          const hub = ids.get(hubNumber)!
+          const links: number[] = []
+          for (const spoke of spokes) {
+            const partIds: [number, number] = [hub, ids.get(spoke.partNumber)!]
+            links.push(
+              await insertLinkRow(db, {
+                partIds,
+                relation: 'fits',
+                modifications: [],
+                note: '',
+                source: 'editor',
+                status: 'approved',
+                batchId: null,
+              }),
+            )
+          }
+          return { parts: [...ids.values()], links }
+        }),
+      )
     await own.services.graphIndex.applyChanges(written)
     const counter = await own.signIn('counter')
     const response = await counter.get(`/api/graph/neighbourhood/${hubNumber}?depth=2`)

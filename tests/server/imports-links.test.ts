@@ -1,6 +1,7 @@
 import { afterEach, beforeEach, describe, expect, it } from 'vitest'
 import { catalogueSnapshot, databaseSnapshot, uploadCsv } from '../helpers/imports'
 import { createTestApp, type TestApp } from '../helpers/test-app'
+import { databaseOf } from '../../server/db/sqlite-connection'
 const fitResults = (body: { groups: { results: unknown[] }[] }) => body.groups.flatMap((group) => group.results)
 
 let t: TestApp
@@ -14,13 +15,18 @@ afterEach(() => t.close())
 const HEADER = 'from_part,to_part,relation,modifications,note,source'
 
 async function linkRow(a: string, b: string) {
-  const [row] = await t.dataSource.query(
-    `SELECT l.*, (SELECT group_concat(m.name, ';') FROM link_modification lm JOIN modification m ON m.id = lm.modificationId WHERE lm.linkId = l.id) AS mods
-     FROM link l JOIN part pa ON pa.id = l.partAId JOIN part pb ON pb.id = l.partBId
-     WHERE (pa.partNumber = ? AND pb.partNumber = ?) OR (pa.partNumber = ? AND pb.partNumber = ?)`,
+  const db = databaseOf(t.dataSource)
+  const row = await db.get<{ id: number; relation: string; status: string; source: string; batchId: number | null; note: string }>(
+    `SELECT l.* FROM link l JOIN part pa ON pa."id" = l."partAId" JOIN part pb ON pb."id" = l."partBId"
+     WHERE (pa."partNumber" = ? AND pb."partNumber" = ?) OR (pa."partNumber" = ? AND pb."partNumber" = ?)`,
     [a, b, b, a],
   )
-  return row as { relation: string; status: string; source: string; batchId: number | null; note: string; mods: string | null } | undefined
+  if (!row) return undefined
+  const mods = await db.column<string>(
+    'SELECT m."name" FROM link_modification lm JOIN modification m ON m."id" = lm."modificationId" WHERE lm."linkId" = ? ORDER BY m."name"',
+    [row.id],
+  )
+  return { ...row, mods: mods.length ? mods.join(';') : null }
 }
 
 describe('POST /api/imports, links, commit', () => {
@@ -39,7 +45,7 @@ describe('POST /api/imports, links, commit', () => {
       source: 'field-report',
       mods: expect.stringContaining('head-stud-sleeve'),
     })
-    const [proposed] = await t.dataSource.query("SELECT status, source, batchId FROM modification WHERE name = 'head-stud-sleeve'")
+    const [proposed] = await t.dataSource.query(`SELECT "status", "source", "batchId" FROM modification WHERE "name" = 'head-stud-sleeve'`)
     expect(proposed).toEqual({ status: 'proposed', source: 'import', batchId: response.body.batchId })
   })
 
@@ -70,7 +76,8 @@ describe('POST /api/imports, links, commit', () => {
     expect(response.body.counts.updated).toBe(1)
     expect(await linkRow('TM-BL-2000', 'TM-HD-2000')).toBeUndefined()
     const identities = await t.dataSource.query(
-      "SELECT i.source, i.batchId FROM part_identity i JOIN part a ON a.id = i.partAId JOIN part b ON b.id = i.partBId WHERE a.partNumber = 'TM-BL-2000' AND b.partNumber = 'TM-HD-2000'",
+      `SELECT i."source", i."batchId" FROM part_identity i JOIN part a ON a."id" = i."partAId" JOIN part b ON b."id" = i."partBId"
+       WHERE a."partNumber" = 'TM-BL-2000' AND b."partNumber" = 'TM-HD-2000'`,
     )
     expect(identities).toEqual([{ source: 'editor', batchId: response.body.batchId }])
   })
@@ -78,7 +85,7 @@ describe('POST /api/imports, links, commit', () => {
   it('changes nothing when the same links file is imported a second time', async () => {
     const csv = `${HEADER}\nTM-HD-2000R,TM-BL-2001,fits,,Exchange head.,\nTM-CP-2000,TM-CP-2099,identical,,Same pulley.,\n`
     await t.dataSource.query(
-      "INSERT INTO part (partNumber, partKey, kind, name, attributes) VALUES ('TM-CP-2099', 'TMCP2099', 'crank-pulley', 'Pulley', '{}')",
+      `INSERT INTO part ("partNumber", "partKey", "kind", "name", "attributes") VALUES ('TM-CP-2099', 'TMCP2099', 'crank-pulley', 'Pulley', '{}')`,
     )
     expect((await uploadCsv(editor, csv, { type: 'links', mode: 'commit' })).body.counts.created).toBe(2)
     const before = await catalogueSnapshot(t.dataSource)

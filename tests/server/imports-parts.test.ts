@@ -47,7 +47,7 @@ describe('POST /api/imports, parts, commit', () => {
       { type: 'casting', value: 'H20-3190' },
       { type: 'casting', value: 'H20-3191' },
     ])
-    const [row] = await t.dataSource.query("SELECT batchId FROM part WHERE partNumber = 'TM-HD-2100'")
+    const [row] = await t.dataSource.query(`SELECT "batchId" FROM part WHERE "partNumber" = 'TM-HD-2100'`)
     expect(row.batchId).toBe(response.body.batchId)
   })
 

@@ -15,7 +15,7 @@ import { openDatabase } from '../../server/db/data-source'
 import { linksCsv, partsCsv } from '../../server/imports/export.service'
 import { FitGraphIndex } from '../../server/fitment/fit-graph'
 import { ImportService } from '../../server/imports/import.service'
-import { databaseOf, inTransaction, sqliteConnection } from '../../server/db/sqlite-connection'
+import { databaseOf } from '../../server/db/sqlite-connection'
 import { insertIdentityRow, insertLinkRow } from '../../server/fitment/link-rows'
 import { insertPartRows } from '../../server/catalogue/part-writer'
 
@@ -97,7 +97,7 @@ const catalogueArb = fc
 type Catalogue = typeof catalogueArb extends fc.Arbitrary<infer T> ? T : never
 
 async function writeCatalogue(dataSource: DataSource, { parts, links }: Catalogue) {
-  const ids = await inTransaction(dataSource, (db) => insertPartRows(db, parts))
+  const ids = await databaseOf(dataSource).transaction((db) => insertPartRows(db, parts))
   await databaseOf(dataSource).transaction(async (db) => {
     for (const link of links) {
       const partIds: [number, number] = [ids.get(parts[link.a]!.partNumber)!, ids.get(parts[link.b]!.partNumber)!]
@@ -156,7 +156,7 @@ describe('export then import into an empty database (property, fast-check)', () 
           for (const type of ['parts', 'links'] as const) {
             // A links file of no links is refused as empty, so there is nothing to import.
             if (type === 'links' && catalogue.links.length === 0) continue
-            const csv = type === 'parts' ? partsCsv(sqliteConnection(source)) : linksCsv(sqliteConnection(source))
+            const csv = type === 'parts' ? await partsCsv(databaseOf(source)) : await linksCsv(databaseOf(source))
             const file = path.join(dir, `${type}.csv`)
             writeFileSync(file, csv)
             const user = { id: null, name: 'test' }

@@ -19,7 +19,8 @@ function largePartsFile(prefix: string, rows = ROWS): string {
 }
 
 async function editorOn() {
-  t = await createTestApp({ env: { FITWRIGHT_IMPORT_MAX_ROWS: String(ROWS + 10) } })
+  // The import worker is for the embedded SQLite file; on PostgreSQL imports run through the data port.
+  t = await createTestApp({ postgres: false, env: { FITWRIGHT_IMPORT_MAX_ROWS: String(ROWS + 10) } })
   return t.signIn('editor')
 }
 

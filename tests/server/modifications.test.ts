@@ -11,7 +11,7 @@ afterAll(() => t.close())
 
 const row = async (name: string) =>
   (
-    (await t.dataSource.query('SELECT title, updatedAt, status, source FROM modification WHERE name = ?', [name])) as {
+    (await t.db.all('SELECT "title", "updatedAt", "status", "source" FROM modification WHERE "name" = ?', [name])) as {
       title: string
       updatedAt: string
     }[]

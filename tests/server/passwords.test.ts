@@ -10,7 +10,7 @@ beforeAll(async () => {
 afterAll(() => t.close())
 
 async function storedHash(email: string): Promise<string> {
-  const [row] = (await t.dataSource.query('SELECT passwordHash FROM user WHERE email = ?', [email])) as { passwordHash: string }[]
+  const [row] = (await t.db.all('SELECT "passwordHash" FROM "user" WHERE "email" = ?', [email])) as { passwordHash: string }[]
   return row!.passwordHash
 }
 

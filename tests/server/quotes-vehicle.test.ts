@@ -87,10 +87,10 @@ describe('the vehicle on a quote', () => {
 
   it('still reads a quote saved before make and model were kept', async () => {
     const made = (await tech.post('/api/quotes').send({ slots: { block: 'TM-BL-1800' }, vin: VIN })).body as { id: number }
-    const [row] = (await t.dataSource.query('SELECT "body" FROM quote WHERE "id" = ?', [made.id])) as { body: string }[]
+    const [row] = (await t.db.all('SELECT "body" FROM quote WHERE "id" = ?', [made.id])) as { body: string }[]
     const body = JSON.parse(row!.body) as { vehicle: Record<string, unknown> }
     body.vehicle = { modelYear: 1994, vin: VIN }
-    await t.dataSource.query('UPDATE quote SET "body" = ? WHERE "id" = ?', [JSON.stringify(body), made.id])
+    await t.db.run('UPDATE quote SET "body" = ? WHERE "id" = ?', [JSON.stringify(body), made.id])
     const read = await tech.get(`/api/quotes/${made.id}`)
     expect(read.status).toBe(200)
     expect(read.body.vehicle).toEqual({ modelYear: 1994, vin: VIN, make: null, model: null, engineFamily: null })

@@ -81,7 +81,7 @@ describe('sharing a build sheet by mail', { timeout: 30_000 }, () => {
     const { agent, id } = await newSheet()
     await agent.post(`/api/builds/${id}/share`).send({ email: 'colleague@shop.test', days: 1 })
     const { token } = sharedLink((await deliveredTo('colleague@shop.test'))[0]!)
-    await t.dataSource.query('UPDATE "shared_link" SET "expiresAt" = ?', ['2000-01-01 00:00:00.000'])
+    await t.db.run('UPDATE "shared_link" SET "expiresAt" = ?', [new Date('2000-01-01T00:00:00Z')])
     const visitor = await anonymous(t.app)
     const expired = await visitor.post('/api/shared/open').send({ token })
     expect(expired.status).toBe(410)

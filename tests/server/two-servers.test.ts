@@ -1,6 +1,8 @@
 import { afterAll, beforeAll, describe, expect, it } from 'vitest'
 import { postgresServerUrl } from '../helpers/postgres'
 import { createTestApp, type TestApp } from '../helpers/test-app'
+import { receivedMail } from '../helpers/mailbox'
+import { OutboxRepository } from '../../server/mail/outbox.repository'
 
 type Agent = Awaited<ReturnType<TestApp['signIn']>>
 type FitsBody = { groups: { results: { part: { partNumber: string }; relation: string; stock: { sites: string[] } }[] }[] }
@@ -85,5 +87,27 @@ describe.skipIf(!postgresServerUrl)('two servers on one PostgreSQL database', ()
     const head = async () =>
       (await fitsOf(counterOnSecond, 'TM-BL-1800', 'pageSize=200&kind=head')).find((fit) => fit.part.partNumber === 'TM-HD-1800')
     await within(1000, head, (fit) => expect(fit?.stock.sites).toContain('Eastbrook annex'))
+  })
+
+  it('sends a queued message once, though both servers deliver the outbox at the same moment', async () => {
+    const admin = await first.signIn('admin')
+    expect((await admin.post('/api/users/invite').send({ email: 'once@shop.test', name: 'Once', role: 'tech' })).status).toBe(201)
+    await Promise.all([first.services.outbox.deliverDue(), second.services.outbox.deliverDue()])
+    const delivered = [...receivedMail(first.config.mailDir), ...receivedMail(second.config.mailDir)].filter((mail) =>
+      mail.to.includes('once@shop.test'),
+    )
+    expect(delivered).toHaveLength(1)
+  })
+
+  it('lets only the server that took a due message send it, until its hold runs out', async () => {
+    const admin = await first.signIn('admin')
+    expect((await admin.post('/api/users/invite').send({ email: 'held@shop.test', name: 'Held', role: 'tech' })).status).toBe(201)
+    const now = new Date(Date.now() + 1000)
+    const heldUntil = new Date(now.getTime() + 60_000)
+    const recipients = (rows: { recipient: string }[]) => rows.map((row) => row.recipient)
+    expect(recipients(await new OutboxRepository(first.db).claimDue(now, 20, heldUntil))).toContain('held@shop.test')
+    expect(recipients(await new OutboxRepository(second.db).claimDue(now, 20, heldUntil))).not.toContain('held@shop.test')
+    const afterHold = new Date(heldUntil.getTime() + 1)
+    expect(recipients(await new OutboxRepository(second.db).claimDue(afterHold, 20, afterHold))).toContain('held@shop.test')
   })
 })

@@ -1,4 +1,4 @@
-import type Database from 'better-sqlite3'
+import type { Database } from '../../db/database'
 import type { FieldChange, ImportIssue } from '../../../shared/schemas/imports'
 import type { LinkSource, Relation } from '../../../shared/schemas/fitment'
 import { normalisePartCode } from '../../../shared/schemas/part'
@@ -6,6 +6,9 @@ import { ChangeList } from '../import-change-list'
 import { loadLinkCatalogue, type IdentityRecord, type StoredLink } from './link-catalogue'
 export type { StoredLink } from './link-catalogue'
 import { isFitRelation, rowsOf, type LinkEntry, type LinkRows } from './link-rows'
+
+/** Rows whose parts and pairs are read together, a chunk of the file at a time. */
+const PREFETCH_ROWS = 2000
 
 export type LinkValues = { relation: Relation; modifications: string[]; note: string; source: LinkSource }
 
@@ -51,8 +54,8 @@ function fieldChanges(before: Shown, after: Shown): FieldChange[] {
  * review items, not catalogue, so `identical` leaves them be. Runs once per
  * row of very large files, so it only builds change descriptions it will list.
  */
-export function planLinks(db: Database.Database, rows: LinkRows): LinksPlan {
-  const catalogue = loadLinkCatalogue(db)
+export async function planLinks(db: Database, rows: LinkRows): Promise<LinksPlan> {
+  const catalogue = await loadLinkCatalogue(db)
   const plan: LinksPlan = {
     changes: new ChangeList(),
     issues: [],
@@ -70,10 +73,8 @@ export function planLinks(db: Database.Database, rows: LinkRows): LinksPlan {
   const reject = (entry: LinkEntry, column: string, message: string) => {
     for (const row of rowsOf(entry)) issues.add(row, column, message)
   }
-  const partId = (entry: LinkEntry, column: 'from_part' | 'to_part', number: string) => {
-    const id = catalogue.partIds.get(number)
-    if (id !== undefined) return id
-    const similar = catalogue.numberForKey(normalisePartCode(number))
+  const missing = async (entry: LinkEntry, column: 'from_part' | 'to_part', number: string) => {
+    const similar = await catalogue.numberForKey(normalisePartCode(number))
     reject(
       entry,
       column,
@@ -81,16 +82,28 @@ export function planLinks(db: Database.Database, rows: LinkRows): LinksPlan {
     )
     return undefined
   }
+  // Found parts and pairs come back without a promise (see the catalogue's memo): the loop awaits only what it must read.
+  const partId = (entry: LinkEntry, column: 'from_part' | 'to_part', number: string): number | undefined | Promise<number | undefined> => {
+    const id = catalogue.partIds.get(number)
+    if (id instanceof Promise) return id.then((found) => found ?? missing(entry, column, number))
+    return id ?? missing(entry, column, number)
+  }
 
-  for (const entry of rows.entries()) {
-    const from = partId(entry, 'from_part', entry.from)
-    const to = partId(entry, 'to_part', entry.to)
+  const entries = [...rows.entries()]
+  for (const [index, entry] of entries.entries()) {
+    if (index % PREFETCH_ROWS === 0) await catalogue.prefetch(entries.slice(index, index + PREFETCH_ROWS))
+    const fromLookup = partId(entry, 'from_part', entry.from)
+    const from = fromLookup instanceof Promise ? await fromLookup : fromLookup
+    const toLookup = partId(entry, 'to_part', entry.to)
+    const to = toLookup instanceof Promise ? await toLookup : toLookup
     if (from === undefined || to === undefined) continue
     const a = from < to ? from : to
     const b = from < to ? to : from
     const pair = `${a}:${b}`
-    const link = catalogue.links.get(pair)
-    const identity = catalogue.identities.get(pair)
+    const linkLookup = catalogue.links.get(pair)
+    const link = linkLookup instanceof Promise ? await linkLookup : linkLookup
+    const identityLookup = catalogue.identities.get(pair)
+    const identity = identityLookup instanceof Promise ? await identityLookup : identityLookup
     let after: Shown
     let before: Shown
 

@@ -1,80 +1,104 @@
-import type Database from 'better-sqlite3'
+import { chunks, pairCondition, type Database } from '../../db/database'
 import type { Tick } from '../import-jobs'
-import { SQL_NOW, changeRecorder } from '../../audit/change-log'
+import { changeRecorder } from '../../audit/change-log'
 import type { LinksPlan } from './link-plan'
-import { proposedModificationInserter } from '../../fitment/link-rows'
+import { insertProposedModification } from '../../fitment/link-rows'
 import type { CatalogueChanges } from '../../fitment/fit-graph'
 
-/** Writes a links plan with prepared statements; the caller holds the transaction. Answers the links and identities it touched. */
-export function writeLinks(
-  db: Database.Database,
+/** Rows per multi-row insert: 250 links of 8 parameters stay under every driver's limit. */
+const ROWS_PER_INSERT = 250
+
+/** The ids of the rows of `table` holding these pairs, by "a:b". */
+async function idsByPair(db: Database, table: 'link' | 'part_identity', pairs: readonly { a: number; b: number }[]) {
+  const rows = await db.all<{ id: number; partAId: number; partBId: number }>(
+    `SELECT t."id", t."partAId", t."partBId" FROM ${table} t WHERE ${pairCondition('t', pairs.length)}`,
+    pairs.flatMap(({ a, b }) => [a, b]),
+  )
+  return new Map(rows.map((row) => [`${row.partAId}:${row.partBId}`, row.id]))
+}
+
+/** Writes a links plan; the caller holds the transaction. Answers the links and identities it touched. */
+export async function writeLinks(
+  db: Database,
   plan: LinksPlan,
   batchId: number,
+  now: Date,
   tick: Tick = () => {},
-): Required<Pick<CatalogueChanges, 'links' | 'identities'>> {
+): Promise<Required<Pick<CatalogueChanges, 'links' | 'identities'>>> {
   const links: number[] = []
   const identities: number[] = []
-  const insertModification = proposedModificationInserter(db, 'import')
-  const insertLink = db.prepare(
-    "INSERT INTO link (partAId, partBId, relation, note, source, status, batchId) VALUES (?, ?, ?, ?, ?, 'approved', ?)",
-  )
-  const updateLink = db.prepare(
-    `UPDATE link SET relation = ?, note = ?, source = ?, status = 'approved', batchId = ?, updatedAt = ${SQL_NOW} WHERE id = ?`,
-  )
-  const deleteLink = db.prepare('DELETE FROM link WHERE id = ?')
-  const insertLinkMod = db.prepare('INSERT INTO link_modification (linkId, modificationId) VALUES (?, ?)')
-  const deleteLinkMods = db.prepare('DELETE FROM link_modification WHERE linkId = ?')
-  const insertIdentity = db.prepare('INSERT INTO part_identity (partAId, partBId, note, source, batchId) VALUES (?, ?, ?, ?, ?)')
-  const updateIdentity = db.prepare('UPDATE part_identity SET note = ?, source = ?, batchId = ? WHERE id = ?')
-  const deleteIdentity = db.prepare('DELETE FROM part_identity WHERE id = ?')
   const record = changeRecorder(db, batchId)
 
   const modificationIds = new Map(plan.modificationIds)
   for (const name of plan.newModifications) {
-    modificationIds.set(name, insertModification(name, batchId))
+    modificationIds.set(name, await insertProposedModification(db, name, 'import', batchId))
   }
-  const linkMods = (linkId: number, names: string[]) => {
-    for (const name of names) insertLinkMod.run(linkId, modificationIds.get(name)!)
+  const linkMods = async (linkId: number, names: string[]) => {
+    for (const name of names)
+      await db.run('INSERT INTO link_modification ("linkId", "modificationId") VALUES (?, ?)', [linkId, modificationIds.get(name)!])
   }
 
   for (const stored of plan.linkDeletes) {
-    record('link', stored.record.id, 'deleted', stored.record.batchId, { link: [stored.record], link_modification: stored.mods })
-    deleteLink.run(stored.record.id)
+    await record('link', stored.record.id, 'deleted', stored.record.batchId, { link: [stored.record], link_modification: stored.mods })
+    await db.run('DELETE FROM link WHERE "id" = ?', [stored.record.id])
     links.push(stored.record.id)
     tick()
   }
   for (const stored of plan.identityDeletes) {
-    record('identity', stored.id, 'deleted', stored.batchId, { part_identity: [stored] })
-    deleteIdentity.run(stored.id)
+    await record('identity', stored.id, 'deleted', stored.batchId, { part_identity: [stored] })
+    await db.run('DELETE FROM part_identity WHERE "id" = ?', [stored.id])
     identities.push(stored.id)
     tick()
   }
   for (const { stored, values } of plan.linkUpdates) {
     const { id } = stored.record
-    record('link', id, 'updated', stored.record.batchId, { link: [stored.record], link_modification: stored.mods })
-    updateLink.run(values.relation, values.note, values.source, batchId, id)
+    await record('link', id, 'updated', stored.record.batchId, { link: [stored.record], link_modification: stored.mods })
+    await db.run(
+      `UPDATE link SET "relation" = ?, "note" = ?, "source" = ?, "status" = 'approved', "batchId" = ?, "updatedAt" = ? WHERE "id" = ?`,
+      [values.relation, values.note, values.source, batchId, now, id],
+    )
     links.push(id)
     if (stored.names.join('\n') !== values.modifications.join('\n')) {
-      deleteLinkMods.run(id)
-      linkMods(id, values.modifications)
+      await db.run('DELETE FROM link_modification WHERE "linkId" = ?', [id])
+      await linkMods(id, values.modifications)
     }
     tick()
   }
   for (const { stored, note, source } of plan.identityUpdates) {
-    record('identity', stored.id, 'updated', stored.batchId, { part_identity: [stored] })
-    updateIdentity.run(note, source, batchId, stored.id)
+    await record('identity', stored.id, 'updated', stored.batchId, { part_identity: [stored] })
+    await db.run('UPDATE part_identity SET "note" = ?, "source" = ?, "batchId" = ? WHERE "id" = ?', [note, source, batchId, stored.id])
     identities.push(stored.id)
     tick()
   }
-  for (const { a, b, values } of plan.linkCreates) {
-    const linkId = Number(insertLink.run(a, b, values.relation, values.note, values.source, batchId).lastInsertRowid)
-    linkMods(linkId, values.modifications)
-    links.push(linkId)
-    tick()
+  // New links and identities go in several rows a statement; their ids are read back by pair (a pair is unique).
+  for (const chunk of chunks(plan.linkCreates, ROWS_PER_INSERT)) {
+    await db.run(
+      `INSERT INTO link ("partAId", "partBId", "relation", "note", "source", "status", "batchId", "createdAt", "updatedAt")
+       VALUES ${chunk.map(() => "(?, ?, ?, ?, ?, 'approved', ?, ?, ?)").join(', ')}`,
+      chunk.flatMap(({ a, b, values }) => [a, b, values.relation, values.note, values.source, batchId, now, now]),
+    )
+    const ids = await idsByPair(db, 'link', chunk)
+    const mods = chunk.flatMap(({ a, b, values }) =>
+      values.modifications.map((name) => [ids.get(`${a}:${b}`)!, modificationIds.get(name)!]),
+    )
+    for (const rows of chunks(mods, ROWS_PER_INSERT)) {
+      await db.run(`INSERT INTO link_modification ("linkId", "modificationId") VALUES ${rows.map(() => '(?, ?)').join(', ')}`, rows.flat())
+    }
+    for (const { a, b } of chunk) {
+      links.push(ids.get(`${a}:${b}`)!)
+      tick()
+    }
   }
-  for (const { a, b, note, source } of plan.identityCreates) {
-    identities.push(Number(insertIdentity.run(a, b, note, source, batchId).lastInsertRowid))
-    tick()
+  for (const chunk of chunks(plan.identityCreates, ROWS_PER_INSERT)) {
+    await db.run(
+      `INSERT INTO part_identity ("partAId", "partBId", "note", "source", "batchId", "createdAt") VALUES ${chunk.map(() => '(?, ?, ?, ?, ?, ?)').join(', ')}`,
+      chunk.flatMap(({ a, b, note, source }) => [a, b, note, source, batchId, now]),
+    )
+    const ids = await idsByPair(db, 'part_identity', chunk)
+    for (const { a, b } of chunk) {
+      identities.push(ids.get(`${a}:${b}`)!)
+      tick()
+    }
   }
   return { links, identities }
 }

@@ -1,4 +1,4 @@
-import type Database from 'better-sqlite3'
+import type { Database } from '../../db/database'
 import type { FieldChange, ImportIssue } from '../../../shared/schemas/imports'
 import type { MarkType } from '../../../shared/schemas/part'
 import type { PartInput } from '../../../shared/schemas/part-input'
@@ -83,13 +83,13 @@ function fieldChanges(before: PartInput | null, after: PartInput): FieldChange[]
 /**
  * Weighs the checked rows against the catalogue as it is now: a new number is
  * created, a known one updated when anything differs, left alone otherwise.
- * Synchronous on the raw connection so a commit can plan and write in one go.
+ * At commit it runs in the write's transaction, so nothing changes between plan and write.
  */
-export function planParts(db: Database.Database, rows: PartRows): PartsPlan {
+export async function planParts(db: Database, rows: PartRows): Promise<PartsPlan> {
   // Row by row through the number, key and mark indexes: the work follows the file, not the catalogue.
-  const partByNumber = db.prepare('SELECT * FROM part WHERE partNumber = ?')
-  const partByKey = db.prepare('SELECT * FROM part WHERE partKey = ? ORDER BY partNumber LIMIT 1')
-  const marksOf = db.prepare('SELECT * FROM part_mark WHERE partId = ? ORDER BY id')
+  const partByNumber = (number: string) => db.get<PartRecord>('SELECT * FROM part WHERE "partNumber" = ?', [number])
+  const partByKey = (key: string) => db.get<PartRecord>('SELECT * FROM part WHERE "partKey" = ? ORDER BY "partNumber" LIMIT 1', [key])
+  const marksOf = (id: number) => db.all<MarkRecord>('SELECT * FROM part_mark WHERE "partId" = ? ORDER BY "id"', [id])
   const header = rows.header!
   const plan: PartsPlan = { changes: new ChangeList(), issues: [], creates: [], updates: [] }
   const issues = rows.issues.clone()
@@ -100,9 +100,9 @@ export function planParts(db: Database.Database, rows: PartRows): PartsPlan {
   for (const entry of rows.entries()) {
     const { part } = entry
     const [firstRow] = entry.rows as [number]
-    const record = partByNumber.get(part.partNumber) as PartRecord | undefined
+    const record = await partByNumber(part.partNumber)
     if (!record) {
-      const sameKey = partByKey.get(normalisePartCode(part.partNumber)) as PartRecord | undefined
+      const sameKey = await partByKey(normalisePartCode(part.partNumber))
       if (sameKey) {
         reject(
           entry,
@@ -116,7 +116,7 @@ export function planParts(db: Database.Database, rows: PartRows): PartsPlan {
       plan.changes.create(firstRow, part.partNumber, () => fieldChanges(null, part))
       continue
     }
-    const marks = marksOf.all(record.id) as MarkRecord[]
+    const marks = await marksOf(record.id)
     const stored = storedPart(record, marks)
     const checked = checkPart(mergeAbsentColumns(stored, part, header))
     if (!checked.ok) {

@@ -1,4 +1,4 @@
-import type Database from 'better-sqlite3'
+import type { Database } from '../../db/database'
 import type { FieldChange, ImportIssue } from '../../../shared/schemas/imports'
 import { normalisePartCode } from '../../../shared/schemas/part'
 import { ChangeList } from '../import-change-list'
@@ -54,22 +54,18 @@ function fieldChanges(before: StockUnit | null, after: StockUnit): FieldChange[]
  * twice does not put it on the shelf twice. Reservations belong to quotes, so
  * a file can neither make nor undo one.
  */
-export function planStock(db: Database.Database, rows: StockRows): StockPlan {
+export async function planStock(db: Database, rows: StockRows): Promise<StockPlan> {
   const partIds = new Map<string, number>()
   const partNumbers = new Map<number, string>()
   const partKeys = new Map<string, string>()
-  for (const part of db.prepare('SELECT "id", "partNumber", "partKey" FROM part').all() as {
-    id: number
-    partNumber: string
-    partKey: string
-  }[]) {
+  for (const part of await db.all<{ id: number; partNumber: string; partKey: string }>('SELECT "id", "partNumber", "partKey" FROM part')) {
     partIds.set(part.partNumber, part.id)
     partNumbers.set(part.id, part.partNumber)
     partKeys.set(part.partKey, part.partNumber)
   }
   const siteIds = new Map<string, number>()
   const siteNames = new Map<number, string>()
-  for (const site of db.prepare('SELECT "id", "name" FROM site').all() as { id: number; name: string }[]) {
+  for (const site of await db.all<{ id: number; name: string }>('SELECT "id", "name" FROM site')) {
     siteIds.set(site.name, site.id)
     siteNames.set(site.id, site.name)
   }
@@ -98,7 +94,7 @@ export function planStock(db: Database.Database, rows: StockRows): StockPlan {
   }
   const byLabel = new Map<string, StockRecord>()
   const unlabelled = new Map<string, StockRecord[]>()
-  for (const record of db.prepare('SELECT * FROM stock_item ORDER BY "id"').all() as StockRecord[]) {
+  for (const record of await db.all<StockRecord>('SELECT * FROM stock_item ORDER BY "id"')) {
     if (record.label !== null) {
       byLabel.set(record.label, record)
       continue

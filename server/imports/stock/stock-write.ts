@@ -1,4 +1,4 @@
-import type Database from 'better-sqlite3'
+import type { Database } from '../../db/database'
 import type { Tick } from '../import-jobs'
 import { changeRecorder } from '../../audit/change-log'
 import type { StockPlan, StockPlanned } from './stock-plan'
@@ -26,30 +26,25 @@ function values({ partId, siteId, unit }: StockPlanned) {
 
 /**
  * Writes a stock plan; the caller holds the transaction. Every unit written
- * carries the batch's own time as its updatedAt, so a revert can tell a unit
+ * carries the batch's own time (`stamp`) as its updatedAt, so a revert can tell a unit
  * sold, reserved or edited since from one left as the batch wrote it.
  * Answers the parts whose shelves changed, for the stock index.
  */
-export function writeStock(db: Database.Database, plan: StockPlan, batchId: number, tick: Tick = () => {}): number[] {
-  const { createdAt: stamp } = db.prepare('SELECT "createdAt" FROM import_batch WHERE "id" = ?').get(batchId) as { createdAt: string }
+export async function writeStock(db: Database, plan: StockPlan, batchId: number, stamp: Date, tick: Tick = () => {}): Promise<number[]> {
   const columns = FIELDS.map((field) => `"${field}"`).join(', ')
-  const insert = db.prepare(
-    `INSERT INTO stock_item (${columns}, "batchId", "createdAt", "updatedAt") VALUES (${FIELDS.map(() => '?').join(', ')}, ?, ?, ?)`,
-  )
-  const update = db.prepare(
-    `UPDATE stock_item SET ${FIELDS.map((field) => `"${field}" = ?`).join(', ')}, "batchId" = ?, "updatedAt" = ? WHERE "id" = ?`,
-  )
+  const insert = `INSERT INTO stock_item (${columns}, "batchId", "createdAt", "updatedAt") VALUES (${FIELDS.map(() => '?').join(', ')}, ?, ?, ?)`
+  const update = `UPDATE stock_item SET ${FIELDS.map((field) => `"${field}" = ?`).join(', ')}, "batchId" = ?, "updatedAt" = ? WHERE "id" = ?`
   const record = changeRecorder(db, batchId)
   const touched = new Set<number>()
   for (const planned of plan.updates) {
     const { previous } = planned
-    record('stock', previous.id, 'updated', previous.batchId, { stock_item: [previous] })
-    update.run(...values(planned), batchId, stamp, previous.id)
+    await record('stock', previous.id, 'updated', previous.batchId, { stock_item: [previous] })
+    await db.run(update, [...values(planned), batchId, stamp, previous.id])
     touched.add(previous.partId).add(planned.partId)
     tick()
   }
   for (const planned of plan.creates) {
-    insert.run(...values(planned), batchId, stamp, stamp)
+    await db.run(insert, [...values(planned), batchId, stamp, stamp])
     touched.add(planned.partId)
     tick()
   }

@@ -1,4 +1,4 @@
-import type Database from 'better-sqlite3'
+import type { Database } from '../../db/database'
 import { SLOT_IDS, type SlotId } from '../../../shared/build-template'
 import { VEHICLE_COLUMNS, slotColumn } from '../../../shared/import-files'
 import { toCsv } from '../../../shared/csv-cells'
@@ -6,14 +6,14 @@ import { pushTo } from '../../lib/map-list'
 import type { VehicleRecord } from './vehicle-plan'
 
 /** Every vehicle application with its original part per slot, in the vehicles import format. */
-export function vehiclesCsv(db: Database.Database): string {
-  const vehicles = db
-    .prepare('SELECT * FROM vehicle_application ORDER BY "make", "model", "yearFrom", "yearTo", "body", "market", "engineFamily", "id"')
-    .all() as VehicleRecord[]
+export async function vehiclesCsv(db: Database): Promise<string> {
+  const vehicles = await db.all<VehicleRecord>(
+    'SELECT * FROM vehicle_application ORDER BY "make", "model", "yearFrom", "yearTo", "body", "market", "engineFamily", "id"',
+  )
   const originals = new Map<number, { slot: SlotId; partNumber: string }[]>()
-  const rows = db
-    .prepare('SELECT o."vehicleId", o."slot", p."partNumber" FROM vehicle_original o JOIN part p ON p."id" = o."partId"')
-    .all() as { vehicleId: number; slot: SlotId; partNumber: string }[]
+  const rows = await db.all<{ vehicleId: number; slot: SlotId; partNumber: string }>(
+    'SELECT o."vehicleId", o."slot", p."partNumber" FROM vehicle_original o JOIN part p ON p."id" = o."partId"',
+  )
   for (const { vehicleId, slot, partNumber } of rows) pushTo(originals, vehicleId, { slot, partNumber })
   return toCsv([
     [...VEHICLE_COLUMNS, ...SLOT_IDS.map(slotColumn)],

@@ -1,4 +1,4 @@
-import type Database from 'better-sqlite3'
+import type { Database } from '../../db/database'
 import { BUILD_SLOTS, SLOT_IDS, type SlotId } from '../../../shared/build-template'
 import { slotColumn } from '../../../shared/import-files'
 import type { FieldChange, ImportIssue } from '../../../shared/schemas/imports'
@@ -47,29 +47,26 @@ function originalChanges(before: Originals, after: Originals, numberOf: (id: num
  * market columns matches on the other fields, as long as that names one
  * application.
  */
-export function planVehicles(db: Database.Database, rows: VehicleRows): VehiclesPlan {
+export async function planVehicles(db: Database, rows: VehicleRows): Promise<VehiclesPlan> {
   const parts = new Map<string, { id: number; kind: string }>()
   const numbers = new Map<number, string>()
   const keys = new Map<string, string>()
-  for (const part of db.prepare('SELECT "id", "partNumber", "partKey", "kind" FROM part').all() as {
-    id: number
-    partNumber: string
-    partKey: string
-    kind: string
-  }[]) {
+  for (const part of await db.all<{ id: number; partNumber: string; partKey: string; kind: string }>(
+    'SELECT "id", "partNumber", "partKey", "kind" FROM part',
+  )) {
     parts.set(part.partNumber, part)
     numbers.set(part.id, part.partNumber)
     keys.set(part.partKey, part.partNumber)
   }
   const baseKey = (v: Omit<VehicleKey, 'body' | 'market'>) => JSON.stringify([v.yearFrom, v.yearTo, v.make, v.model, v.engineFamily])
   const stored = new Map<string, VehicleRecord[]>()
-  for (const vehicle of db.prepare('SELECT * FROM vehicle_application').all() as VehicleRecord[]) {
+  for (const vehicle of await db.all<VehicleRecord>('SELECT * FROM vehicle_application ORDER BY "id"')) {
     const list = stored.get(baseKey(vehicle))
     if (list) list.push(vehicle)
     else stored.set(baseKey(vehicle), [vehicle])
   }
   const storedOriginals = new Map<number, OriginalRecord[]>()
-  for (const original of db.prepare('SELECT * FROM vehicle_original').all() as OriginalRecord[]) {
+  for (const original of await db.all<OriginalRecord>('SELECT * FROM vehicle_original ORDER BY "vehicleId", "slot"')) {
     const list = storedOriginals.get(original.vehicleId)
     if (list) list.push(original)
     else storedOriginals.set(original.vehicleId, [original])

@@ -1,6 +1,7 @@
 import type { DataSource } from 'typeorm'
 import { revertBatch } from '../../audit/revert'
-import { inTransaction, sqliteConnection } from '../../db/sqlite-connection'
+import type { Database } from '../../db/database'
+import { databaseOf } from '../../db/sqlite-connection'
 import { ImportJobs, type ImportJobInput, type ImportJobResult, type Report } from '../import-job'
 import type { Touched } from '../import-jobs'
 import { ImportWorker } from './import-worker-client'
@@ -44,18 +45,17 @@ export class WorkerRunner implements ImportRunner {
 }
 
 /**
- * The same jobs on the main thread's connection: for an in-memory database
- * (a worker cannot open it) and PostgreSQL (where they answer 501, as bulk
- * writes still need SQLite).
+ * The same jobs through the main thread's data port: for an in-memory SQLite
+ * database (a worker cannot open it) and PostgreSQL, where every statement is
+ * a round trip to the server, so the event loop stays free while they run.
  */
 export class InlineRunner implements ImportRunner {
   private readonly jobs: ImportJobs
+  private readonly db: Database
 
-  constructor(private readonly dataSource: DataSource) {
-    this.jobs = new ImportJobs(
-      () => sqliteConnection(dataSource),
-      (work) => inTransaction(dataSource, work),
-    )
+  constructor(dataSource: DataSource) {
+    this.db = databaseOf(dataSource)
+    this.jobs = new ImportJobs(this.db)
   }
 
   import(input: ImportJobInput, maxRows: number, report: Report) {
@@ -63,11 +63,11 @@ export class InlineRunner implements ImportRunner {
   }
 
   revert(batchId: number, userName: string) {
-    return inTransaction(this.dataSource, (db) => revertBatch(db, batchId, userName))
+    return this.db.transaction((tx) => revertBatch(tx, batchId, userName))
   }
 
   async export(file: ExportFile) {
-    return exportCsv(sqliteConnection(this.dataSource), file)
+    return this.db.snapshot((tx) => exportCsv(tx, file))
   }
 
   async close() {}
