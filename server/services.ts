@@ -65,7 +65,7 @@ export function createServices(dataSource: DataSource, config: AppConfig, rules:
   const outboxRows = new OutboxRepository(databaseOf(dataSource))
   const outbox = new OutboxService(outboxRows, new Mailer({ smtpUrl: config.smtpUrl, mailDir: config.mailDir, from: config.mailFrom }))
   const fieldReports = new FieldReportService(new FieldReportRepository(databaseOf(dataSource)), parts, photos)
-  const fieldReportNotices = new FieldReportNotices(outbox, outboxRows, users, fieldReports, config.publicUrl)
+  const fieldReportNotices = new FieldReportNotices(outbox, outboxRows, users, fieldReports, config.publicUrl, databaseOf(dataSource))
   const completion = new BuildCompletionService(parts, graphIndex, evaluation, modifications, stockIndex)
   const shopSettings = new ShopSettingsService(databaseOf(dataSource))
   const imports = new ImportService(dataSource, { maxRows: config.importMaxRows }, graphIndex, stockIndex)

@@ -30,6 +30,13 @@ export interface Database {
   transaction<T>(work: (tx: Database) => Promise<T>): Promise<T>
   /** Runs `work` reading one moment of the database, however long it takes and whoever writes meanwhile (long exports). */
   snapshot<T>(work: (tx: Database) => Promise<T>): Promise<T>
+  /**
+   * Runs `work` while no other server runs work under the same `key`: a job
+   * every server runs on its beat, done by one at a time. On SQLite one server
+   * owns the file, so it just runs; on PostgreSQL it holds a lock on the key
+   * in a transaction of its own.
+   */
+  exclusively<T>(key: string, work: (tx: Database) => Promise<T>): Promise<T>
 }
 
 /** `?, ?, ?` for a list of values. */

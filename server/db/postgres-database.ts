@@ -91,6 +91,13 @@ export class PostgresDatabase implements Database {
     return this.within('BEGIN', work)
   }
 
+  exclusively<T>(key: string, work: (tx: Database) => Promise<T>): Promise<T> {
+    return this.transaction(async (tx) => {
+      await tx.run('SELECT pg_advisory_xact_lock(hashtext(?)) IS NULL AS "held"', [key])
+      return work(tx)
+    })
+  }
+
   snapshot<T>(work: (tx: Database) => Promise<T>): Promise<T> {
     return this.within('BEGIN ISOLATION LEVEL REPEATABLE READ READ ONLY', work)
   }

@@ -115,6 +115,10 @@ export class SqliteDatabase implements Database {
     return this.within('BEGIN IMMEDIATE', work)
   }
 
+  exclusively<T>(_key: string, work: (tx: Database) => Promise<T>): Promise<T> {
+    return work(this)
+  }
+
   /** WAL: a deferred transaction reads one snapshot while other connections write. */
   snapshot<T>(work: (tx: Database) => Promise<T>): Promise<T> {
     return this.within('BEGIN DEFERRED', work)

@@ -1,6 +1,6 @@
 import type { FieldReport } from '../../shared/schemas/field-reports'
 import { can } from '../../shared/permissions'
-import { toIsoTime } from '../db/database'
+import { toIsoTime, type Database } from '../db/database'
 import type { OutboxService } from '../mail/outbox.service'
 import type { OutboxRepository } from '../mail/outbox.repository'
 import type { UserService } from '../users/user.service'
@@ -18,6 +18,7 @@ export class FieldReportNotices {
     private readonly users: UserService,
     private readonly reports: FieldReportService,
     private readonly publicUrl: string,
+    private readonly db: Database,
     private readonly clock: () => Date = () => new Date(),
   ) {}
 
@@ -33,7 +34,12 @@ export class FieldReportNotices {
   }
 
   /** Queues a digest when reports came in since the last one and that one is an hour old; answers how many went out. */
-  async digest(): Promise<number> {
+  digest(): Promise<number> {
+    // Every server runs this on its beat; on one shared database only one of them at a time, so editors get one digest.
+    return this.db.exclusively(DIGEST, () => this.queueDigest())
+  }
+
+  private async queueDigest(): Promise<number> {
     const last = await this.outboxRows.lastQueued(DIGEST)
     const lastAt = last ? new Date(toIsoTime(last)).getTime() : 0
     if (this.clock().getTime() - lastAt < HOUR) return 0

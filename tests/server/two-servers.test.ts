@@ -110,4 +110,16 @@ describe.skipIf(!postgresServerUrl)('two servers on one PostgreSQL database', ()
     const afterHold = new Date(heldUntil.getTime() + 1)
     expect(recipients(await new OutboxRepository(second.db).claimDue(afterHold, 20, afterHold))).toContain('held@shop.test')
   })
+
+  it('queues one digest of waiting reports for each editor, though both servers run the digest at the same moment', async () => {
+    const tech = await first.signIn('tech')
+    const pair = { from: 'TM-HD-2000', to: 'TM-BL-1800', relation: 'fits' }
+    expect((await tech.post('/api/field-reports').field('report', JSON.stringify({ pairs: [pair] }))).status).toBe(201)
+    const [fromFirst, fromSecond] = await Promise.all([
+      first.services.fieldReportNotices.digest(),
+      second.services.fieldReportNotices.digest(),
+    ])
+    expect(fromFirst + fromSecond).toBeGreaterThan(0)
+    expect(fromFirst === 0 || fromSecond === 0).toBe(true)
+  })
 })
