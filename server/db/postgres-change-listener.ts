@@ -10,6 +10,21 @@ type ChangeRow = { id: number; touched: TouchedIds }
 const CHANNEL = 'fitwright_catalogue'
 /** A missed notification (a dropped connection) is caught up by polling this often. */
 const POLL_MS = 5_000
+/**
+ * Changes are kept this long, then removed: every server reads them within
+ * seconds, and one that starts reads the whole catalogue, not the feed.
+ */
+export const CHANGE_KEPT_MS = 24 * 60 * 60_000
+const PRUNE_MS = 60 * 60_000
+
+/** Removes changes older than `keptMs`; any server may do it, and each does on its own beat. */
+export async function pruneCatalogueChanges(client: Pick<pg.ClientBase, 'query'>, keptMs = CHANGE_KEPT_MS): Promise<number> {
+  const result = await client.query(
+    `DELETE FROM catalogue_change WHERE "createdAt" < (now() AT TIME ZONE 'utc') - make_interval(secs => $1)`,
+    [keptMs / 1000],
+  )
+  return result.rowCount ?? 0
+}
 
 function merge(rows: ChangeRow[]): TouchedIds {
   const merged = new Map(KEYS.map((key) => [key, new Set<number>()]))
@@ -59,11 +74,16 @@ export async function listenForCatalogueChanges(
   await client.query(`LISTEN ${CHANNEL}`)
   const timer = setInterval(() => void catchUp(), POLL_MS)
   timer.unref()
+  const pruning = setInterval(() => {
+    running = running.then(() => pruneCatalogueChanges(client).then(() => undefined, onError))
+  }, PRUNE_MS)
+  pruning.unref()
 
   return {
     async close() {
       closed = true
       clearInterval(timer)
+      clearInterval(pruning)
       await running
       await client.end()
     },

@@ -3,7 +3,8 @@ import type { DataSource } from 'typeorm'
 import { afterAll, beforeAll, describe, expect, it } from 'vitest'
 import type { Database } from '../../server/db/database'
 import { openDatabase } from '../../server/db/data-source'
-import { listenForCatalogueChanges, type TouchedIds } from '../../server/db/postgres-change-listener'
+import { listenForCatalogueChanges, pruneCatalogueChanges, type TouchedIds } from '../../server/db/postgres-change-listener'
+import pg from 'pg'
 import { databaseOf } from '../../server/db/sqlite-connection'
 import { createPostgresDatabase, postgresServerUrl } from '../helpers/postgres'
 
@@ -84,5 +85,21 @@ describe.skipIf(!postgresServerUrl)('the catalogue change feed between two serve
     const change = await nextChange(received, (t) => (t.parts ?? []).includes(id), 1000)
     expect(received.flatMap((t) => t.parts ?? [])).toEqual([id])
     expect(change.parts).toEqual([id])
+  })
+
+  it('removes changes a day old, keeping the newer ones', async () => {
+    const old = await db.insert(`INSERT INTO catalogue_change ("touched", "createdAt") VALUES ('{"parts": [1]}', ?) RETURNING "id"`, [
+      new Date(Date.now() - 25 * 60 * 60_000),
+    ])
+    const fresh = await db.insert(`INSERT INTO catalogue_change ("touched") VALUES ('{"parts": [2]}') RETURNING "id"`)
+    const client = new pg.Client({ connectionString: database.url })
+    await client.connect()
+    try {
+      expect(await pruneCatalogueChanges(client)).toBeGreaterThanOrEqual(1)
+    } finally {
+      await client.end()
+    }
+    const left = await db.column('SELECT "id" FROM catalogue_change WHERE "id" IN (?, ?)', [old, fresh])
+    expect(left).toEqual([fresh])
   })
 })
