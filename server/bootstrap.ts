@@ -5,7 +5,6 @@ import type { DataSource } from 'typeorm'
 import type { AppConfig } from './config/env'
 import { openDatabase } from './db/data-source'
 import { DEMO_PASSWORD, DEMO_USERS, seedDemo } from './demo/seed'
-import { seedDemoOnPostgres } from './demo/seed-postgres'
 import { UserService } from './users/user.service'
 import { createServices, type Services } from './services'
 import { RuleBook } from './reasoning/rule-book'
@@ -57,11 +56,7 @@ export async function prepareDatabase(config: AppConfig): Promise<Prepared> {
   const services = createServices(dataSource, serviceConfig, rules)
   await services.modifications.syncShipped(rules.loaded.modifications)
   const demoDir = path.join(projectRoot, 'data', 'demo')
-  const seeded = !config.demo
-    ? false
-    : config.databaseUrl
-      ? await seedDemoOnPostgres(dataSource, services.users, serviceConfig, rules, demoDir)
-      : await seedDemo(dataSource, services, demoDir)
+  const seeded = config.demo ? await seedDemo(dataSource, services, demoDir) : false
   if (config.firstAdmin && (await services.users.count()) === 0) {
     await services.users.create({ ...config.firstAdmin, name: 'Administrator', role: 'admin' })
   }

@@ -44,7 +44,7 @@ describe.skipIf(!postgresServerUrl)('the demo scenario on PostgreSQL', () => {
     expect(await read(onPostgres)).toEqual(await read(onSqlite))
   })
 
-  it('gives the next record an id after the copied ones', async () => {
+  it('gives the next record the next id', async () => {
     const editor = await onPostgres.signIn('editor')
     const created = await editor.post('/api/links').send({ fromPart: 'TM-IM-2000T', toPart: 'TM-HD-2050', relation: 'fits' })
     expect(created.status, JSON.stringify(created.body)).toBe(201)
