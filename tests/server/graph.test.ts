@@ -88,7 +88,7 @@ describe('GET /api/graph/neighbourhood/:partNumber', () => {
           marks: [],
           listPriceCents: null,
         }))
-        return { spokes, ids: await insertPartRows(db, [{ ...spokes[0]!, partNumber: hubNumber }, ...spokes]) }
+        return { spokes, ids: await insertPartRows(db, [{ ...spokes[0]!, partNumber: hubNumber }, ...spokes], null, new Date()) }
       })
       .then(({ spokes, ids }) =>
         databaseOf(own.dataSource).transaction(async (db) => {

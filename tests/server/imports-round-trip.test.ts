@@ -97,7 +97,7 @@ const catalogueArb = fc
 type Catalogue = typeof catalogueArb extends fc.Arbitrary<infer T> ? T : never
 
 async function writeCatalogue(dataSource: DataSource, { parts, links }: Catalogue) {
-  const ids = await databaseOf(dataSource).transaction((db) => insertPartRows(db, parts))
+  const ids = await databaseOf(dataSource).transaction((db) => insertPartRows(db, parts, null, new Date()))
   await databaseOf(dataSource).transaction(async (db) => {
     for (const link of links) {
       const partIds: [number, number] = [ids.get(parts[link.a]!.partNumber)!, ids.get(parts[link.b]!.partNumber)!]

@@ -10,8 +10,8 @@ export type LinkRecord = {
   source: LinkSource
   batchId: number | null
   status: ReviewStatus
-  createdAt: string
-  updatedAt: string
+  createdAt: string | Date
+  updatedAt: string | Date
 }
 export type StoredLink = { record: LinkRecord; mods: LinkModRecord[]; names: string[] }
 export type LinkModRecord = { linkId: number; modificationId: number }
@@ -22,7 +22,7 @@ export type IdentityRecord = {
   note: string
   source: LinkSource
   batchId: number | null
-  createdAt: string
+  createdAt: string | Date
 }
 
 /** Pairs looked up per statement when prefetching (two parameters each). */

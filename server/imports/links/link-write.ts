@@ -1,4 +1,4 @@
-import { chunks, pairCondition, type Database } from '../../db/database'
+import { chunks, type Database } from '../../db/database'
 import type { Tick } from '../import-jobs'
 import { changeRecorder } from '../../audit/change-log'
 import type { LinksPlan } from './link-plan'
@@ -8,12 +8,10 @@ import type { CatalogueChanges } from '../../fitment/fit-graph'
 /** Rows per multi-row insert: 250 links of 8 parameters stay under every driver's limit. */
 const ROWS_PER_INSERT = 250
 
-/** The ids of the rows of `table` holding these pairs, by "a:b". */
-async function idsByPair(db: Database, table: 'link' | 'part_identity', pairs: readonly { a: number; b: number }[]) {
-  const rows = await db.all<{ id: number; partAId: number; partBId: number }>(
-    `SELECT t."id", t."partAId", t."partBId" FROM ${table} t WHERE ${pairCondition('t', pairs.length)}`,
-    pairs.flatMap(({ a, b }) => [a, b]),
-  )
+/** The new rows' ids by "a:b", from an insert's `RETURNING "id", "partAId", "partBId"` (a pair is unique). */
+type NewRow = { id: number; partAId: number; partBId: number }
+
+function idsByPair(rows: readonly NewRow[]) {
   return new Map(rows.map((row) => [`${row.partAId}:${row.partBId}`, row.id]))
 }
 
@@ -70,14 +68,15 @@ export async function writeLinks(
     identities.push(stored.id)
     tick()
   }
-  // New links and identities go in several rows a statement; their ids are read back by pair (a pair is unique).
+  // New links and identities go in several rows a statement; the rows come back in no set order, so their ids are matched by pair.
   for (const chunk of chunks(plan.linkCreates, ROWS_PER_INSERT)) {
-    await db.run(
-      `INSERT INTO link ("partAId", "partBId", "relation", "note", "source", "status", "batchId", "createdAt", "updatedAt")
-       VALUES ${chunk.map(() => "(?, ?, ?, ?, ?, 'approved', ?, ?, ?)").join(', ')}`,
-      chunk.flatMap(({ a, b, values }) => [a, b, values.relation, values.note, values.source, batchId, now, now]),
+    const ids = idsByPair(
+      await db.all<NewRow>(
+        `INSERT INTO link ("partAId", "partBId", "relation", "note", "source", "status", "batchId", "createdAt", "updatedAt")
+         VALUES ${chunk.map(() => "(?, ?, ?, ?, ?, 'approved', ?, ?, ?)").join(', ')} RETURNING "id", "partAId", "partBId"`,
+        chunk.flatMap(({ a, b, values }) => [a, b, values.relation, values.note, values.source, batchId, now, now]),
+      ),
     )
-    const ids = await idsByPair(db, 'link', chunk)
     const mods = chunk.flatMap(({ a, b, values }) =>
       values.modifications.map((name) => [ids.get(`${a}:${b}`)!, modificationIds.get(name)!]),
     )
@@ -90,11 +89,13 @@ export async function writeLinks(
     }
   }
   for (const chunk of chunks(plan.identityCreates, ROWS_PER_INSERT)) {
-    await db.run(
-      `INSERT INTO part_identity ("partAId", "partBId", "note", "source", "batchId", "createdAt") VALUES ${chunk.map(() => '(?, ?, ?, ?, ?, ?)').join(', ')}`,
-      chunk.flatMap(({ a, b, note, source }) => [a, b, note, source, batchId, now]),
+    const ids = idsByPair(
+      await db.all<NewRow>(
+        `INSERT INTO part_identity ("partAId", "partBId", "note", "source", "batchId", "createdAt")
+         VALUES ${chunk.map(() => '(?, ?, ?, ?, ?, ?)').join(', ')} RETURNING "id", "partAId", "partBId"`,
+        chunk.flatMap(({ a, b, note, source }) => [a, b, note, source, batchId, now]),
+      ),
     )
-    const ids = await idsByPair(db, 'part_identity', chunk)
     for (const { a, b } of chunk) {
       identities.push(ids.get(`${a}:${b}`)!)
       tick()

@@ -22,8 +22,8 @@ export type PartRecord = {
   attributes: string
   listPriceCents: number | null
   batchId: number | null
-  createdAt: string
-  updatedAt: string
+  createdAt: string | Date
+  updatedAt: string | Date
 }
 export type MarkRecord = { id: number; partId: number; type: MarkType; value: string; valueKey: string }
 

@@ -1,4 +1,4 @@
-import type { Database } from '../../db/database'
+import { chunks, placeholders, type Database } from '../../db/database'
 import type { Tick } from '../import-jobs'
 import { changeRecorder } from '../../audit/change-log'
 import type { PartsPlan } from './part-plan'
@@ -18,15 +18,17 @@ export async function writeParts(db: Database, plan: PartsPlan, batchId: number,
          "batchId" = ?, "updatedAt" = ? WHERE "id" = ?`,
       [c.kind, c.name, c.family, c.yearFrom, c.yearTo, c.notes, JSON.stringify(c.attributes), c.listPriceCents, batchId, now, id],
     )
-    await db.run('DELETE FROM part_mark WHERE "partId" = ?', [id])
-    await insertMarks(db, id, part)
     tick()
   }
+  for (const ids of chunks(written)) await db.run(`DELETE FROM part_mark WHERE "partId" IN (${placeholders(ids.length)})`, ids)
+  await insertMarks(db, plan.updates)
   await rewritePartWords(db, written)
-  for (const part of plan.creates) {
-    const [id] = (await insertPartRows(db, [part], batchId)).values()
-    written.push(id!)
-    tick()
+  for (const chunk of chunks(plan.creates, 200)) {
+    const ids = await insertPartRows(db, chunk, batchId, now)
+    for (const part of chunk) {
+      written.push(ids.get(part.partNumber)!)
+      tick()
+    }
   }
   return written
 }

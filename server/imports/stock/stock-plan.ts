@@ -12,8 +12,8 @@ export type StockRecord = Omit<StockUnit, 'partNumber' | 'site'> & {
   siteId: number
   batchId: number | null
   reservedUntil: string | null
-  createdAt: string
-  updatedAt: string
+  createdAt: string | Date
+  updatedAt: string | Date
 }
 
 export type StockPlanned = { partId: number; siteId: number; unit: StockUnit }
