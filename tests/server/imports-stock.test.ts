@@ -135,6 +135,17 @@ describe('POST /api/imports, stock', () => {
     expect((await headsInStock('TM-BL-1800')).get('TM-HD-2000')).toMatchObject({ available: 2, minPriceCents: 45500 })
   })
 
+  it('moves a labelled unit to the part its row names, saying which part it was on though the file never names that part', async () => {
+    const csv = 'part_number,site,condition,price,label\nTM-HD-2050,Northgate counter,new,489.00,NG-000112\n'
+    const preview = await uploadCsv(editor, csv, { type: 'stock' })
+    expect(preview.body.changes).toContainEqual({
+      row: 2,
+      key: 'NG-000112',
+      action: 'update',
+      fields: [{ field: 'part_number', before: 'TM-HD-2000', after: 'TM-HD-2050' }],
+    })
+  })
+
   it('matches unlabelled rows to alike unlabelled units once each, so the same delivery imported twice is one delivery', async () => {
     const csv =
       'part_number,site,condition,price,location\nTM-HG-1800,Northgate counter,new,21.00,Bin 7\nTM-HG-1800,Northgate counter,new,21.00,Bin 7\n'

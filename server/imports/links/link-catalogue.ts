@@ -113,9 +113,6 @@ export async function loadLinkCatalogue(db: Database) {
   return {
     prefetch,
     partIds,
-    numberForKey: async (key: string) =>
-      (await db.get<{ partNumber: string }>('SELECT "partNumber" FROM part WHERE "partKey" = ? ORDER BY "partNumber" LIMIT 1', [key]))
-        ?.partNumber,
     modificationIds,
     links,
     identities,

@@ -1,7 +1,7 @@
 import type { Database } from '../../db/database'
 import type { FieldChange, ImportIssue } from '../../../shared/schemas/imports'
 import type { LinkSource, Relation } from '../../../shared/schemas/fitment'
-import { normalisePartCode } from '../../../shared/schemas/part'
+import { unknownPartMessages } from '../unknown-part'
 import { ChangeList } from '../import-change-list'
 import { loadLinkCatalogue, type IdentityRecord, type StoredLink } from './link-catalogue'
 export type { StoredLink } from './link-catalogue'
@@ -68,18 +68,14 @@ export async function planLinks(db: Database, rows: LinkRows): Promise<LinksPlan
     identityUpdates: [],
     identityDeletes: [],
   }
+  const unknownPart = unknownPartMessages(db)
   const newNames = new Set<string>()
   const issues = rows.issues.clone()
   const reject = (entry: LinkEntry, column: string, message: string) => {
     for (const row of rowsOf(entry)) issues.add(row, column, message)
   }
   const missing = async (entry: LinkEntry, column: 'from_part' | 'to_part', number: string) => {
-    const similar = await catalogue.numberForKey(normalisePartCode(number))
-    reject(
-      entry,
-      column,
-      `No part ${number} in the catalogue${similar ? ` (did you mean ${similar}?)` : ''}; import it in a parts file first.`,
-    )
+    reject(entry, column, await unknownPart(number))
     return undefined
   }
   // Found parts and pairs come back without a promise (see the catalogue's memo): the loop awaits only what it must read.

@@ -1,6 +1,6 @@
-import type { Database } from '../../db/database'
+import { chunks, placeholders, type Database } from '../../db/database'
 import type { FieldChange, ImportIssue } from '../../../shared/schemas/imports'
-import { normalisePartCode } from '../../../shared/schemas/part'
+import { unknownPartMessages } from '../unknown-part'
 import { ChangeList } from '../import-change-list'
 import { stockCells, type StockColumn, type StockUnit } from './stock-cells'
 import type { StockEntry, StockGiven, StockRows } from './stock-rows'
@@ -55,20 +55,16 @@ function fieldChanges(before: StockUnit | null, after: StockUnit): FieldChange[]
  * a file can neither make nor undo one.
  */
 export async function planStock(db: Database, rows: StockRows): Promise<StockPlan> {
-  const partIds = new Map<string, number>()
-  const partNumbers = new Map<number, string>()
-  const partKeys = new Map<string, string>()
-  for (const part of await db.all<{ id: number; partNumber: string; partKey: string }>('SELECT "id", "partNumber", "partKey" FROM part')) {
-    partIds.set(part.partNumber, part.id)
-    partNumbers.set(part.id, part.partNumber)
-    partKeys.set(part.partKey, part.partNumber)
-  }
+  const entries = [...rows.entries()]
+  const { partIds, partNumbers } = await namedParts(db, entries)
+  const unknownPart = unknownPartMessages(db)
   const siteIds = new Map<string, number>()
   const siteNames = new Map<number, string>()
   for (const site of await db.all<{ id: number; name: string }>('SELECT "id", "name" FROM site')) {
     siteIds.set(site.name, site.id)
     siteNames.set(site.id, site.name)
   }
+  const { labelled, unlabelledUnits } = await namedUnits(db, entries, partIds, partNumbers)
   const unitOf = (record: StockRecord): StockUnit => ({
     partNumber: partNumbers.get(record.partId) ?? '',
     site: siteNames.get(record.siteId) ?? '',
@@ -92,13 +88,9 @@ export async function planStock(db: Database, rows: StockRows): Promise<StockPla
     const cells = stockCells(unit)
     return JSON.stringify(present.map((column) => cells[column]))
   }
-  const byLabel = new Map<string, StockRecord>()
+  const byLabel = new Map(labelled.map((record) => [record.label!, record]))
   const unlabelled = new Map<string, StockRecord[]>()
-  for (const record of await db.all<StockRecord>('SELECT * FROM stock_item ORDER BY "id"')) {
-    if (record.label !== null) {
-      byLabel.set(record.label, record)
-      continue
-    }
+  for (const record of unlabelledUnits) {
     const key = signature(unitOf(record))
     const list = unlabelled.get(key)
     if (list) list.push(record)
@@ -110,17 +102,12 @@ export async function planStock(db: Database, rows: StockRows): Promise<StockPla
   const reject = (entry: StockEntry, column: string, message: string) => {
     for (const row of entry.rows) issues.add(row, column, message)
   }
-  for (const entry of rows.entries()) {
+  for (const entry of entries) {
     const { given } = entry
     const partId = partIds.get(given.partNumber)
     const siteId = siteIds.get(given.site)
     if (partId === undefined) {
-      const similar = partKeys.get(normalisePartCode(given.partNumber))
-      reject(
-        entry,
-        'part_number',
-        `No part ${given.partNumber} in the catalogue${similar ? ` (did you mean ${similar}?)` : ''}; import it in a parts file first.`,
-      )
+      reject(entry, 'part_number', await unknownPart(given.partNumber))
     }
     if (siteId === undefined) reject(entry, 'site', `No site named "${given.site}"; add the site first, or correct the name.`)
     const alike = given.label ? undefined : unlabelled.get(signature(fill(given)))
@@ -159,6 +146,56 @@ export async function planStock(db: Database, rows: StockRows): Promise<StockPla
   plan.changes.rejected(issues.count)
   plan.issues = issues.sorted()
   return plan
+}
+
+/** The parts the file names, by number and id, read a chunk at a time. */
+async function namedParts(db: Database, entries: readonly StockEntry[]) {
+  const partIds = new Map<string, number>()
+  const partNumbers = new Map<number, string>()
+  for (const numbers of chunks([...new Set(entries.map((entry) => entry.given.partNumber))])) {
+    const found = await db.all<{ id: number; partNumber: string }>(
+      `SELECT "id", "partNumber" FROM part WHERE "partNumber" IN (${placeholders(numbers.length)})`,
+      numbers,
+    )
+    for (const part of found) {
+      partIds.set(part.partNumber, part.id)
+      partNumbers.set(part.id, part.partNumber)
+    }
+  }
+  return { partIds, partNumbers }
+}
+
+/**
+ * The units a file can mean: those with a label it names, and the unlabelled
+ * units of the parts it names (in id order, so a row takes the oldest alike).
+ * Parts of labelled units the file does not name are added to `partNumbers`.
+ */
+async function namedUnits(db: Database, entries: readonly StockEntry[], partIds: Map<string, number>, partNumbers: Map<number, string>) {
+  const labels = [...new Set(entries.flatMap((entry) => (entry.given.label ? [entry.given.label] : [])))]
+  const labelled: StockRecord[] = []
+  for (const chunk of chunks(labels)) {
+    labelled.push(...(await db.all<StockRecord>(`SELECT * FROM stock_item WHERE "label" IN (${placeholders(chunk.length)})`, chunk)))
+  }
+  const unknownParts = [...new Set(labelled.map((record) => record.partId))].filter((id) => !partNumbers.has(id))
+  for (const ids of chunks(unknownParts)) {
+    for (const part of await db.all<{ id: number; partNumber: string }>(
+      `SELECT "id", "partNumber" FROM part WHERE "id" IN (${placeholders(ids.length)})`,
+      ids,
+    ))
+      partNumbers.set(part.id, part.partNumber)
+  }
+  const unlabelledUnits: StockRecord[] = []
+  for (const ids of chunks([...new Set(partIds.values())])) {
+    unlabelledUnits.push(
+      ...(await db.all<StockRecord>(
+        `SELECT * FROM stock_item WHERE "label" IS NULL AND "partId" IN (${placeholders(ids.length)}) ORDER BY "id"`,
+        ids,
+      )),
+    )
+  }
+  // Chunks each come in id order; the whole list must too.
+  unlabelledUnits.sort((a, b) => a.id - b.id)
+  return { labelled, unlabelledUnits }
 }
 
 function fill(given: StockGiven): StockUnit {

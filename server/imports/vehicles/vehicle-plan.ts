@@ -1,8 +1,8 @@
-import type { Database } from '../../db/database'
+import { chunks, placeholders, type Database } from '../../db/database'
 import { BUILD_SLOTS, SLOT_IDS, type SlotId } from '../../../shared/build-template'
 import { slotColumn } from '../../../shared/import-files'
 import type { FieldChange, ImportIssue } from '../../../shared/schemas/imports'
-import { normalisePartCode } from '../../../shared/schemas/part'
+import { unknownPartMessages } from '../unknown-part'
 import { ChangeList } from '../import-change-list'
 import { describeVehicle, type VehicleEntry, type VehicleKey, type VehicleRows } from './vehicle-rows'
 
@@ -48,29 +48,13 @@ function originalChanges(before: Originals, after: Originals, numberOf: (id: num
  * application.
  */
 export async function planVehicles(db: Database, rows: VehicleRows): Promise<VehiclesPlan> {
-  const parts = new Map<string, { id: number; kind: string }>()
-  const numbers = new Map<number, string>()
-  const keys = new Map<string, string>()
-  for (const part of await db.all<{ id: number; partNumber: string; partKey: string; kind: string }>(
-    'SELECT "id", "partNumber", "partKey", "kind" FROM part',
-  )) {
-    parts.set(part.partNumber, part)
-    numbers.set(part.id, part.partNumber)
-    keys.set(part.partKey, part.partNumber)
-  }
+  const entries = [...rows.entries()]
   const baseKey = (v: Omit<VehicleKey, 'body' | 'market'>) => JSON.stringify([v.yearFrom, v.yearTo, v.make, v.model, v.engineFamily])
-  const stored = new Map<string, VehicleRecord[]>()
-  for (const vehicle of await db.all<VehicleRecord>('SELECT * FROM vehicle_application ORDER BY "id"')) {
-    const list = stored.get(baseKey(vehicle))
-    if (list) list.push(vehicle)
-    else stored.set(baseKey(vehicle), [vehicle])
-  }
-  const storedOriginals = new Map<number, OriginalRecord[]>()
-  for (const original of await db.all<OriginalRecord>('SELECT * FROM vehicle_original ORDER BY "vehicleId", "slot"')) {
-    const list = storedOriginals.get(original.vehicleId)
-    if (list) list.push(original)
-    else storedOriginals.set(original.vehicleId, [original])
-  }
+  const { stored, storedOriginals } = await namedApplications(db, entries, baseKey)
+  const named = entries.flatMap((entry) => [...entry.originals.values()].filter((number): number is string => Boolean(number)))
+  const storedIds = [...storedOriginals.values()].flatMap((list) => list.map((original) => original.partId))
+  const { parts, numbers } = await partsByNumberOrId(db, named, storedIds)
+  const unknownPart = unknownPartMessages(db)
   const plan: VehiclesPlan = { changes: new ChangeList(), issues: [], creates: [], updates: [] }
   const issues = rows.issues.clone()
   const reject = (entry: VehicleEntry, column: string, message: string) => {
@@ -78,7 +62,7 @@ export async function planVehicles(db: Database, rows: VehicleRows): Promise<Veh
   }
   const numberOf = (id: number) => numbers.get(id) ?? `part id ${id}`
 
-  for (const entry of rows.entries()) {
+  for (const entry of entries) {
     const given = new Map<SlotId, number | null>()
     let ok = true
     for (const [slot, partNumber] of entry.originals) {
@@ -89,12 +73,7 @@ export async function planVehicles(db: Database, rows: VehicleRows): Promise<Veh
       const part = parts.get(partNumber)
       const column = slotColumn(slot)
       if (!part) {
-        const similar = keys.get(normalisePartCode(partNumber))
-        reject(
-          entry,
-          column,
-          `No part ${partNumber} in the catalogue${similar ? ` (did you mean ${similar}?)` : ''}; import it in a parts file first.`,
-        )
+        reject(entry, column, await unknownPart(partNumber))
         ok = false
       } else if (part.kind !== slot) {
         reject(entry, column, `${partNumber} is a ${part.kind} part, not a ${SLOT_LABEL.get(slot) ?? slot}.`)
@@ -143,4 +122,62 @@ export async function planVehicles(db: Database, rows: VehicleRows): Promise<Veh
   plan.changes.rejected(issues.count)
   plan.issues = issues.sorted()
   return plan
+}
+
+type Part = { id: number; partNumber: string; kind: string }
+
+/** The parts the file names (by number) and the catalogue's applications hold (by id), a chunk at a time. */
+async function partsByNumberOrId(db: Database, named: readonly string[], ids: readonly number[]) {
+  const parts = new Map<string, Part>()
+  const numbers = new Map<number, string>()
+  const keep = (found: Part[]) => {
+    for (const part of found) {
+      parts.set(part.partNumber, part)
+      numbers.set(part.id, part.partNumber)
+    }
+  }
+  for (const chunk of chunks([...new Set(named)])) {
+    keep(await db.all<Part>(`SELECT "id", "partNumber", "kind" FROM part WHERE "partNumber" IN (${placeholders(chunk.length)})`, chunk))
+  }
+  for (const chunk of chunks([...new Set(ids)].filter((id) => !numbers.has(id)))) {
+    keep(await db.all<Part>(`SELECT "id", "partNumber", "kind" FROM part WHERE "id" IN (${placeholders(chunk.length)})`, chunk))
+  }
+  return { parts, numbers }
+}
+
+/** The applications of the makes and models the file names (through their index), by base key, with their original parts. */
+async function namedApplications(
+  db: Database,
+  entries: readonly VehicleEntry[],
+  baseKey: (v: Omit<VehicleKey, 'body' | 'market'>) => string,
+) {
+  const models = new Map(entries.map(({ key }) => [JSON.stringify([key.make, key.model]), [key.make, key.model] as const]))
+  const vehicles: VehicleRecord[] = []
+  for (const chunk of chunks([...models.values()], 250)) {
+    vehicles.push(
+      ...(await db.all<VehicleRecord>(
+        `SELECT * FROM vehicle_application WHERE ${chunk.map(() => '("make" = ? AND "model" = ?)').join(' OR ')}`,
+        chunk.flat(),
+      )),
+    )
+  }
+  vehicles.sort((a, b) => a.id - b.id)
+  const stored = new Map<string, VehicleRecord[]>()
+  for (const vehicle of vehicles) {
+    const list = stored.get(baseKey(vehicle))
+    if (list) list.push(vehicle)
+    else stored.set(baseKey(vehicle), [vehicle])
+  }
+  const storedOriginals = new Map<number, OriginalRecord[]>()
+  for (const ids of chunks(vehicles.map((vehicle) => vehicle.id))) {
+    for (const original of await db.all<OriginalRecord>(
+      `SELECT * FROM vehicle_original WHERE "vehicleId" IN (${placeholders(ids.length)}) ORDER BY "vehicleId", "slot"`,
+      ids,
+    )) {
+      const list = storedOriginals.get(original.vehicleId)
+      if (list) list.push(original)
+      else storedOriginals.set(original.vehicleId, [original])
+    }
+  }
+  return { stored, storedOriginals }
 }
